@@ -1,0 +1,546 @@
+/**
+ * The sealed-boiler brew simulation (../shared/design/brew-model.md).
+ *
+ * State (SI), integrated by Dormand–Prince 5(4) with dense output and event location:
+ *   y[T]      water (and base metal) temperature, K
+ *   y[ML]     liquid mass in the base, kg
+ *   y[MD]     mass displaced up the funnel so far, kg
+ *   y[TBED]   temperature of the coffee bed (= of the coffee leaving it), K
+ *   y[EIN]    heat put in, J            ┐ bookkeeping for the energy check;
+ *   y[ELOSS]  heat lost to the room, J  │ they do not feed back into the dynamics
+ *   y[HOUT]   enthalpy carried out, J   ┘
+ *   y[VCUP]   volume in the cup, m³ (measured at the base's temperature)
+ *
+ * Laws: p = n_air·R·T/V_g + p_sat(T); Δp = p − p_amb − ρ·g·(z_front − z_l);
+ * Q = Δp / (R_tube + R_bed + R_column) while flowing (no back-flow: the kink at Δp = 0 is
+ * an event that switches the flow off and on); vapour stays saturated, so its mass
+ * m_v = p_sat·V_g·M_w/(R·T) and its rate couple the mass and energy balances, which are
+ * solved together in closed form at each evaluation (see `derivatives`).
+ *
+ * Wet-up, by displaced mass: first the tube above the water fills; then the grounds take
+ * up `retention × dose` (the bed warms as it is wetted); then the upper column fills to the
+ * spout; only what passes after that reaches the cup (first coffee). The bed's full Darcy
+ * resistance applies from the first millilitre (modelling choice: the dry grounds resist
+ * at least as much as the wet bed). The coffee leaves the bed at the bed's temperature:
+ * the grounds start at room temperature and exchange heat perfectly with the water that
+ * passes (a lumped node), so the first coffee is cooler than the water below. The
+ * extraction temperature of each millilitre is the water's as it reaches the grounds (the
+ * SCA's band is defined at the point of contact), recorded in `cupCurve`.
+ *
+ * Tolerances: rtol 1e-6 on every state, atol per state (ATOL below); event times to 1e-9 s.
+ */
+import { integrate, type EventFunction, type DenseStep } from '../numerics/dormand-prince.ts';
+import {
+  MOLAR_GAS_CONSTANT,
+  STANDARD_GRAVITY,
+  WATER_MOLAR_MASS_KG_PER_MOL,
+} from '../physics/constants.ts';
+import { saturationPressurePa, saturationPressureSlopePaPerK } from '../physics/if97-region4.ts';
+import { region1 } from '../physics/if97-region1.ts';
+import { saturatedLiquidDensityKgM3, vaporisationEnthalpyJPerKg } from '../physics/saturation.ts';
+import { waterViscosityPaS } from '../physics/viscosity.ts';
+import { airIsochoricMolarHeatCapacity } from '../physics/air.ts';
+import { metalSpecificHeatJPerKgK } from '../physics/metals.ts';
+import { darcyBedResistance, poiseuilleTubeResistance } from '../physics/flow-resistance.ts';
+import { potGeometry, type PotGeometry } from './geometry.ts';
+import { BrewSetupError, BrewDidNotFinishError } from './errors.ts';
+import { summariseExtraction } from './extraction.ts';
+import type {
+  BrewEvent,
+  BrewEventKind,
+  BrewResult,
+  BrewSetup,
+  SeriesPoint,
+} from './types.ts';
+
+/**
+ * Specific heat of roasted, ground coffee (dry), J/(kg·K). From memory: published values
+ * for roasted coffee lie around 1.6–1.8 kJ/(kg·K); the bed node is a refinement and this
+ * value moves the first coffee's temperature by a degree or two at most.
+ */
+export const GROUND_COFFEE_SPECIFIC_HEAT_J_PER_KG_K = 1700;
+
+/** After the heat is off, the brew counts as finished when the flow falls below this, m³/s. */
+export const TAIL_END_FLOW_M3_PER_S = 0.005e-6;
+
+const T = 0, ML = 1, MD = 2, TBED = 3, EIN = 4, ELOSS = 5, HOUT = 6, VCUP = 7;
+const STATE_SIZE = 8;
+const RTOL = 1e-6;
+const ATOL = Float64Array.from([1e-5, 1e-9, 1e-9, 1e-5, 1e-2, 1e-2, 1e-2, 1e-12]);
+const SERIES_INTERVAL_S = 1;
+/** Where in each step the cup curve and peak pressure are sampled. */
+const SAMPLE_FRACTIONS = [0.5, 1];
+
+/** Everything the derivative needs that does not change during a run. */
+interface Constants {
+  readonly geometry: PotGeometry;
+  readonly setup: BrewSetup;
+  readonly airMoles: number;
+  readonly tubeFullKg: number;
+  readonly bedWetKg: number;
+  readonly firstCoffeeKg: number;
+  readonly retainedKg: number;
+  readonly doseKg: number;
+  readonly initialLevelM: number;
+}
+
+/** Quantities derived from a state, shared by the derivative, events and outputs. */
+interface Algebraic {
+  waterDensity: number;
+  gasVolume: number;
+  liquidVolume: number;
+  pressurePa: number;
+  saturationPa: number;
+  drivingPa: number;
+  resistance: number;
+  enthalpy: number;
+  vapourKg: number;
+  liquid: ReturnType<typeof region1> | null;
+  /** The state these values belong to (events and outputs re-ask for the same state). */
+  key: [number, number, number, number];
+}
+
+interface Mode {
+  heatOn: boolean;
+  flowing: boolean;
+}
+
+/** Run one brew. Throws BrewSetupError for impossible setups; never returns NaN. */
+export function simulateBrew(setup: BrewSetup): BrewResult {
+  const c = prepare(setup);
+  const alg = newAlgebraic();
+  const mode: Mode = { heatOn: (setup.heatOffAtS ?? Infinity) > 0, flowing: true };
+  const timeLimitS = setup.timeLimitS ?? 1800;
+  const collectSeries = setup.collectSeries ?? true;
+
+  const y0 = new Float64Array(STATE_SIZE);
+  y0[T] = setup.startK;
+  y0[ML] = region1(setup.startK, setup.room.ambientPa).densityKgM3 * setup.fillVolumeM3;
+  y0[TBED] = setup.room.ambientK;
+  algebraic(c, y0, alg);
+  const initialVapourKg = alg.vapourKg;
+  const initialEnthalpy = storedEnergy(c, y0, alg);
+
+  const events: BrewEvent[] = [];
+  const series: SeriesPoint[] = [];
+  const cupCurve: { cupM3: number; extractionK: number }[] = [];
+  let peakGaugePa = 0;
+  let nextSeriesT = 0;
+  let steps = 0;
+  let evaluations = 0;
+  const sample = new Float64Array(STATE_SIZE);
+  const dydt = new Float64Array(STATE_SIZE);
+
+  const record = (y: Float64Array): void => {
+    algebraic(c, y, alg);
+    const gauge = alg.pressurePa - setup.room.ambientPa;
+    if (gauge > peakGaugePa) peakGaugePa = gauge;
+    if (y[VCUP]! > 0) {
+      const last = cupCurve[cupCurve.length - 1];
+      if (!last || y[VCUP]! > last.cupM3) cupCurve.push({ cupM3: y[VCUP]!, extractionK: y[T]! });
+    }
+  };
+  const pushSeries = (t: number, y: Float64Array): void => {
+    algebraic(c, y, alg);
+    series.push({
+      tS: t,
+      waterK: y[T]!,
+      coffeeK: y[TBED]!,
+      gaugePa: alg.pressurePa - setup.room.ambientPa,
+      cupM3: y[VCUP]!,
+      flowM3PerS: mode.flowing ? Math.max(0, alg.drivingPa / alg.resistance) : 0,
+      baseLiquidM3: alg.liquidVolume,
+    });
+  };
+  const onStep = (step: DenseStep): void => {
+    // A mid-step sample keeps the cup curve and the peak pressure faithful.
+    for (const f of SAMPLE_FRACTIONS) {
+      const t = step.t0 + f * (step.t1 - step.t0);
+      step.interpolate(t, sample);
+      record(sample);
+    }
+    if (collectSeries) {
+      while (nextSeriesT <= step.t1) {
+        step.interpolate(nextSeriesT, sample);
+        pushSeries(nextSeriesT, sample);
+        nextSeriesT += SERIES_INTERVAL_S;
+      }
+    }
+  };
+  const note = (kind: BrewEventKind, t: number, y: Float64Array): void => {
+    algebraic(c, y, alg);
+    events.push({
+      kind,
+      tS: t,
+      waterK: y[T]!,
+      gaugePa: alg.pressurePa - setup.room.ambientPa,
+      cupM3: y[VCUP]!,
+    });
+  };
+
+  const f = (_t: number, y: Float64Array, out: Float64Array): void => {
+    derivatives(c, mode, y, out, alg);
+  };
+
+  let t = 0;
+  let y = y0;
+  let h: number | undefined;
+  let endReason: BrewResult['endReason'] | null = null;
+  let firstCoffeeK: number | null = null;
+  record(y);
+
+  while (endReason === null) {
+    const active = activeEvents(c, mode, y, alg);
+    const outcome = integrate(f, t, y, timeLimitS, {
+      rtol: RTOL,
+      atol: ATOL,
+      events: active,
+      onStep,
+      ...(h !== undefined ? { initialStep: h } : {}),
+      maxSteps: 200_000,
+    });
+    steps += outcome.steps;
+    evaluations += outcome.evaluations;
+    t = outcome.t;
+    y = Float64Array.from(outcome.y);
+    h = outcome.lastStep > 0 ? outcome.lastStep : undefined;
+
+    if (outcome.kind === 'finished') {
+      note('time-limit', t, y);
+      endReason = 'time-limit';
+      break;
+    }
+    if (outcome.kind !== 'event') {
+      throw new BrewDidNotFinishError(outcome.kind, t);
+    }
+    switch (outcome.eventId as InternalEvent) {
+      case 'reaches-grounds':
+        note('flow-start', t, y);
+        break;
+      case 'bed-wet':
+        break;
+      case 'first-coffee':
+        note('first-coffee', t, y);
+        firstCoffeeK = y[TBED]!;
+        cupCurve.push({ cupM3: 0, extractionK: y[T]! });
+        break;
+      case 'heat-off':
+        mode.heatOn = false;
+        note('heat-off', t, y);
+        break;
+      case 'flow-stops':
+        mode.flowing = false;
+        note('flow-stop', t, y);
+        if (!mode.heatOn) endReason = 'flow-stopped';
+        break;
+      case 'flow-resumes':
+        mode.flowing = true;
+        break;
+      case 'tail-ends':
+        note('flow-stop', t, y);
+        endReason = 'flow-stopped';
+        break;
+      case 'sputter':
+        note('sputter', t, y);
+        endReason = 'sputter';
+        break;
+      case 'valve-opens':
+        note('valve-opens', t, y);
+        endReason = 'valve-opens';
+        break;
+    }
+  }
+  record(y);
+  if (collectSeries && (series.length === 0 || series[series.length - 1]!.tS < t)) pushSeries(t, y);
+
+  algebraic(c, y, alg);
+  derivatives(c, mode, y, dydt, alg);
+  const at = (kind: BrewEventKind): number | null => events.find((e) => e.kind === kind)?.tS ?? null;
+  const cupKg = Math.max(0, y[MD]! - c.firstCoffeeKg);
+  const heldUpKg = Math.min(y[MD]!, c.firstCoffeeKg);
+
+  return {
+    events,
+    flowStartS: at('flow-start'),
+    firstCoffeeS: at('first-coffee'),
+    firstCoffeeK,
+    heatOffS: at('heat-off'),
+    sputterS: at('sputter'),
+    endS: t,
+    endReason,
+    yieldM3: y[VCUP]!,
+    leftInBaseM3: alg.liquidVolume,
+    retainedM3: heldUpKg / alg.waterDensity,
+    doseKg: c.doseKg,
+    extraction: summariseExtraction(cupCurve, setup.bed.targetBandK),
+    cupCurve,
+    peakGaugePa,
+    valveOpens: endReason === 'valve-opens',
+    series,
+    balance: {
+      initialWaterKg: y0[ML]!,
+      finalBaseLiquidKg: y[ML]!,
+      finalVapourKg: alg.vapourKg,
+      initialVapourKg,
+      heldUpKg,
+      cupKg,
+      heatInJ: y[EIN]!,
+      heatLostJ: y[ELOSS]!,
+      storedEnergyChangeJ: storedEnergy(c, y, alg) - initialEnthalpy,
+      enthalpyOutJ: y[HOUT]!,
+    },
+    stats: { steps, rhsEvaluations: evaluations },
+  };
+}
+
+type InternalEvent =
+  | 'reaches-grounds'
+  | 'bed-wet'
+  | 'first-coffee'
+  | 'heat-off'
+  | 'flow-stops'
+  | 'flow-resumes'
+  | 'tail-ends'
+  | 'sputter'
+  | 'valve-opens';
+
+function prepare(setup: BrewSetup): Constants {
+  const { pot, bed, room } = setup;
+  const geometry = potGeometry(pot);
+  const check = (ok: boolean, field: string, problem: string): void => {
+    if (!ok) throw new BrewSetupError(field, problem);
+  };
+  const boilingNow = saturationPressurePa(Math.min(setup.startK, 647)) >= room.ambientPa;
+  check(!boilingNow, 'startK', 'the water would already boil at the room pressure');
+  check(setup.startK >= 274.15, 'startK', 'the water would freeze');
+  check(setup.fillVolumeM3 > geometry.volumeAtTubeEndM3, 'fillVolumeM3', 'the water does not reach the funnel tube');
+  check(setup.fillVolumeM3 < 0.98 * pot.sealedVolumeM3, 'fillVolumeM3', 'no air space is left in the base');
+  check(setup.heatInputW >= 0, 'heatInputW', 'heat input must not be negative');
+  check(bed.permeabilityM2 > 0, 'permeabilityM2', 'permeability must be positive');
+
+  const startDensity = region1(setup.startK, room.ambientPa).densityKgM3;
+  const airVolume = pot.sealedVolumeM3 - setup.fillVolumeM3;
+  const airMoles =
+    ((room.ambientPa - saturationPressurePa(setup.startK)) * airVolume) /
+    (MOLAR_GAS_CONSTANT * setup.startK);
+  const doseKg = geometry.basketVolumeM3 * bed.bulkDensityKgM3;
+  const retainedKg = bed.retentionKgPerKg * doseKg;
+  const initialLevelM = setup.fillVolumeM3 / geometry.baseAreaM2;
+  const tubeFullKg = startDensity * geometry.tubeAreaM2 * (geometry.baseHeightM - initialLevelM);
+  const bedWetKg = tubeFullKg + retainedKg;
+  const firstCoffeeKg = bedWetKg + startDensity * geometry.tubeAreaM2 * geometry.columnLengthM;
+  return {
+    geometry,
+    setup,
+    airMoles,
+    tubeFullKg,
+    bedWetKg,
+    firstCoffeeKg,
+    retainedKg,
+    doseKg,
+    initialLevelM,
+  };
+}
+
+function newAlgebraic(): Algebraic {
+  return {
+    waterDensity: 0,
+    gasVolume: 0,
+    liquidVolume: 0,
+    pressurePa: 0,
+    saturationPa: 0,
+    drivingPa: 0,
+    resistance: 0,
+    enthalpy: 0,
+    vapourKg: 0,
+    liquid: null,
+    key: [NaN, NaN, NaN, NaN],
+  };
+}
+
+/** Height the liquid front has reached, from the mass displaced so far. */
+function frontHeightM(c: Constants, displacedKg: number, density: number): number {
+  const g = c.geometry;
+  if (displacedKg < c.tubeFullKg) {
+    return c.initialLevelM + displacedKg / (density * g.tubeAreaM2);
+  }
+  if (displacedKg < c.bedWetKg) {
+    return g.baseHeightM + (c.setup.pot.basketDepthM * (displacedKg - c.tubeFullKg)) / c.retainedKg;
+  }
+  if (displacedKg < c.firstCoffeeKg) {
+    return g.bedTopM + (displacedKg - c.bedWetKg) / (density * g.tubeAreaM2);
+  }
+  return Math.max(g.bedTopM, c.setup.pot.spoutHeightM);
+}
+
+/** Fills `a` with what the state implies (pressure, driving pressure, resistance, ...). */
+function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<typeof region1> {
+  const { setup, geometry } = c;
+  const temperature = y[T]!;
+  const key = a.key;
+  if (a.liquid && key[0] === temperature && key[1] === y[ML] && key[2] === y[MD] && key[3] === y[TBED]) {
+    return a.liquid;
+  }
+  const pSat = saturationPressurePa(temperature);
+  // ρ depends on p only weakly (4.5e-10 /Pa): one estimate of p with a nominal density is
+  // enough to pick the liquid state, and keeps the state → properties map a pure function.
+  const roughGas = setup.pot.sealedVolumeM3 - y[ML]! / 958;
+  const roughP = pSat + (c.airMoles * MOLAR_GAS_CONSTANT * temperature) / roughGas;
+  const liquid = region1(temperature, roughP);
+  const rho = liquid.densityKgM3;
+  const liquidVolume = y[ML]! / rho;
+  const gasVolume = setup.pot.sealedVolumeM3 - liquidVolume;
+  const pressure = pSat + (c.airMoles * MOLAR_GAS_CONSTANT * temperature) / gasVolume;
+  const level = liquidVolume / geometry.baseAreaM2;
+  const head = rho * STANDARD_GRAVITY * (frontHeightM(c, y[MD]!, rho) - level);
+  const muTube = waterViscosityPaS(temperature, rho);
+  const bedK = y[TBED]!;
+  const muBed = waterViscosityPaS(bedK, saturatedLiquidDensityKgM3(bedK));
+  const columnFilled = Math.min(1, Math.max(0, (y[MD]! - c.bedWetKg) / (c.firstCoffeeKg - c.bedWetKg || 1)));
+  const resistance =
+    poiseuilleTubeResistance(muTube, geometry.tubeLengthM, setup.pot.tubeInnerDiameterM) +
+    darcyBedResistance(muBed, setup.pot.basketDepthM, setup.bed.permeabilityM2, geometry.bedAreaM2) +
+    poiseuilleTubeResistance(muBed, geometry.columnLengthM * columnFilled, setup.pot.tubeInnerDiameterM);
+  a.waterDensity = rho;
+  a.liquidVolume = liquidVolume;
+  a.gasVolume = gasVolume;
+  a.pressurePa = pressure;
+  a.saturationPa = pSat;
+  a.drivingPa = pressure - setup.room.ambientPa - head;
+  a.resistance = resistance;
+  a.enthalpy = liquid.enthalpyJPerKg;
+  a.vapourKg = (pSat * gasVolume * WATER_MOLAR_MASS_KG_PER_MOL) / (MOLAR_GAS_CONSTANT * temperature);
+  a.liquid = liquid;
+  key[0] = temperature;
+  key[1] = y[ML]!;
+  key[2] = y[MD]!;
+  key[3] = y[TBED]!;
+  return liquid;
+}
+
+/**
+ * dy/dt. Mass and energy are coupled through the vapour: with m_v = p_sat(T)·V_g·M/(R·T),
+ *   ṁ_v = a·Ṫ + b·V̇_g,  a = ∂m_v/∂T|V_g = V_g·M/R·(p_sat′/T − p_sat/T²),  b = ρ_v,
+ *   V̇_g = −ṁ_l/ρ − κ·Ṫ,  κ = m_l·α_v/ρ (thermal expansion of the liquid),
+ *   ṁ_l = −ρQ − ṁ_v,
+ *   C·Ṫ = P − UA·(T − T_amb) − h_fg·ṁ_v,  C = m_l·c_p + m_metal·c_metal + n_air·c_v.
+ * With ε = b/ρ these solve to
+ *   Ṫ = (P − L − h_fg·ε·ρQ/(1−ε)) / (C + h_fg·(a − bκ)/(1−ε)),
+ *   ṁ_v = (ε·ρQ + (a − bκ)·Ṫ)/(1−ε).
+ */
+function derivatives(c: Constants, mode: Mode, y: Float64Array, out: Float64Array, a: Algebraic): void {
+  const { setup } = c;
+  const liquid = algebraic(c, y, a);
+  const temperature = y[T]!;
+  const rho = a.waterDensity;
+  const q = mode.flowing ? Math.max(0, a.drivingPa / a.resistance) : 0;
+  const pSatSlope = saturationPressureSlopePaPerK(temperature);
+  const massPerMoleOverR = WATER_MOLAR_MASS_KG_PER_MOL / MOLAR_GAS_CONSTANT;
+  const dVapourDT =
+    a.gasVolume * massPerMoleOverR * (pSatSlope / temperature - a.saturationPa / (temperature * temperature));
+  const vapourDensity = (a.saturationPa * massPerMoleOverR) / temperature;
+  const kappa = (y[ML]! * liquid.expansivityPerK) / rho;
+  const eps = vapourDensity / rho;
+  const hfg = vaporisationEnthalpyJPerKg(temperature);
+  const heatCapacity =
+    y[ML]! * liquid.isobaricHeatCapacityJPerKgK +
+    setup.pot.baseMassKg * metalSpecificHeatJPerKgK(setup.pot.baseMaterial, temperature) +
+    c.airMoles * airIsochoricMolarHeatCapacity(temperature);
+  const power = mode.heatOn ? setup.heatInputW : 0;
+  const loss = setup.pot.heatLossWPerK * (temperature - setup.room.ambientK);
+  const massFlow = rho * q;
+  const coupling = dVapourDT - vapourDensity * kappa;
+  const dT =
+    (power - loss - (hfg * eps * massFlow) / (1 - eps)) / (heatCapacity + (hfg * coupling) / (1 - eps));
+  const dVapour = (eps * massFlow + coupling * dT) / (1 - eps);
+
+  out[T] = dT;
+  out[ML] = -massFlow - dVapour;
+  out[MD] = massFlow;
+  const displaced = y[MD]!;
+  if (displaced > c.tubeFullKg && massFlow > 0) {
+    const wettedKg = Math.min(displaced - c.tubeFullKg, c.retainedKg);
+    const bedCapacity =
+      c.doseKg * GROUND_COFFEE_SPECIFIC_HEAT_J_PER_KG_K + wettedKg * liquid.isobaricHeatCapacityJPerKgK;
+    out[TBED] = (massFlow * liquid.isobaricHeatCapacityJPerKgK * (temperature - y[TBED]!)) / bedCapacity;
+  } else {
+    out[TBED] = 0;
+  }
+  out[EIN] = power;
+  out[ELOSS] = loss;
+  out[HOUT] = massFlow * a.enthalpy;
+  out[VCUP] = displaced >= c.firstCoffeeKg ? q : 0;
+}
+
+/**
+ * Energy stored in the base relative to 0 K-ish references (only differences are used):
+ * liquid and vapour enthalpy (IF97 h of the liquid, plus h_fg for the vapour), the metal
+ * and the air (trapezoid in T for their slowly varying heat capacities).
+ */
+function storedEnergy(c: Constants, y: Float64Array, a: Algebraic): number {
+  const { setup } = c;
+  const temperature = y[T]!;
+  const t0 = setup.startK;
+  const metal =
+    (setup.pot.baseMassKg *
+      (metalSpecificHeatJPerKgK(setup.pot.baseMaterial, temperature) +
+        metalSpecificHeatJPerKgK(setup.pot.baseMaterial, t0)) *
+      (temperature - t0)) /
+    2;
+  const air =
+    (c.airMoles *
+      (airIsochoricMolarHeatCapacity(temperature) + airIsochoricMolarHeatCapacity(t0)) *
+      (temperature - t0)) /
+    2;
+  const vapour = a.vapourKg * (a.enthalpy + vaporisationEnthalpyJPerKg(temperature));
+  return y[ML]! * a.enthalpy + vapour + metal + air;
+}
+
+function activeEvents(c: Constants, mode: Mode, y: Float64Array, a: Algebraic): EventFunction[] {
+  const { setup, geometry } = c;
+  const list: EventFunction[] = [];
+  const displaced = y[MD]!;
+  const threshold = (id: InternalEvent, kg: number): void => {
+    if (displaced < kg) list.push({ id, direction: 1, value: (_t, s) => s[MD]! - kg });
+  };
+  threshold('reaches-grounds', c.tubeFullKg);
+  threshold('bed-wet', c.bedWetKg);
+  threshold('first-coffee', c.firstCoffeeKg);
+  if (mode.heatOn && setup.heatOffAtS !== undefined) {
+    const off = setup.heatOffAtS;
+    list.push({ id: 'heat-off', direction: 1, value: (t) => t - off });
+  }
+  const driving = (s: Float64Array): number => {
+    algebraic(c, s, a);
+    return a.drivingPa;
+  };
+  if (mode.flowing) {
+    list.push({ id: 'flow-stops', direction: -1, value: (_t, s) => driving(s) });
+    if (!mode.heatOn) {
+      list.push({
+        id: 'tail-ends',
+        direction: -1,
+        value: (_t, s) => driving(s) / a.resistance - TAIL_END_FLOW_M3_PER_S,
+      });
+    }
+  } else {
+    list.push({ id: 'flow-resumes', direction: 1, value: (_t, s) => driving(s) });
+  }
+  list.push({
+    id: 'sputter',
+    direction: -1,
+    value: (_t, s) => {
+      algebraic(c, s, a);
+      return a.liquidVolume - geometry.volumeAtTubeEndM3;
+    },
+  });
+  list.push({
+    id: 'valve-opens',
+    direction: 1,
+    value: (_t, s) => {
+      algebraic(c, s, a);
+      return a.pressurePa - setup.room.ambientPa - setup.pot.valveOpeningGaugePa;
+    },
+  });
+  return list;
+}

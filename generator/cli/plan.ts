@@ -1,0 +1,116 @@
+/** `stovecard plan`: the recipe a card would print for one pot × coffee × stove. */
+import { loadCoffeeFile, loadPotFile, loadStoveFile } from '../content/index.ts';
+import { planCard } from '../planning/plan.ts';
+import { DEFAULT_ROOM } from '../planning/setup.ts';
+import type { CardPlan } from '../planning/types.ts';
+import { cliWords } from '../words/cli.ts';
+import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
+import { UsageError } from './errors.ts';
+import { numberOption, parseOptions, requiredString } from './options.ts';
+
+export async function run(argv: string[]): Promise<number> {
+  const { values, help } = parseOptions(argv, {
+    pot: { type: 'string' },
+    coffee: { type: 'string' },
+    stove: { type: 'string' },
+    'ambient-c': { type: 'string' },
+    'altitude-m': { type: 'string' },
+    'presets-c': { type: 'string' },
+    'fill-ml': { type: 'string' },
+    json: { type: 'boolean' },
+  });
+  if (help) {
+    process.stdout.write(cliWords.planHelp);
+    return 0;
+  }
+  const [pot, coffee, stove] = await Promise.all([
+    loadPotFile(requiredString(values, 'pot', cliWords.planHelp)),
+    loadCoffeeFile(requiredString(values, 'coffee', cliWords.planHelp)),
+    loadStoveFile(requiredString(values, 'stove', cliWords.planHelp)),
+  ]);
+  const ambientC = numberOption(values, 'ambient-c');
+  const presets = typeof values['presets-c'] === 'string' ? parsePresets(values['presets-c']) : undefined;
+  const fillMl = numberOption(values, 'fill-ml');
+  const plan = planCard({
+    pot,
+    coffee,
+    stove,
+    room: {
+      ambientK: ambientC !== undefined ? fromCelsius(ambientC) : DEFAULT_ROOM.ambientK,
+      altitudeM: numberOption(values, 'altitude-m') ?? DEFAULT_ROOM.altitudeM,
+    },
+    ...(presets ? { kettlePresetsK: presets.map(fromCelsius) } : {}),
+    ...(fillMl !== undefined ? { fillM3: fromMl(fillMl) } : {}),
+  });
+  process.stdout.write(values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan));
+  return plan.refused ? 3 : 0;
+}
+
+function parsePresets(raw: string): number[] {
+  return raw.split(',').map((part) => {
+    const value = Number(part.trim());
+    if (part.trim() === '' || !Number.isFinite(value)) throw new UsageError(cliWords.badNumber('--presets-c', part));
+    return value;
+  });
+}
+
+const times = (r: { lowS: number; midS: number; highS: number }) => ({
+  low: round(r.lowS),
+  mid: round(r.midS),
+  high: round(r.highS),
+});
+
+export function planJson(plan: CardPlan) {
+  const context = {
+    pot: plan.potId,
+    coffee: plan.coffeeId,
+    stove: plan.stoveId,
+    boilingC: round(toCelsius(plan.boilingK), 1),
+    warnings: plan.warnings,
+  };
+  if (plan.refused) return { ...context, refused: { reason: plan.refused.reason, suggestion: plan.refused.suggestion, code: plan.refused.code } };
+  return {
+    ...context,
+    fillMl: round(toMl(plan.fillM3)),
+    fillG: round(plan.fillKg * 1000),
+    fillHeightMm: round(toMm(plan.fillHeightM), 1),
+    belowValveMm: round(toMm(plan.belowValveM), 1),
+    doseG: round(plan.doseKg * 1000, 1),
+    startC: round(toCelsius(plan.startK)),
+    kettlePresetC: plan.kettlePresetK === null ? null : round(toCelsius(plan.kettlePresetK)),
+    level: plan.levelLabel,
+    firstCoffeeS: times(plan.firstCoffeeS),
+    offHeatS: times(plan.offHeatS),
+    yieldMl: round(toMl(plan.yieldM3)),
+    extraction: {
+      meanC: round(toCelsius(plan.extraction.meanK), 1),
+      p10C: round(toCelsius(plan.extraction.p10K), 1),
+      p90C: round(toCelsius(plan.extraction.p90K), 1),
+      inBandShare: round(plan.extraction.inBandShare, 3),
+    },
+    coldStart: {
+      meanC: round(toCelsius(plan.coldStart.meanK), 1),
+      inBandShare: round(plan.coldStart.inBandShare, 3),
+      firstCoffeeS: plan.coldStart.firstCoffeeS === null ? null : round(plan.coldStart.firstCoffeeS),
+    },
+    peakGaugeBar: round(toBar(plan.peakGaugePa), 3),
+    simulations: plan.simulations,
+    refused: null,
+  };
+}
+
+function planSummary(plan: CardPlan): string {
+  const j = planJson(plan);
+  if (plan.refused) return `REFUSED: ${plan.refused.reason}\nFix: ${plan.refused.suggestion}\n`;
+  const p = j as Exclude<ReturnType<typeof planJson>, { refused: object }>;
+  if (!('fillMl' in p)) return '';
+  return [
+    `water     ${p.fillMl} mL (${p.fillHeightMm} mm above the floor, ${p.belowValveMm} mm below the valve) at ${p.startC} °C`,
+    `coffee    ${p.doseG} g, level basket, do not tamp`,
+    `heat      ${p.level}`,
+    `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
+    `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %)`,
+    `pressure  peak ${p.peakGaugeBar} bar gauge`,
+    ...p.warnings.map((w) => `warning   ${w}`),
+  ].join('\n') + '\n';
+}

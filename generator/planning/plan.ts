@@ -1,0 +1,322 @@
+/**
+ * The planner: for one pot × coffee × stove in one room, search fill, start temperature,
+ * stove level and the moment to take the pot off the heat; each candidate is one brew
+ * simulation.
+ *
+ * Objective: the largest share of the cup extracted inside the coffee's target band, with
+ * the delivery phase (first coffee → off the heat) inside the coffee's delivery window.
+ * Shares within TIE_SHARE of each other are a tie, won by the gentler level and then the
+ * cooler start (easier and safer to handle).
+ * Hard limits (a refusal, never a recipe): the fill stays below the valve after expansion;
+ * the peak gauge pressure stays at or below half the valve's opening pressure; an
+ * induction stove needs a magnetic base. A plan whose tail would still reach the sputter
+ * after the heat is off is not offered (the sputter's steam-driven last drops are what
+ * the trade takes the pot off the heat to avoid: common practice, no source).
+ */
+import { simulateBrew } from '../brew/simulate.ts';
+import { BrewSetupError } from '../brew/errors.ts';
+import type { BrewResult } from '../brew/types.ts';
+import type { CoffeeEntry, PotEntry, StoveEntry } from '../content/types.ts';
+import { saturationTemperatureK } from '../physics/if97-region4.ts';
+import { CELSIUS_OFFSET_K } from '../physics/constants.ts';
+import { maxSafeFill, fillHeights, VALVE_MARGIN_M } from './fill.ts';
+import { brewSetup, roomModel, type Room } from './setup.ts';
+import { modelRangeWarnings } from './model-range.ts';
+import { planWords } from '../words/plan.ts';
+import type { AcceptedPlan, CardPlan, PlanContext, Refusal, TimeRange } from './types.ts';
+
+export const PRESSURE_LIMIT_SHARE_OF_VALVE = 0.5;
+export const TIE_SHARE = 0.02;
+/** Highest start temperature offered (°C → K), and the gap kept below boiling. */
+export const HOTTEST_START_K = 90 + CELSIUS_OFFSET_K;
+export const BELOW_BOILING_K = 2;
+const START_STEP_K = 5;
+/** Off-heat no later than this before the sputter the pot would reach with the heat on, s. */
+const SPUTTER_LEAD_S = 5;
+/** Candidates refined with an off-heat search, best first by the heat-on score. */
+const REFINE_COUNT = 4;
+/** Shares of the cup closer than this are equal for the off-heat search. */
+const SHARE_RESOLUTION = 0.005;
+/** The off-heat time is searched to this, s (a card prints whole seconds in ranges). */
+const OFF_HEAT_RESOLUTION_S = 4;
+
+export interface PlanRequest {
+  readonly pot: PotEntry;
+  readonly coffee: CoffeeEntry;
+  readonly stove: StoveEntry;
+  readonly room: Room;
+  /** Kettle presets, K; when given, the start is room temperature or one of these. */
+  readonly kettlePresetsK?: readonly number[];
+  /** A smaller cup than the pot's safe maximum, m³ (refused when above the safe fill). */
+  readonly fillM3?: number;
+}
+
+interface Candidate {
+  readonly startK: number;
+  readonly levelIndex: number;
+  readonly heatOn: BrewResult;
+}
+
+interface Scored {
+  readonly startK: number;
+  readonly levelIndex: number;
+  readonly offS: number;
+  readonly result: BrewResult;
+  readonly share: number;
+}
+
+export function planCard(request: PlanRequest): CardPlan {
+  const { pot, coffee, stove } = request;
+  const room = roomModel(request.room);
+  const context: PlanContext = {
+    potId: pot.id,
+    coffeeId: coffee.id,
+    stoveId: stove.id,
+    ambientK: room.ambientK,
+    ambientPa: room.ambientPa,
+    altitudeM: request.room.altitudeM,
+    boilingK: saturationTemperatureK(room.ambientPa),
+    valveOpeningGaugePa: pot.model.valveOpeningGaugePa,
+    warnings: modelRangeWarnings(request, null),
+  };
+  const refuse = (refusal: Refusal): CardPlan => ({ ...context, refused: refusal });
+
+  if (stove.stoveKind === 'induction' && !pot.inductionReady) {
+    return refuse(planWords.inductionNeedsMagneticBase(pot.name));
+  }
+  const starts = startCandidates(request, context.boilingK);
+  const coolestFill = maxSafeFill(pot.model, starts[starts.length - 1]!, room.ambientPa).maxFillM3;
+  if (request.fillM3 !== undefined && request.fillM3 > coolestFill) {
+    const limit = maxSafeFill(pot.model, room.ambientK, room.ambientPa);
+    return refuse(planWords.fillAboveValve(request.fillM3, limit.maxFillM3, VALVE_MARGIN_M));
+  }
+
+  let simulations = 0;
+  const run = (startK: number, levelIndex: number, offS?: number, series = false, scale = NOMINAL) => {
+    simulations++;
+    const fill = request.fillM3 ?? maxSafeFill(pot.model, startK, room.ambientPa).maxFillM3;
+    const bed = { ...coffee.bed, permeabilityM2: coffee.bed.permeabilityM2 * scale.permeability };
+    return simulateBrew(
+      brewSetup(pot.model, bed, room, {
+        fillVolumeM3: fill,
+        startK,
+        heatInputW: stove.levels[levelIndex]!.heatToPotW * scale.heat,
+        ...(offS !== undefined ? { heatOffAtS: offS } : {}),
+        collectSeries: series,
+      }),
+    );
+  };
+
+  const limitPa = PRESSURE_LIMIT_SHARE_OF_VALVE * pot.model.valveOpeningGaugePa;
+  const candidates: Candidate[] = [];
+  let lowestPeak = Infinity;
+  for (const startK of starts) {
+    for (let levelIndex = 0; levelIndex < stove.levels.length; levelIndex++) {
+      let heatOn: BrewResult;
+      try {
+        heatOn = run(startK, levelIndex);
+      } catch (error) {
+        if (error instanceof BrewSetupError) continue;
+        throw error;
+      }
+      lowestPeak = Math.min(lowestPeak, heatOn.peakGaugePa);
+      if (heatOn.peakGaugePa > limitPa || heatOn.firstCoffeeS === null) continue;
+      candidates.push({ startK, levelIndex, heatOn });
+    }
+  }
+  if (candidates.length === 0) {
+    if (lowestPeak > limitPa) {
+      return refuse(planWords.pressureNearValve(lowestPeak, pot.model.valveOpeningGaugePa, coffee.grind));
+    }
+    return refuse(planWords.noDelivery());
+  }
+
+  const [windowLow, windowHigh] = coffee.deliveryWindowS;
+  const offHeatWindow = (c: Candidate): [number, number] => {
+    const first = c.heatOn.firstCoffeeS!;
+    const latest = Math.min(first + windowHigh, (c.heatOn.sputterS ?? Infinity) - SPUTTER_LEAD_S);
+    return [first + windowLow, latest];
+  };
+  const feasible = candidates.filter((c) => {
+    const [earliest, latest] = offHeatWindow(c);
+    return latest >= earliest;
+  });
+  if (feasible.length === 0) {
+    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+  }
+  const refined: Scored[] = [];
+  const byHeatOnScore = [...feasible].sort((a, b) => heatOnScore(b) - heatOnScore(a));
+  for (const candidate of byHeatOnScore.slice(0, REFINE_COUNT)) {
+    const [earliest, latest] = offHeatWindow(candidate);
+    const best = bestOffHeat(earliest, latest, (offS) => run(candidate.startK, candidate.levelIndex, offS));
+    if (best.share >= 0 && best.result.peakGaugePa <= limitPa && best.result.extraction) {
+      refined.push({ startK: candidate.startK, levelIndex: candidate.levelIndex, ...best });
+    }
+  }
+  if (refined.length === 0) {
+    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+  }
+
+  const chosen = refined.reduce((best, next) => (better(next, best) ? next : best));
+  const brew = run(chosen.startK, chosen.levelIndex, chosen.offS, true);
+  const coldBrew = run(room.ambientK, chosen.levelIndex, undefined, true);
+  const offCupM3 = cupAt(brew, chosen.offS);
+  const corners = SENSITIVITY.map((scale) => run(chosen.startK, chosen.levelIndex, undefined, true, scale));
+  const firstTimes = [brew.firstCoffeeS!, ...corners.map((r) => r.firstCoffeeS ?? brew.firstCoffeeS!)];
+  const offTimes = [chosen.offS, ...corners.map((r) => timeAtCup(r, offCupM3) ?? chosen.offS)];
+  const fill = request.fillM3 ?? maxSafeFill(pot.model, chosen.startK, room.ambientPa).maxFillM3;
+  const heights = fillHeights(pot.model, fill);
+  const extraction = brew.extraction!;
+  const plan: AcceptedPlan = {
+    ...context,
+    warnings: modelRangeWarnings(request, chosen.levelIndex),
+    refused: null,
+    fillM3: fill,
+    fillKg: brew.balance.initialWaterKg,
+    fillHeightM: heights.heightM,
+    belowValveM: heights.belowValveM,
+    expansionMarginM: VALVE_MARGIN_M,
+    doseKg: brew.doseKg,
+    startK: chosen.startK,
+    kettlePresetK: chosen.startK > room.ambientK + 0.5 ? chosen.startK : null,
+    levelIndex: chosen.levelIndex,
+    levelLabel: stove.levels[chosen.levelIndex]!.label,
+    heatToPotW: stove.levels[chosen.levelIndex]!.heatToPotW,
+    firstCoffeeS: range(brew.firstCoffeeS!, firstTimes),
+    offHeatS: range(chosen.offS, offTimes),
+    yieldM3: brew.yieldM3,
+    extraction: {
+      meanK: extraction.meanK,
+      p10K: extraction.p10K,
+      p50K: extraction.p50K,
+      p90K: extraction.p90K,
+      inBandShare: extraction.inBandShare,
+    },
+    targetBandK: coffee.bed.targetBandK,
+    coldStart: {
+      meanK: coldBrew.extraction?.meanK ?? NaN,
+      inBandShare: coldBrew.extraction?.inBandShare ?? 0,
+      firstCoffeeS: coldBrew.firstCoffeeS,
+    },
+    peakGaugePa: Math.max(brew.peakGaugePa, ...corners.map((r) => r.peakGaugePa)),
+    brew,
+    coldBrew,
+    simulations,
+  };
+  return plan;
+}
+
+const NOMINAL = { permeability: 1, heat: 1 };
+/** The model's sensitivity corners: permeability ±30 %, heat ±10 %. */
+const SENSITIVITY = [
+  { permeability: 0.7, heat: 0.9 },
+  { permeability: 0.7, heat: 1.1 },
+  { permeability: 1.3, heat: 0.9 },
+  { permeability: 1.3, heat: 1.1 },
+];
+
+/** Room temperature, then the kettle presets or 5 K steps, up to 90 °C and 2 K below boiling. */
+export function startCandidates(request: PlanRequest, boilingK: number): number[] {
+  const ceiling = Math.min(HOTTEST_START_K, boilingK - BELOW_BOILING_K);
+  const ambient = request.room.ambientK;
+  const steps: number[] = [];
+  if (request.kettlePresetsK && request.kettlePresetsK.length > 0) {
+    steps.push(...request.kettlePresetsK);
+  } else {
+    const firstStepC = Math.floor((ambient - CELSIUS_OFFSET_K) / START_STEP_K + 1) * START_STEP_K;
+    for (let c = firstStepC; c + CELSIUS_OFFSET_K <= ceiling + 1e-9; c += START_STEP_K) {
+      steps.push(c + CELSIUS_OFFSET_K);
+    }
+  }
+  const hotter = steps.filter((k) => k > ambient + 0.5 && k <= ceiling + 1e-9).sort((a, b) => a - b);
+  return [ambient, ...hotter];
+}
+
+function heatOnScore(c: Candidate): number {
+  return c.heatOn.extraction?.inBandShare ?? 0;
+}
+
+/**
+ * Golden-section search of the off-heat time for the best share in band (unimodal in
+ * practice). Shares within SHARE_RESOLUTION count as equal and the larger cup wins, so a
+ * card never cuts the brew short for no gain.
+ */
+function bestOffHeat(
+  earliest: number,
+  latest: number,
+  simulate: (offS: number) => BrewResult,
+): { offS: number; result: BrewResult; share: number } {
+  // A run that still reaches the sputter after the heat is off scores below any other:
+  // the sputter's last, steam-driven drops are what the card tells people to avoid.
+  const score = (offS: number) => {
+    const result = simulate(offS);
+    const share = result.endReason === 'sputter' ? -1 : (result.extraction?.inBandShare ?? 0);
+    return { offS, result, share };
+  };
+  const wins = (a: ReturnType<typeof score>, b: ReturnType<typeof score>): boolean =>
+    Math.abs(a.share - b.share) > SHARE_RESOLUTION ? a.share > b.share : a.result.yieldM3 > b.result.yieldM3;
+  if (latest - earliest < 2) return score(latest);
+  const phi = (Math.sqrt(5) - 1) / 2;
+  let a = earliest, b = latest;
+  let x1 = score(b - phi * (b - a));
+  let x2 = score(a + phi * (b - a));
+  let best = wins(x1, x2) ? x1 : x2;
+  while (b - a > OFF_HEAT_RESOLUTION_S) {
+    if (wins(x1, x2)) {
+      b = x2.offS;
+      x2 = x1;
+      x1 = score(b - phi * (b - a));
+      if (wins(x1, best)) best = x1;
+    } else {
+      a = x1.offS;
+      x1 = x2;
+      x2 = score(a + phi * (b - a));
+      if (wins(x2, best)) best = x2;
+    }
+  }
+  const end = score(latest);
+  return wins(end, best) ? end : best;
+}
+
+function better(a: Scored, b: Scored): boolean {
+  if (Math.abs(a.share - b.share) > TIE_SHARE) return a.share > b.share;
+  if (a.levelIndex !== b.levelIndex) return a.levelIndex < b.levelIndex;
+  if (a.startK !== b.startK) return a.startK < b.startK;
+  return a.share > b.share;
+}
+
+/** True when, even on the gentlest candidates, the delivery finishes before the window opens. */
+function tooFast(candidates: readonly Candidate[], windowLowS: number): boolean {
+  return candidates.every(
+    (c) => (c.heatOn.sputterS ?? Infinity) - c.heatOn.firstCoffeeS! < windowLowS + SPUTTER_LEAD_S,
+  );
+}
+
+function range(mid: number, values: readonly number[]): TimeRange {
+  return { lowS: Math.min(...values), midS: mid, highS: Math.max(...values) };
+}
+
+/** Cup volume at time t, from the run's 1 s series. */
+function cupAt(result: BrewResult, tS: number): number {
+  const s = result.series;
+  for (let i = 1; i < s.length; i++) {
+    if (s[i]!.tS >= tS) {
+      const a = s[i - 1]!, b = s[i]!;
+      return a.cupM3 + ((b.cupM3 - a.cupM3) * (tS - a.tS)) / (b.tS - a.tS || 1);
+    }
+  }
+  return s[s.length - 1]?.cupM3 ?? 0;
+}
+
+/** First time the run's cup holds `cupM3`, or null when it never does. */
+function timeAtCup(result: BrewResult, cupM3: number): number | null {
+  const s = result.series;
+  for (let i = 1; i < s.length; i++) {
+    if (s[i]!.cupM3 >= cupM3) {
+      const a = s[i - 1]!, b = s[i]!;
+      return a.tS + ((b.tS - a.tS) * (cupM3 - a.cupM3)) / (b.cupM3 - a.cupM3 || 1);
+    }
+  }
+  return null;
+}
+
