@@ -1,0 +1,166 @@
+/**
+ * The whole content folder as one Catalogue:
+ *
+ *   site.yaml, pots/, coffees/, stoves/, logs/ ─ list *.yaml / *.yml, sorted by name
+ *     ─▶ pots, coffees, stoves: read + schema + own checks + SI        (in parallel)
+ *     ─▶ logs and site.yaml: the same, plus the ids and levels they name
+ *     ─▶ Catalogue, or one ContentErrors listing every issue of every file
+ */
+import { readdir } from 'node:fs/promises';
+import { extname, join } from 'node:path';
+import { contentWords } from '../words/content.ts';
+import { buildCoffee } from './coffee.ts';
+import { idOfFile, loadEntry, type Checked, type ValidFile } from './entry-file.ts';
+import { ContentErrors, ContentIssue, wholeFile } from './issues.ts';
+import { buildLog, type LogYaml } from './log.ts';
+import { buildPot } from './pot.ts';
+import type { KnownIds } from './references.ts';
+import { ID_PATTERN, idLike } from './ids.ts';
+import { buildSite, type SiteYaml } from './site.ts';
+import { buildStove } from './stove.ts';
+import type { Catalogue, EntryBase, SiteEntry } from './types.ts';
+
+const FOLDERS = { pot: 'pots', coffee: 'coffees', stove: 'stoves', log: 'logs' } as const;
+type FolderKind = keyof typeof FOLDERS;
+
+const SITE_FILE = 'site.yaml';
+
+interface ListedFile {
+  /** Ids of a folder's files are sorted: the planner's card order follows them. */
+  readonly id: string;
+  readonly path: string;
+  /** Relative to the content folder, with forward slashes: "pots/three-cup.yaml". */
+  readonly file: string;
+}
+
+interface Listing {
+  readonly files: readonly ListedFile[];
+  readonly issues: readonly ContentIssue[];
+}
+
+function unreadable(file: string, error: unknown): ContentIssue {
+  const reason = (error as NodeJS.ErrnoException).code ?? String(error);
+  return new ContentIssue('unreadable', wholeFile(file), contentWords.unreadable(reason));
+}
+
+const compare = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
+
+/** The entry files of one folder (none when it does not exist), and problems with their names. */
+async function listFolder(contentDir: string, kind: FolderKind): Promise<Listing> {
+  const folder = FOLDERS[kind];
+  let names: string[];
+  try {
+    const entries = await readdir(join(contentDir, folder), { withFileTypes: true });
+    names = entries.filter((entry) => entry.isFile()).map((entry) => entry.name);
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return { files: [], issues: [] };
+    return { files: [], issues: [unreadable(folder, error)] };
+  }
+  const files: ListedFile[] = [];
+  const issues: ContentIssue[] = [];
+  const fileOfId = new Map<string, string>();
+  const yamlNames = names.filter((each) => ['.yaml', '.yml'].includes(extname(each)));
+  // By id, then by name: ids come out sorted even where `a-b.yaml` sorts before `a.yaml`.
+  const listing = yamlNames
+    .map((name) => ({
+      id: idOfFile(name),
+      path: join(contentDir, folder, name),
+      file: `${folder}/${name}`,
+    }))
+    .sort((a, b) => compare(a.id, b.id) || compare(a.file, b.file));
+  for (const listed of listing) {
+    const other = fileOfId.get(listed.id);
+    if (!ID_PATTERN.test(listed.id)) {
+      issues.push(
+        new ContentIssue(
+          'bad-file-name',
+          wholeFile(listed.file),
+          contentWords.badFileName(listed.id, idLike(listed.id)),
+        ),
+      );
+    } else if (other !== undefined) {
+      issues.push(
+        new ContentIssue(
+          'same-id-twice',
+          wholeFile(listed.file),
+          contentWords.sameIdTwice(listed.id, other),
+        ),
+      );
+    } else {
+      fileOfId.set(listed.id, listed.file);
+      files.push(listed);
+    }
+  }
+  return { files, issues };
+}
+
+interface Loaded<E> {
+  readonly entries: ReadonlyMap<string, E>;
+  readonly issues: readonly ContentIssue[];
+}
+
+async function loadAll<T, E extends EntryBase>(
+  kind: FolderKind,
+  files: readonly ListedFile[],
+  build: (valid: ValidFile<T>) => Checked<E>,
+): Promise<Loaded<E>> {
+  const results = await Promise.all(
+    files.map((listed) => loadEntry(kind, listed.path, listed.file, build)),
+  );
+  const entries = new Map<string, E>();
+  for (const { value } of results) if (value) entries.set(value.id, value);
+  return { entries, issues: results.flatMap((result) => result.issues) };
+}
+
+/** Read and check every file of the content folder; throws ContentErrors listing all problems. */
+export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
+  let rootNames: string[];
+  try {
+    rootNames = await readdir(contentDir);
+  } catch (error) {
+    throw new ContentErrors([unreadable(contentDir, error)]);
+  }
+  const [pots, coffees, stoves, logs] = await Promise.all([
+    listFolder(contentDir, 'pot'),
+    listFolder(contentDir, 'coffee'),
+    listFolder(contentDir, 'stove'),
+    listFolder(contentDir, 'log'),
+  ]);
+  const idsOf = (listing: Listing): string[] => listing.files.map((each) => each.id);
+  const known: KnownIds = { pot: idsOf(pots), coffee: idsOf(coffees), stove: idsOf(stoves) };
+
+  const [potEntries, coffeeEntries, stoveEntries] = await Promise.all([
+    loadAll('pot', pots.files, buildPot),
+    loadAll('coffee', coffees.files, buildCoffee),
+    loadAll('stove', stoves.files, buildStove),
+  ]);
+  const references = { known, stoves: stoveEntries.entries };
+  const noSite: Checked<SiteEntry> = {
+    issues: [
+      new ContentIssue('missing-file', wholeFile(SITE_FILE), contentWords.missingSiteFile()),
+    ],
+  };
+  const [logEntries, site] = await Promise.all([
+    loadAll('log', logs.files, (file: ValidFile<LogYaml>) => buildLog(file, references)),
+    rootNames.includes(SITE_FILE)
+      ? loadEntry('site', join(contentDir, SITE_FILE), SITE_FILE, (file: ValidFile<SiteYaml>) =>
+          buildSite(file, known),
+        )
+      : noSite,
+  ]);
+
+  const issues = [
+    ...[pots, coffees, stoves, logs].flatMap((each) => each.issues),
+    ...[potEntries, coffeeEntries, stoveEntries, logEntries].flatMap((each) => each.issues),
+    ...site.issues,
+  ];
+  if (issues.length > 0 || site.value === undefined) throw new ContentErrors(issues);
+  return {
+    contentDir,
+    site: site.value,
+    pots: potEntries.entries,
+    coffees: coffeeEntries.entries,
+    stoves: stoveEntries.entries,
+    logs: logEntries.entries,
+  };
+}

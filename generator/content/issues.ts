@@ -1,0 +1,96 @@
+/**
+ * Problems found in content files. Loading never stops at the first one: every issue of
+ * every file is collected and thrown together as one ContentErrors, so a person fixes
+ * their files in one pass.
+ */
+import { contentWords, type Wording } from '../words/content.ts';
+
+/** What kind of problem an issue is, for code that reacts to some of them. */
+export type ContentIssueCode =
+  | 'file-too-large'
+  | 'not-utf8'
+  | 'unreadable'
+  | 'missing-file'
+  | 'bad-file-name'
+  | 'same-id-twice'
+  | 'yaml-syntax'
+  | 'duplicate-key'
+  | 'too-many-aliases'
+  | 'empty-file'
+  | 'unknown-key'
+  | 'missing-key'
+  | 'wrong-type'
+  | 'out-of-range'
+  | 'bad-enum'
+  | 'bad-value'
+  | 'geometry'
+  | 'order'
+  | 'repeated'
+  | 'unknown-id'
+  | 'unknown-level'
+  | 'layout';
+
+export interface IssueLocation {
+  /** As shown to the person: relative to the content folder, or the path as given. */
+  readonly file: string;
+  readonly line: number;
+  readonly column: number;
+  /** Dotted path of the value, e.g. `base.valve_height_mm` or `levels[2].power_w`; '' for the whole file. */
+  readonly field: string;
+}
+
+/** The location of a problem with a file as a whole (its name, bytes or encoding). */
+export function wholeFile(file: string): IssueLocation {
+  return { file, line: 1, column: 1, field: '' };
+}
+
+export class ContentIssue implements IssueLocation {
+  readonly code: ContentIssueCode;
+  readonly file: string;
+  readonly line: number;
+  readonly column: number;
+  readonly field: string;
+  readonly problem: string;
+  readonly fix: string;
+
+  constructor(code: ContentIssueCode, at: IssueLocation, wording: Wording) {
+    this.code = code;
+    this.file = at.file;
+    this.line = at.line;
+    this.column = at.column;
+    this.field = at.field;
+    this.problem = wording.problem;
+    this.fix = wording.fix;
+  }
+
+  toString(): string {
+    return contentWords.issueLine(this);
+  }
+}
+
+function byPlace(a: ContentIssue, b: ContentIssue): number {
+  if (a.file !== b.file) return a.file < b.file ? -1 : 1;
+  return a.line - b.line || a.column - b.column;
+}
+
+export class ContentErrors extends Error {
+  /** Sorted by file, then line and column. */
+  readonly issues: readonly ContentIssue[];
+
+  constructor(issues: readonly ContentIssue[]) {
+    const sorted = [...issues].sort(byPlace);
+    super(formatIssues(sorted));
+    this.name = 'ContentErrors';
+    this.issues = sorted;
+  }
+}
+
+function formatIssues(issues: readonly ContentIssue[]): string {
+  const files = new Set(issues.map((issue) => issue.file)).size;
+  return [contentWords.errorsHeading(issues.length, files), ...issues.map(String)].join('\n');
+}
+
+/** The report a person reads: a heading, then one line per issue. */
+export function formatContentErrors(err: ContentErrors): string {
+  return formatIssues(err.issues);
+}

@@ -1,0 +1,165 @@
+/**
+ * Checks a file's data against its JSON Schema (schemas/<kind>.schema.json, the same
+ * files editors use through the `# yaml-language-server: $schema=…` line) and turns each
+ * ajv error into an issue at the YAML node's line and column, in words from
+ * ../words/content.ts.
+ */
+import { readFileSync } from 'node:fs';
+import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
+import { contentWords, type ValueSpec, type Wording } from '../words/content.ts';
+import { ID_PATTERN, idLike } from './ids.ts';
+import { ContentIssue, type ContentIssueCode } from './issues.ts';
+import { nearest } from './nearest.ts';
+import {
+  fieldName,
+  issueAt,
+  locate,
+  nodeAt,
+  type YamlPath,
+  type YamlSource,
+} from './yaml-source.ts';
+
+export type SchemaName = 'pot' | 'coffee' | 'stove' | 'log' | 'site';
+
+const Ajv = AjvModule.default;
+const ajv = new Ajv({
+  allErrors: true,
+  verbose: true,
+  strict: true,
+  strictNumbers: true,
+  allowUnionTypes: true,
+});
+// `x-unit` names the unit of a number for the error words; editors ignore it.
+ajv.addKeyword({ keyword: 'x-unit', schemaType: 'string' });
+
+const compiled = new Map<SchemaName, ValidateFunction>();
+
+function validator(name: SchemaName): ValidateFunction {
+  let validate = compiled.get(name);
+  if (!validate) {
+    const url = new URL(`./schemas/${name}.schema.json`, import.meta.url);
+    validate = ajv.compile(JSON.parse(readFileSync(url, 'utf8')) as object);
+    compiled.set(name, validate);
+  }
+  return validate;
+}
+
+type Schema = Readonly<Record<string, unknown>>;
+
+function specOf(schema: Schema | undefined): ValueSpec {
+  if (!schema) return {};
+  const type = Array.isArray(schema.type)
+    ? schema.type.includes('string')
+      ? 'string'
+      : schema.type[0]
+    : schema.type;
+  const examples = schema.examples as readonly unknown[] | undefined;
+  return {
+    type: type as string | undefined,
+    unit: schema['x-unit'] as string | undefined,
+    minimum: schema.minimum as number | undefined,
+    maximum: schema.maximum as number | undefined,
+    allowed: schema.enum as readonly string[] | undefined,
+    minItems: schema.minItems as number | undefined,
+    maxItems: schema.maxItems as number | undefined,
+    example: examples?.[0],
+  };
+}
+
+function pathOf(instancePath: string): YamlPath {
+  if (instancePath === '') return [];
+  return instancePath
+    .slice(1)
+    .split('/')
+    .map((part) => part.replaceAll('~1', '/').replaceAll('~0', '~'))
+    .map((part) => (/^(0|[1-9]\d*)$/.test(part) ? Number(part) : part));
+}
+
+/** The user's own text of a scalar (so 1e400 reads as 1e400, not Infinity). */
+function sourceText(source: YamlSource, path: YamlPath): string | undefined {
+  const node = nodeAt(source, path) as { source?: unknown } | undefined;
+  return typeof node?.source === 'string' ? node.source : undefined;
+}
+
+function toIssue(error: ErrorObject, source: YamlSource): ContentIssue {
+  const path = pathOf(error.instancePath);
+  const schema = error.parentSchema as Schema | undefined;
+  const spec = specOf(schema);
+  const data: unknown = error.data;
+  const at = (
+    code: ContentIssueCode,
+    wording: Wording,
+    where: YamlPath = path,
+    on: 'value' | 'key' = 'value',
+  ) => issueAt(source, where, code, wording, on);
+
+  switch (error.keyword) {
+    case 'required': {
+      const key = String(error.params.missingProperty);
+      const properties = schema?.properties as Readonly<Record<string, Schema>> | undefined;
+      const wording = contentWords.missingKey(key, fieldName(path), specOf(properties?.[key]));
+      // Point at the mapping the key belongs in (at its own key, `base:`), naming the missing field.
+      const where = { ...locate(source, path, 'key'), field: fieldName([...path, key]) };
+      return new ContentIssue('missing-key', where, wording);
+    }
+    case 'additionalProperties': {
+      const key = String(error.params.additionalProperty);
+      const allowed = Object.keys((schema?.properties as object | undefined) ?? {});
+      const wording = contentWords.unknownKey(key, fieldName(path), nearest(key, allowed), allowed);
+      return at('unknown-key', wording, [...path, key], 'key');
+    }
+    case 'type': {
+      if (typeof data === 'number' && !Number.isFinite(data)) {
+        return at(
+          'out-of-range',
+          contentWords.notFinite(spec, sourceText(source, path) ?? String(data)),
+        );
+      }
+      return at('wrong-type', contentWords.wrongType(spec, data, sourceText(source, path)));
+    }
+    case 'minimum':
+    case 'maximum':
+      return at(
+        'out-of-range',
+        contentWords.outOfRange(spec, data as number, sourceText(source, path)),
+      );
+    case 'enum': {
+      const allowed = (error.params.allowedValues as readonly unknown[]).map(String);
+      const suggestion = typeof data === 'string' ? nearest(data, allowed) : undefined;
+      return at('bad-enum', contentWords.badEnum(data, allowed, suggestion));
+    }
+    case 'minItems':
+    case 'maxItems':
+      return at('bad-value', contentWords.listLength(spec, (data as readonly unknown[]).length));
+    case 'minLength':
+    case 'maxLength':
+      return at(
+        'bad-value',
+        contentWords.textLength(schema?.maxLength as number | undefined, String(data).length),
+      );
+    case 'pattern': {
+      const text = String(data);
+      const wording =
+        schema?.pattern === ID_PATTERN.source
+          ? contentWords.badId(text, idLike(text))
+          : contentWords.badUrl(text);
+      return at('bad-value', wording);
+    }
+    case 'uniqueItems': {
+      const index = Math.max(Number(error.params.i), Number(error.params.j)); // the later repeat
+      return at('repeated', contentWords.repeatedItem((data as readonly unknown[])[index]), [
+        ...path,
+        index,
+      ]);
+    }
+    default:
+      return at('bad-value', contentWords.invalidValue(error.message ?? error.keyword));
+  }
+}
+
+/** Every schema violation in `data`, as issues at their YAML positions. */
+export function schemaIssues(name: SchemaName, data: unknown, source: YamlSource): ContentIssue[] {
+  const validate = validator(name);
+  if (validate(data)) return [];
+  return (validate.errors ?? []).map((error) => toIssue(error, source));
+}

@@ -1,0 +1,216 @@
+/**
+ * content/site.yaml → SiteEntry: the business, print settings and room, and the card sets
+ * expanded into the pot × coffee × stove cards the planner plans. Needs the ids of the
+ * catalogue's files to check references and to expand "every coffee with every pot".
+ */
+import { contentWords } from '../words/content.ts';
+import type { Checked, ValidFile } from './entry-file.ts';
+import type { ContentIssue } from './issues.ts';
+import { unknownIdIssues, type KnownIds, type ReferencedKind } from './references.ts';
+import type { CardRequest, CardSet, PaperSize, SiteEntry, UnitSystem } from './types.ts';
+import { celsiusToK } from './units.ts';
+import { issueAt, positionAt, refAt, type YamlPath, type YamlSource } from './yaml-source.ts';
+
+interface CardYaml {
+  readonly pot?: string;
+  readonly coffee?: string;
+  readonly stove: string;
+  readonly every_coffee_with_every_pot?: boolean;
+}
+
+interface SetYaml {
+  readonly id: string;
+  readonly title: string;
+  readonly layout: 'station' | 'insert';
+  readonly cards?: readonly CardYaml[];
+  readonly coffees?: readonly string[];
+  readonly pots?: readonly string[];
+  readonly stoves?: readonly string[];
+}
+
+/** site.yaml as written, once it matches schemas/site.schema.json. */
+export interface SiteYaml {
+  readonly business: { readonly name: string; readonly contact: string };
+  readonly units: UnitSystem;
+  readonly paper: PaperSize;
+  readonly kettle_presets_c?: readonly number[];
+  readonly room: { readonly ambient_c: number; readonly altitude_m?: number };
+  readonly base_url?: string;
+  readonly sets: readonly SetYaml[];
+}
+
+/** Cards of one set, with the issues found while reading them. */
+interface Expanded {
+  readonly cards: readonly CardRequest[];
+  readonly coffeeIds: readonly string[];
+  readonly issues: readonly ContentIssue[];
+}
+
+function referenceIssues(
+  source: YamlSource,
+  path: YamlPath,
+  kind: ReferencedKind,
+  ids: readonly string[],
+  known: KnownIds,
+): ContentIssue[] {
+  return ids.flatMap((id, index) => unknownIdIssues(source, [...path, index], kind, id, known));
+}
+
+function keysNotFor(
+  source: YamlSource,
+  path: YamlPath,
+  set: SetYaml,
+  keys: readonly (keyof SetYaml)[],
+): ContentIssue[] {
+  const belongsTo = set.layout === 'station' ? 'insert' : 'station';
+  return keys
+    .filter((key) => set[key] !== undefined)
+    .map((key) =>
+      issueAt(
+        source,
+        [...path, key],
+        'layout',
+        contentWords.keyNotForLayout(key, set.layout, belongsTo),
+        'key',
+      ),
+    );
+}
+
+/** Every coffee with every pot on one stove, sorted by pot then coffee (known ids are sorted). */
+function everyCoffeeWithEveryPot(stoveId: string, known: KnownIds): CardRequest[] {
+  return known.pot.flatMap((potId) =>
+    known.coffee.map((coffeeId) => ({ potId, coffeeId, stoveId })),
+  );
+}
+
+function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: KnownIds): Expanded {
+  const issues = keysNotFor(source, path, set, ['coffees', 'pots', 'stoves']);
+  if (set.cards === undefined) {
+    const example = '`cards:` with `- { pot: …, coffee: …, stove: … }` lines';
+    return {
+      cards: [],
+      coffeeIds: [],
+      issues: [
+        ...issues,
+        issueAt(source, path, 'layout', contentWords.missingForLayout('cards', 'station', example)),
+      ],
+    };
+  }
+  const cards: CardRequest[] = [];
+  const firstLineOf = new Map<string, number>();
+  set.cards.forEach((card, index) => {
+    const at = [...path, 'cards', index];
+    issues.push(...unknownIdIssues(source, [...at, 'stove'], 'stove', card.stove, known));
+    let requests: CardRequest[] = [];
+    if (card.every_coffee_with_every_pot === true) {
+      if (card.pot !== undefined || card.coffee !== undefined) {
+        issues.push(issueAt(source, at, 'layout', contentWords.cardMixesForms()));
+      }
+      requests = everyCoffeeWithEveryPot(card.stove, known);
+    } else if (card.every_coffee_with_every_pot === false) {
+      issues.push(
+        issueAt(
+          source,
+          [...at, 'every_coffee_with_every_pot'],
+          'bad-value',
+          contentWords.everyFlagFalse(),
+        ),
+      );
+    } else if (card.pot === undefined || card.coffee === undefined) {
+      issues.push(issueAt(source, at, 'missing-key', contentWords.cardNeedsPotAndCoffee()));
+    } else {
+      issues.push(...unknownIdIssues(source, [...at, 'pot'], 'pot', card.pot, known));
+      issues.push(...unknownIdIssues(source, [...at, 'coffee'], 'coffee', card.coffee, known));
+      requests = [{ potId: card.pot, coffeeId: card.coffee, stoveId: card.stove }];
+    }
+    const line = positionAt(source, at).line;
+    for (const request of requests) {
+      const key = `${request.potId}|${request.coffeeId}|${request.stoveId}`;
+      const firstLine = firstLineOf.get(key);
+      if (firstLine === undefined) {
+        firstLineOf.set(key, line);
+        cards.push(request);
+      } else {
+        const wording = contentWords.repeatedCard(
+          request.potId,
+          request.coffeeId,
+          request.stoveId,
+          firstLine,
+        );
+        issues.push(issueAt(source, at, 'repeated', wording));
+      }
+    }
+  });
+  const coffeeIds = [...new Set(cards.map((card) => card.coffeeId))];
+  return { cards, coffeeIds, issues };
+}
+
+function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: KnownIds): Expanded {
+  const issues = keysNotFor(source, path, set, ['cards']);
+  if (set.coffees === undefined) {
+    const example = '`coffees: [house-blend, …]`';
+    issues.push(
+      issueAt(source, path, 'layout', contentWords.missingForLayout('coffees', 'insert', example)),
+    );
+  }
+  const coffeeIds = set.coffees ?? [];
+  const potIds = set.pots ?? known.pot;
+  const stoveIds = set.stoves ?? known.stove;
+  issues.push(
+    ...referenceIssues(source, [...path, 'coffees'], 'coffee', coffeeIds, known),
+    ...referenceIssues(source, [...path, 'pots'], 'pot', set.pots ?? [], known),
+    ...referenceIssues(source, [...path, 'stoves'], 'stove', set.stoves ?? [], known),
+  );
+  const cards = coffeeIds.flatMap((coffeeId) =>
+    potIds.flatMap((potId) => stoveIds.map((stoveId) => ({ potId, coffeeId, stoveId }))),
+  );
+  return { cards, coffeeIds, issues };
+}
+
+export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<SiteEntry> {
+  const { data, source } = file;
+  const issues: ContentIssue[] = [];
+  const firstLineOf = new Map<string, number>();
+  const sets: CardSet[] = data.sets.map((set, index) => {
+    const path = ['sets', index];
+    const firstLine = firstLineOf.get(set.id);
+    if (firstLine === undefined) firstLineOf.set(set.id, positionAt(source, [...path, 'id']).line);
+    else
+      issues.push(
+        issueAt(source, [...path, 'id'], 'repeated', contentWords.repeatedSetId(set.id, firstLine)),
+      );
+    const expanded = (set.layout === 'station' ? stationCards : insertCards)(
+      source,
+      path,
+      set,
+      known,
+    );
+    issues.push(...expanded.issues);
+    return {
+      id: set.id,
+      title: set.title,
+      layout: set.layout,
+      cards: expanded.cards,
+      coffeeIds: expanded.coffeeIds,
+      source: refAt(source, path),
+    };
+  });
+  if (issues.length > 0) return { issues };
+  const baseUrl =
+    data.base_url === undefined || data.base_url.endsWith('/')
+      ? data.base_url
+      : `${data.base_url}/`;
+  const entry: SiteEntry = {
+    kind: 'site',
+    source: refAt(source, []),
+    hash: file.hash,
+    business: { name: data.business.name, contact: data.business.contact },
+    units: data.units,
+    paper: data.paper,
+    kettlePresetsK: [...(data.kettle_presets_c ?? [])].sort((a, b) => a - b).map(celsiusToK),
+    room: { ambientK: celsiusToK(data.room.ambient_c), altitudeM: data.room.altitude_m ?? 0 },
+    baseUrl,
+    sets,
+  };
+  return { value: entry, issues: [] };
+}
