@@ -9,7 +9,7 @@ import { potGeometry } from '../brew/geometry.ts';
 /** Checked ranges (SI). Permeability: the stovetop beds our checks cover. */
 export const CHECKED = {
   permeabilityM2: [2e-13, 5e-12],
-  heatToPotW: [100, 1200],
+  heatToPotW: [50, 1200],
   altitudeM: [-100, 3000],
   sealedVolumeM3: [60e-6, 1000e-6],
   ambientK: [283.15, 308.15],

@@ -45,7 +45,7 @@ export interface PlanRequest {
   readonly coffee: CoffeeEntry;
   readonly stove: StoveEntry;
   readonly room: Room;
-  /** Kettle presets, K; when given, the start is room temperature or one of these. */
+  /** Kettle presets, K: offered beside 5 K steps, and preferred on ties. */
   readonly kettlePresetsK?: readonly number[];
   /** A smaller cup than the pot's safe maximum, m³ (refused when above the safe fill). */
   readonly fillM3?: number;
@@ -84,12 +84,17 @@ export function planCard(request: PlanRequest): CardPlan {
   if (stove.stoveKind === 'induction' && !pot.inductionReady) {
     return refuse(planWords.inductionNeedsMagneticBase(pot.name));
   }
-  const starts = startCandidates(request, context.boilingK);
-  const coolestFill = maxSafeFill(pot.model, starts[starts.length - 1]!, room.ambientPa).maxFillM3;
-  if (request.fillM3 !== undefined && request.fillM3 > coolestFill) {
+  // A requested fill must stay below the valve from whatever start it is poured at.
+  const starts = startCandidates(request, context.boilingK).filter(
+    (startK) =>
+      request.fillM3 === undefined ||
+      request.fillM3 <= maxSafeFill(pot.model, startK, room.ambientPa).maxFillM3,
+  );
+  if (starts.length === 0) {
     const limit = maxSafeFill(pot.model, room.ambientK, room.ambientPa);
-    return refuse(planWords.fillAboveValve(request.fillM3, limit.maxFillM3, VALVE_MARGIN_M));
+    return refuse(planWords.fillAboveValve(request.fillM3!, limit.maxFillM3, VALVE_MARGIN_M));
   }
+  const presets = new Set(request.kettlePresetsK ?? []);
 
   let simulations = 0;
   const run = (startK: number, levelIndex: number, offS?: number, series = false, scale = NOMINAL) => {
@@ -110,18 +115,25 @@ export function planCard(request: PlanRequest): CardPlan {
   const limitPa = PRESSURE_LIMIT_SHARE_OF_VALVE * pot.model.valveOpeningGaugePa;
   const candidates: Candidate[] = [];
   let lowestPeak = Infinity;
+  // More heat only brews faster and pushes harder, so along each start's levels (gentlest
+  // first) the search stops at the first level over the pressure limit or too fast for
+  // the delivery window.
+  const [windowLow, windowHigh] = coffee.deliveryWindowS;
   for (const startK of starts) {
     for (let levelIndex = 0; levelIndex < stove.levels.length; levelIndex++) {
       let heatOn: BrewResult;
       try {
         heatOn = run(startK, levelIndex);
       } catch (error) {
-        if (error instanceof BrewSetupError) continue;
+        if (error instanceof BrewSetupError) break;
         throw error;
       }
       lowestPeak = Math.min(lowestPeak, heatOn.peakGaugePa);
-      if (heatOn.peakGaugePa > limitPa || heatOn.firstCoffeeS === null) continue;
+      if (heatOn.peakGaugePa > limitPa) break;
+      if (heatOn.firstCoffeeS === null) continue;
       candidates.push({ startK, levelIndex, heatOn });
+      const delivery = (heatOn.sputterS ?? Infinity) - heatOn.firstCoffeeS;
+      if (delivery < windowLow + SPUTTER_LEAD_S) break;
     }
   }
   if (candidates.length === 0) {
@@ -131,7 +143,6 @@ export function planCard(request: PlanRequest): CardPlan {
     return refuse(planWords.noDelivery());
   }
 
-  const [windowLow, windowHigh] = coffee.deliveryWindowS;
   const offHeatWindow = (c: Candidate): [number, number] => {
     const first = c.heatOn.firstCoffeeS!;
     const latest = Math.min(first + windowHigh, (c.heatOn.sputterS ?? Infinity) - SPUTTER_LEAD_S);
@@ -157,7 +168,7 @@ export function planCard(request: PlanRequest): CardPlan {
     return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
 
-  const chosen = refined.reduce((best, next) => (better(next, best) ? next : best));
+  const chosen = refined.reduce((best, next) => (better(next, best, presets) ? next : best));
   const brew = run(chosen.startK, chosen.levelIndex, chosen.offS, true);
   const coldBrew = run(room.ambientK, chosen.levelIndex, undefined, true);
   const offCupM3 = cupAt(brew, chosen.offS);
@@ -178,7 +189,7 @@ export function planCard(request: PlanRequest): CardPlan {
     expansionMarginM: VALVE_MARGIN_M,
     doseKg: brew.doseKg,
     startK: chosen.startK,
-    kettlePresetK: chosen.startK > room.ambientK + 0.5 ? chosen.startK : null,
+    kettlePresetK: presets.has(chosen.startK) ? chosen.startK : null,
     levelIndex: chosen.levelIndex,
     levelLabel: stove.levels[chosen.levelIndex]!.label,
     heatToPotW: stove.levels[chosen.levelIndex]!.heatToPotW,
@@ -215,21 +226,20 @@ const SENSITIVITY = [
   { permeability: 1.3, heat: 1.1 },
 ];
 
-/** Room temperature, then the kettle presets or 5 K steps, up to 90 °C and 2 K below boiling. */
+/**
+ * Room temperature, the kettle presets, and 5 K steps (a thermometer), up to 90 °C and
+ * 2 K below boiling, ascending.
+ */
 export function startCandidates(request: PlanRequest, boilingK: number): number[] {
   const ceiling = Math.min(HOTTEST_START_K, boilingK - BELOW_BOILING_K);
   const ambient = request.room.ambientK;
-  const steps: number[] = [];
-  if (request.kettlePresetsK && request.kettlePresetsK.length > 0) {
-    steps.push(...request.kettlePresetsK);
-  } else {
-    const firstStepC = Math.floor((ambient - CELSIUS_OFFSET_K) / START_STEP_K + 1) * START_STEP_K;
-    for (let c = firstStepC; c + CELSIUS_OFFSET_K <= ceiling + 1e-9; c += START_STEP_K) {
-      steps.push(c + CELSIUS_OFFSET_K);
-    }
+  const steps: number[] = [...(request.kettlePresetsK ?? [])];
+  const firstStepC = Math.floor((ambient - CELSIUS_OFFSET_K) / START_STEP_K + 1) * START_STEP_K;
+  for (let c = firstStepC; c + CELSIUS_OFFSET_K <= ceiling + 1e-9; c += START_STEP_K) {
+    steps.push(c + CELSIUS_OFFSET_K);
   }
-  const hotter = steps.filter((k) => k > ambient + 0.5 && k <= ceiling + 1e-9).sort((a, b) => a - b);
-  return [ambient, ...hotter];
+  const hotter = steps.filter((k) => k > ambient + 0.5 && k <= ceiling + 1e-9);
+  return [ambient, ...new Set(hotter.map((k) => Math.round(k * 1e6) / 1e6))].sort((a, b) => a - b);
 }
 
 function heatOnScore(c: Candidate): number {
@@ -278,9 +288,12 @@ function bestOffHeat(
   return wins(end, best) ? end : best;
 }
 
-function better(a: Scored, b: Scored): boolean {
+/** Tie-breaks (shares within TIE_SHARE): gentler level, a kettle preset, cooler start. */
+function better(a: Scored, b: Scored, presets: ReadonlySet<number>): boolean {
   if (Math.abs(a.share - b.share) > TIE_SHARE) return a.share > b.share;
   if (a.levelIndex !== b.levelIndex) return a.levelIndex < b.levelIndex;
+  const aPreset = presets.has(a.startK), bPreset = presets.has(b.startK);
+  if (aPreset !== bPreset) return aPreset;
   if (a.startK !== b.startK) return a.startK < b.startK;
   return a.share > b.share;
 }
