@@ -41,6 +41,7 @@ import { saturatedLiquidDensityKgM3, vaporisationEnthalpyJPerKg } from '../physi
 import { waterViscosityPaS } from '../physics/viscosity.ts';
 import { airIsochoricMolarHeatCapacity } from '../physics/air.ts';
 import { metalSpecificHeatJPerKgK } from '../physics/metals.ts';
+import { OutOfRangeError } from '../physics/errors.ts';
 import { darcyBedResistance, poiseuilleTubeResistance } from '../physics/flow-resistance.ts';
 import { potGeometry, type PotGeometry } from './geometry.ts';
 import { BrewSetupError, BrewDidNotFinishError } from './errors.ts';
@@ -178,8 +179,15 @@ export function simulateBrew(setup: BrewSetup): BrewResult {
     });
   };
 
+  // A trial stage can probe a state outside a correlation's range (an overshoot the step
+  // control will reject): report it as non-finite so the integrator shrinks the step.
   const f = (_t: number, y: Float64Array, out: Float64Array): void => {
-    derivatives(c, mode, y, out, alg);
+    try {
+      derivatives(c, mode, y, out, alg);
+    } catch (error) {
+      if (!(error instanceof OutOfRangeError)) throw error;
+      out.fill(NaN);
+    }
   };
 
   let t = 0;
@@ -268,7 +276,8 @@ export function simulateBrew(setup: BrewSetup): BrewResult {
     sputterS: at('sputter'),
     endS: t,
     endReason,
-    yieldM3: y[VCUP]!,
+    // The integrator's weights are not all positive: the cup can read −1e-11 m³ before it fills.
+    yieldM3: Math.max(0, y[VCUP]!),
     leftInBaseM3: alg.liquidVolume,
     retainedM3: heldUpKg / alg.waterDensity,
     doseKg: c.doseKg,

@@ -35,6 +35,8 @@ const START_STEP_K = 5;
 const SPUTTER_LEAD_S = 5;
 /** Candidates refined with an off-heat search, best first by the heat-on score. */
 const REFINE_COUNT = 4;
+/** Below this share in band the card warns that the cup will miss the band. */
+const LOW_SHARE = 0.1;
 /** Shares of the cup closer than this are equal for the off-heat search. */
 const SHARE_RESOLUTION = 0.005;
 /** The off-heat time is searched to this, s (a card prints whole seconds in ranges). */
@@ -180,7 +182,10 @@ export function planCard(request: PlanRequest): CardPlan {
   const extraction = brew.extraction!;
   const plan: AcceptedPlan = {
     ...context,
-    warnings: modelRangeWarnings(request, chosen.levelIndex),
+    warnings: [
+      ...modelRangeWarnings(request, chosen.levelIndex),
+      ...(extraction.inBandShare < LOW_SHARE ? [planWords.coolCup(extraction.inBandShare)] : []),
+    ],
     refused: null,
     fillM3: fill,
     fillKg: brew.balance.initialWaterKg,

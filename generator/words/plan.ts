@@ -54,6 +54,8 @@ export const planWords = {
   }),
   outsideCheckedRange: (what: string, value: number, lo: number, hi: number): string =>
     `${quantityNames[what] ?? what} ${value.toPrecision(3)} is outside the range the model was checked for (${lo}–${hi}); treat the timings as rough.`,
+  coolCup: (share: number): string =>
+    `Only ${Math.round(share * 100)} % of the cup reaches the target band: even the gentlest setting brews this pot too fast for hot water. A lower flame or a heat diffuser would allow a hotter start.`,
   smallFill: (): string =>
     'The fill is barely above the funnel tube; the model was not checked for such small brews.',
 };
