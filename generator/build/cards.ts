@@ -1,0 +1,118 @@
+/**
+ * The site's sets expanded into the cards to print:
+ *   - station sets: one card per CardRequest, in the order the set lists them;
+ *   - insert sets: one card per coffee, with a row per pot × kind of stove (gas, electric,
+ *     induction) among the set's requests for that coffee; when a set offers two stoves
+ *     of one kind for a pot, the first listed gives the row.
+ * Every request that appears anywhere (station card or insert row) also gets a station
+ * page, so an insert's rows can point to their full cards. Each distinct request is
+ * planned once.
+ */
+import type { CardRequest, Catalogue } from '../content/types.ts';
+import { heatKindOf, type HeatKind } from '../words/card.ts';
+import { stationSlug } from '../render/paths.ts';
+
+export interface StationCardJob {
+  readonly slug: string;
+  readonly request: CardRequest;
+  /** Sets listing this card as a station card, in site order. */
+  readonly setIds: readonly string[];
+}
+
+export interface InsertCardJob {
+  readonly setId: string;
+  readonly coffeeId: string;
+  /** Page slug: the coffee id, or "<coffee>--<set>" when an earlier insert set took it. */
+  readonly slug: string;
+  readonly rows: readonly CardRequest[];
+}
+
+export interface SetJob {
+  readonly id: string;
+  readonly title: string;
+  readonly layout: 'station' | 'insert';
+  /** Station sets: slugs of their station cards; insert sets: slugs of their inserts. */
+  readonly cardSlugs: readonly string[];
+}
+
+export interface CardJobs {
+  readonly sets: readonly SetJob[];
+  /** One per distinct request, in first-appearance order. */
+  readonly stations: readonly StationCardJob[];
+  readonly inserts: readonly InsertCardJob[];
+}
+
+const HEAT_ORDER: readonly HeatKind[] = ['gas', 'electric', 'induction'];
+
+export function expandCards(catalogue: Catalogue): CardJobs {
+  const stations = new Map<string, { request: CardRequest; setIds: string[] }>();
+  const addStation = (request: CardRequest, setId: string | null): string => {
+    const slug = stationSlug(request);
+    let job = stations.get(slug);
+    if (!job) {
+      job = {
+        request: { potId: request.potId, coffeeId: request.coffeeId, stoveId: request.stoveId },
+        setIds: [],
+      };
+      stations.set(slug, job);
+    }
+    if (setId !== null && !job.setIds.includes(setId)) job.setIds.push(setId);
+    return slug;
+  };
+
+  const sets: SetJob[] = [];
+  const inserts: InsertCardJob[] = [];
+  const insertSlugs = new Set<string>();
+  for (const set of catalogue.site.sets) {
+    if (set.layout === 'station') {
+      const slugs = set.cards.map((request) => addStation(request, set.id));
+      sets.push({
+        id: set.id,
+        title: set.title,
+        layout: 'station',
+        cardSlugs: [...new Set(slugs)],
+      });
+      continue;
+    }
+    const slugs: string[] = [];
+    for (const coffeeId of set.coffeeIds) {
+      const rows = insertRows(catalogue, set.cards, coffeeId);
+      for (const row of rows) addStation(row, null);
+      const slug = insertSlugs.has(coffeeId) ? `${coffeeId}--${set.id}` : coffeeId;
+      insertSlugs.add(slug);
+      inserts.push({ setId: set.id, coffeeId, slug, rows });
+      slugs.push(slug);
+    }
+    sets.push({ id: set.id, title: set.title, layout: 'insert', cardSlugs: slugs });
+  }
+  return {
+    sets,
+    stations: [...stations.entries()].map(([slug, job]) => ({ slug, ...job })),
+    inserts,
+  };
+}
+
+/** Rows of one coffee's insert: a pot × heat kind each, pots by size, then gas, electric, induction. */
+function insertRows(
+  catalogue: Catalogue,
+  requests: readonly CardRequest[],
+  coffeeId: string,
+): CardRequest[] {
+  const mine = requests.filter((r) => r.coffeeId === coffeeId);
+  const byRow = new Map<string, CardRequest>();
+  for (const request of mine) {
+    const stove = catalogue.stoves.get(request.stoveId);
+    if (!stove) continue;
+    const key = `${request.potId}|${heatKindOf[stove.stoveKind]}`;
+    if (!byRow.has(key)) byRow.set(key, request);
+  }
+  const cups = (potId: string) => catalogue.pots.get(potId)?.cups ?? 0;
+  const kind = (stoveId: string) =>
+    HEAT_ORDER.indexOf(heatKindOf[catalogue.stoves.get(stoveId)!.stoveKind]);
+  return [...byRow.values()].sort(
+    (a, b) =>
+      cups(a.potId) - cups(b.potId) ||
+      (a.potId < b.potId ? -1 : a.potId > b.potId ? 1 : 0) ||
+      kind(a.stoveId) - kind(b.stoveId),
+  );
+}

@@ -1,0 +1,151 @@
+/**
+ * `stovecard build --serve` (npm start): serves the built site on localhost, watches the
+ * content folder and the templates, rebuilds through the same buildSite (so the plan cache
+ * makes a one-coffee edit quick) and tells open pages to reload. The reload hook is a
+ * one-line EventSource script added to HTML responses as they are served; the files in
+ * the site folder never contain it.
+ */
+import { watch, type FSWatcher } from 'node:fs';
+import { readFile, stat } from 'node:fs/promises';
+import http from 'node:http';
+import path from 'node:path';
+import { ContentErrors, formatContentErrors } from '../content/index.ts';
+import { buildWords } from '../words/card.ts';
+import { buildSite, type BuildResult } from './build-site.ts';
+import { forgetPlanCodeVersion } from './code-version.ts';
+import { TEMPLATES_DIR } from './eleventy.ts';
+
+export interface ServeOptions {
+  readonly contentDir: string;
+  readonly outDir: string;
+  readonly port: number;
+  readonly cacheDir?: string;
+  readonly log: (line: string) => void;
+  /** One line describing a finished build. */
+  readonly describe?: (result: BuildResult) => string;
+}
+
+export interface SiteServer {
+  readonly url: string;
+  /** Rebuild now (as a file change would) and notify the pages. */
+  rebuild(): Promise<void>;
+  close(): Promise<void>;
+}
+
+const RELOAD_PATH = '/__stovecard/reload';
+const RELOAD_SCRIPT = `<script>new EventSource(${JSON.stringify(RELOAD_PATH)}).onmessage=()=>location.reload()</script>`;
+const DEBOUNCE_MS = 200;
+
+const TYPES: Record<string, string> = {
+  '.html': 'text/html; charset=utf-8',
+  '.css': 'text/css; charset=utf-8',
+  '.svg': 'image/svg+xml',
+  '.ttf': 'font/ttf',
+  '.pdf': 'application/pdf',
+  '.png': 'image/png',
+  '.json': 'application/json',
+};
+
+async function fileFor(root: string, urlPath: string): Promise<string | null> {
+  const clean = decodeURIComponent(urlPath.split('?')[0] ?? '/');
+  const target = path.resolve(root, `.${clean}`);
+  if (target !== root && !target.startsWith(root + path.sep)) return null;
+  try {
+    const info = await stat(target);
+    if (info.isDirectory()) return fileFor(root, `${clean.replace(/\/?$/, '/')}index.html`);
+    return target;
+  } catch {
+    return null;
+  }
+}
+
+export async function serveSite(options: ServeOptions): Promise<SiteServer> {
+  const root = path.resolve(options.outDir);
+  const clients = new Set<http.ServerResponse>();
+  const server = http.createServer(async (req, res) => {
+    if (req.url === RELOAD_PATH) {
+      res.writeHead(200, { 'content-type': 'text/event-stream', 'cache-control': 'no-cache' });
+      res.write(': connected\n\n');
+      clients.add(res);
+      req.on('close', () => clients.delete(res));
+      return;
+    }
+    const file = await fileFor(root, req.url ?? '/');
+    if (!file) {
+      res.writeHead(404, { 'content-type': 'text/plain' }).end('not found');
+      return;
+    }
+    const type = TYPES[path.extname(file)] ?? 'application/octet-stream';
+    let body: Buffer | string = await readFile(file);
+    if (type.startsWith('text/html'))
+      body = body.toString('utf8').replace('</body>', `${RELOAD_SCRIPT}</body>`);
+    res.writeHead(200, { 'content-type': type, 'cache-control': 'no-store' }).end(body);
+  });
+  await new Promise<void>((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(options.port, '127.0.0.1', () => resolve());
+  });
+  const address = server.address();
+  const url = `http://localhost:${typeof address === 'object' && address ? address.port : options.port}/`;
+  options.log(buildWords.serving(url));
+
+  let timer: NodeJS.Timeout | null = null;
+  let running: Promise<void> | null = null;
+  let again = false;
+  const rebuild = async (): Promise<void> => {
+    if (running) {
+      again = true;
+      return running;
+    }
+    running = (async () => {
+      do {
+        again = false;
+        forgetPlanCodeVersion();
+        try {
+          const result = await buildSite({
+            contentDir: options.contentDir,
+            outDir: options.outDir,
+            ...(options.cacheDir ? { cacheDir: options.cacheDir } : {}),
+          });
+          options.log(
+            buildWords.rebuilt(
+              options.describe ? options.describe(result) : `${result.pages} pages`,
+            ),
+          );
+          for (const client of clients) client.write('data: reload\n\n');
+        } catch (error) {
+          const message =
+            error instanceof ContentErrors
+              ? formatContentErrors(error)
+              : error instanceof Error
+                ? error.message
+                : String(error);
+          options.log(buildWords.rebuildFailed(message));
+        }
+      } while (again);
+    })();
+    try {
+      await running;
+    } finally {
+      running = null;
+    }
+  };
+  const schedule = () => {
+    if (timer) clearTimeout(timer);
+    timer = setTimeout(() => void rebuild(), DEBOUNCE_MS);
+  };
+  const watchers: FSWatcher[] = [options.contentDir, TEMPLATES_DIR].map((dir) =>
+    watch(dir, { recursive: true }, schedule),
+  );
+
+  return {
+    url,
+    rebuild,
+    async close() {
+      if (timer) clearTimeout(timer);
+      for (const w of watchers) w.close();
+      for (const client of clients) client.end();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+    },
+  };
+}

@@ -1,0 +1,66 @@
+/** `stovecard build [--content DIR] [--out DIR] [--serve]`: the site of cards. */
+import { buildSite, type BuildResult } from '../build/build-site.ts';
+import { terminalProgress } from '../build/progress.ts';
+import { serveSite } from '../build/serve.ts';
+import { buildWords } from '../words/card.ts';
+import { UsageError } from './errors.ts';
+import { parseOptions } from './options.ts';
+
+export function summaryLine(result: BuildResult): string {
+  return buildWords.summary({
+    outDir: result.outDir,
+    pages: result.pages,
+    stations: result.stationCards,
+    inserts: result.insertCards,
+    planned: result.planned,
+    cached: result.cached,
+    refused: result.refused,
+    seconds: result.durationMs / 1000,
+  });
+}
+
+function portOption(raw: string | boolean | undefined): number {
+  if (raw === undefined || typeof raw === 'boolean') return 8080;
+  const port = Number(raw);
+  if (!Number.isInteger(port) || port < 1 || port > 65535)
+    throw new UsageError(buildWords.badPort(raw));
+  return port;
+}
+
+export async function run(argv: string[]): Promise<number> {
+  const { values, help } = parseOptions(argv, {
+    content: { type: 'string' },
+    out: { type: 'string' },
+    serve: { type: 'boolean' },
+    port: { type: 'string' },
+  });
+  if (help) {
+    process.stdout.write(buildWords.help);
+    return 0;
+  }
+  const contentDir = typeof values.content === 'string' ? values.content : 'content';
+  const outDir = typeof values.out === 'string' ? values.out : 'site';
+  const port = portOption(values.port);
+  const progress = terminalProgress(process.stderr);
+  let result: BuildResult;
+  try {
+    result = await buildSite({ contentDir, outDir, onProgress: progress });
+  } catch (error) {
+    progress.finish();
+    process.stderr.write(`stovecard: ${buildWords.failed(outDir)}\n`);
+    throw error;
+  }
+  progress.finish();
+  process.stderr.write(`${summaryLine(result)}\n`);
+  if (values.serve) {
+    await serveSite({
+      contentDir,
+      outDir,
+      port,
+      describe: summaryLine,
+      log: (line) => process.stderr.write(`${line}\n`),
+    });
+    return await new Promise<number>(() => {});
+  }
+  return 0;
+}

@@ -1,0 +1,619 @@
+/**
+ * Card view models: everything a printed card shows, already worded and formatted in the
+ * site's unit system, with its drawings (cross-section, chart, QR code) as SVG strings.
+ *
+ *   CardPlan (SI) + Catalogue ─ stationCardView / insertCardView ─▶ StationCardView /
+ *   InsertCardView (plain data) ─▶ templates/ (HTML, Nunjucks)  and  PDF (pdfkit)
+ *
+ * Templates and the PDF renderer only place these values: no arithmetic, no wording, no
+ * unit choice happens after this module. Keep the exported types stable; both renderers
+ * depend on them. The views are JSON-safe (strings, numbers, booleans, arrays, objects).
+ */
+import type { TopLevelSpec } from 'vega-lite';
+import type {
+  Catalogue,
+  CoffeeEntry,
+  PaperSize,
+  PotEntry,
+  StoveEntry,
+  UnitSystem,
+} from '../content/types.ts';
+import type { AcceptedPlan, CardPlan, RefusedPlan } from '../planning/types.ts';
+import { cardWords, heatKindOf, type HeatKind } from '../words/card.ts';
+import { cupChartSpec, renderChartSvg } from './chart.ts';
+import { crossSection, type CrossSectionLayout } from './cross-section.ts';
+import {
+  altitude,
+  dose,
+  length,
+  pressure,
+  share,
+  temperature,
+  temperatureBand,
+  timeRange,
+  waterMass,
+  waterVolume,
+  type Quantity,
+  type TimeRangeText,
+} from './format.ts';
+import { insertPaths, stationPaths, type CardPaths } from './paths.ts';
+import { qrSvg } from './qr.ts';
+
+export type { Quantity, TimeRangeText } from './format.ts';
+export type { CardPaths } from './paths.ts';
+export type { CrossSectionLayout } from './cross-section.ts';
+export type { HeatKind } from '../words/card.ts';
+
+/** What the build passes in for every card. */
+export interface CardViewOptions {
+  /** Build date printed in the footer, YYYY-MM-DD (SOURCE_DATE_EPOCH when set). */
+  readonly builtOn: string;
+  /** Short fingerprint printed in the footer: first 8 hex of the card's cache key. */
+  readonly fingerprint: string;
+  /** Units to print in; default the site's. */
+  readonly units?: UnitSystem;
+  /** Paper to lay out for; default the site's. */
+  readonly paper?: PaperSize;
+}
+
+/** Paper and type size of a printed card. */
+export interface PageSetup {
+  readonly units: UnitSystem;
+  readonly paper: PaperSize;
+  /** Value of the CSS `@page { size }` property, e.g. "148mm 210mm" or "5.5in 8.5in". */
+  readonly cssSize: string;
+  /** Paper width and height, mm (for the PDF renderer). */
+  readonly widthMm: number;
+  readonly heightMm: number;
+  /** True on small paper (A6): smaller type and drawings. */
+  readonly compact: boolean;
+}
+
+export interface Cautions {
+  readonly heading: string;
+  readonly items: readonly string[];
+}
+
+export interface Warnings {
+  readonly heading: string;
+  readonly items: readonly string[];
+}
+
+export interface Footer {
+  /** "From <business> · <contact>". */
+  readonly printedBy: string;
+  /** "Computed <date> · card <fingerprint>". */
+  readonly built: string;
+  readonly builtOn: string;
+  readonly fingerprint: string;
+  /** QR code of the card's web page (SVG), when the site has a base_url. */
+  readonly qrSvg: string | null;
+  readonly qrCaption: string | null;
+  /** The web page the QR code opens, when the site has a base_url. */
+  readonly webUrl: string | null;
+}
+
+export interface LabelledValue {
+  readonly label: string;
+  readonly value: string;
+}
+
+export interface WaterStep {
+  readonly heading: string;
+  /** "Heat the water to" or "Water at room temperature". */
+  readonly temperatureLabel: string;
+  readonly temperature: Quantity;
+  /** True when the water is heated before sealing. */
+  readonly heated: boolean;
+  /** Which kettle setting (or a thermometer), or that room-temperature water is fine. */
+  readonly temperatureNotes: readonly string[];
+  readonly fillLabel: string;
+  readonly fillVolume: Quantity;
+  readonly fillMass: Quantity;
+  /** "(215 g on a scale)". */
+  readonly fillMassText: string;
+  readonly fillHeight: Quantity;
+  readonly belowValve: Quantity;
+  /** "The fill line is 27 mm above the floor of the base, 5 mm below …". */
+  readonly fillLineText: string;
+  readonly crossSectionSvg: string;
+  readonly crossSection: CrossSectionLayout;
+}
+
+export interface CoffeeStep {
+  readonly heading: string;
+  readonly doseLabel: string;
+  readonly dose: Quantity;
+  /** Level basket, grind class, do not tamp. */
+  readonly lines: readonly string[];
+}
+
+export interface HeatStep {
+  readonly heading: string;
+  readonly settingLabel: string;
+  /** The stove level's own label, as written in its YAML. */
+  readonly level: string;
+  /** "on the <stove>". */
+  readonly stoveText: string;
+  readonly note: string | null;
+}
+
+export interface TimingsStep {
+  readonly heading: string;
+  readonly note: string;
+  readonly firstCoffeeLabel: string;
+  readonly firstCoffee: TimeRangeText;
+  readonly offHeatLabel: string;
+  readonly offHeat: TimeRangeText;
+  readonly watchHeading: string;
+  readonly watch: readonly string[];
+}
+
+export interface ChartBlock {
+  readonly heading: string;
+  /** Inline SVG rendered by vega at build time. */
+  readonly svg: string;
+  /** The vega-lite spec it was rendered from. */
+  readonly spec: TopLevelSpec;
+  readonly caption: string;
+  /** Text alternative of the chart. */
+  readonly alt: string;
+}
+
+export interface ExpectBlock {
+  readonly heading: string;
+  readonly rows: readonly LabelledValue[];
+  readonly notes: readonly string[];
+}
+
+/** The recipe of an accepted plan, in the order a person works. */
+export interface StationRecipe {
+  readonly water: WaterStep;
+  readonly coffee: CoffeeStep;
+  readonly heat: HeatStep;
+  readonly timings: TimingsStep;
+  readonly chart: ChartBlock;
+  readonly expect: ExpectBlock;
+}
+
+/** A refused plan: why, and what to change. Never a recipe. */
+export interface RefusalBlock {
+  readonly heading: string;
+  readonly note: string;
+  readonly whyLabel: string;
+  readonly reason: string;
+  readonly changeLabel: string;
+  readonly suggestion: string;
+}
+
+export interface StationCardView {
+  readonly kind: 'station';
+  /** "<pot>--<coffee>--<stove>". */
+  readonly id: string;
+  readonly potId: string;
+  readonly coffeeId: string;
+  readonly stoveId: string;
+  /** The coffee's name. */
+  readonly title: string;
+  /** "in the <pot> · on the <stove>". */
+  readonly subtitle: string;
+  readonly potName: string;
+  readonly coffeeName: string;
+  readonly stoveName: string;
+  readonly page: PageSetup;
+  readonly paths: CardPaths;
+  /** Exactly one of recipe and refusal is non-null. */
+  readonly recipe: StationRecipe | null;
+  readonly refusal: RefusalBlock | null;
+  readonly warnings: Warnings | null;
+  readonly cautions: Cautions;
+  readonly footer: Footer;
+}
+
+/** One row of an insert card: a pot size on a kind of stove. */
+export interface InsertRow {
+  readonly potId: string;
+  readonly stoveId: string;
+  readonly potName: string;
+  /** "3-cup". */
+  readonly cupsLabel: string;
+  /** Rows of the same pot are consecutive: the first carries their count, the others 0. */
+  readonly potRowSpan: number;
+  readonly heatKind: HeatKind;
+  /** "Gas", "Electric", "Induction". */
+  readonly heatLabel: string;
+  readonly stoveName: string;
+  /** Null for a recipe; else "Not suitable" and the short reason. */
+  readonly refused: { readonly label: string; readonly reason: string } | null;
+  readonly fill: Quantity | null;
+  readonly dose: Quantity | null;
+  /** "80 °C", or "room temp.". */
+  readonly start: string | null;
+  readonly level: string | null;
+  readonly firstCoffee: TimeRangeText | null;
+  readonly offHeat: TimeRangeText | null;
+  /** The full station card of this row. */
+  readonly stationPaths: CardPaths;
+}
+
+export interface InsertCardView {
+  readonly kind: 'insert';
+  /** The page slug: the coffee id (or "<coffee>--<set>", see paths.ts). */
+  readonly id: string;
+  readonly setId: string;
+  readonly coffeeId: string;
+  readonly title: string;
+  readonly subtitle: string;
+  readonly notes: string | null;
+  readonly heading: string;
+  readonly intro: string;
+  readonly columns: {
+    readonly pot: string;
+    readonly heat: string;
+    readonly fill: string;
+    readonly dose: string;
+    readonly start: string;
+    readonly level: string;
+    readonly firstCoffee: string;
+    readonly offHeat: string;
+  };
+  readonly rows: readonly InsertRow[];
+  /** "Full cards … : <url>" when the site has a base_url. */
+  readonly webLine: string | null;
+  readonly page: PageSetup;
+  readonly paths: CardPaths;
+  readonly warnings: Warnings | null;
+  readonly cautions: Cautions;
+  readonly footer: Footer;
+}
+
+/** What the build hands insertCardView: the set, the coffee and one plan per row. */
+export interface InsertCardInput {
+  readonly setId: string;
+  readonly coffeeId: string;
+  /** Page slug (paths.ts); default the coffee id. */
+  readonly slug?: string;
+  readonly rows: readonly {
+    readonly potId: string;
+    readonly stoveId: string;
+    readonly plan: CardPlan;
+  }[];
+}
+
+/** Paper sizes; CSS gets explicit dimensions (Chromium knows no "A6" or "half-letter" keyword). */
+const PAPER: Record<PaperSize, { css: string; widthMm: number; heightMm: number }> = {
+  A4: { css: '210mm 297mm', widthMm: 210, heightMm: 297 },
+  A5: { css: '148mm 210mm', widthMm: 148, heightMm: 210 },
+  A6: { css: '105mm 148mm', widthMm: 105, heightMm: 148 },
+  letter: { css: '8.5in 11in', widthMm: 215.9, heightMm: 279.4 },
+  'half-letter': { css: '5.5in 8.5in', widthMm: 139.7, heightMm: 215.9 },
+};
+
+export function pageSetup(units: UnitSystem, paper: PaperSize): PageSetup {
+  const p = PAPER[paper];
+  return {
+    units,
+    paper,
+    cssSize: p.css,
+    widthMm: p.widthMm,
+    heightMm: p.heightMm,
+    compact: paper === 'A6',
+  };
+}
+
+export function cautions(): Cautions {
+  return { heading: cardWords.cautions.heading, items: cardWords.cautions.items };
+}
+
+function warnings(items: readonly string[]): Warnings | null {
+  const unique = [...new Set(items)];
+  return unique.length > 0 ? { heading: cardWords.warningsHeading, items: unique } : null;
+}
+
+async function footer(
+  catalogue: Catalogue,
+  paths: CardPaths,
+  options: CardViewOptions,
+): Promise<Footer> {
+  const { business } = catalogue.site;
+  const words = cardWords.footer;
+  return {
+    printedBy: words.printedBy(business.name, business.contact),
+    built: words.built(options.builtOn, options.fingerprint),
+    builtOn: options.builtOn,
+    fingerprint: options.fingerprint,
+    qrSvg: paths.webUrl ? await qrSvg(paths.webUrl) : null,
+    qrCaption: paths.webUrl ? words.qr : null,
+    webUrl: paths.webUrl,
+  };
+}
+
+function entry<T>(map: ReadonlyMap<string, T>, id: string, what: string): T {
+  const found = map.get(id);
+  if (!found) throw new Error(`card view: no ${what} "${id}" in the catalogue`);
+  return found;
+}
+
+interface Entries {
+  readonly pot: PotEntry;
+  readonly coffee: CoffeeEntry;
+  readonly stove: StoveEntry;
+}
+
+function entriesOf(plan: CardPlan, catalogue: Catalogue): Entries {
+  return {
+    pot: entry(catalogue.pots, plan.potId, 'pot'),
+    coffee: entry(catalogue.coffees, plan.coffeeId, 'coffee'),
+    stove: entry(catalogue.stoves, plan.stoveId, 'stove'),
+  };
+}
+
+function sameK(a: number, b: number): boolean {
+  return Math.abs(a - b) < 0.05;
+}
+
+async function recipe(
+  plan: AcceptedPlan,
+  e: Entries,
+  catalogue: Catalogue,
+  units: UnitSystem,
+): Promise<StationRecipe> {
+  const words = cardWords;
+  const site = catalogue.site;
+  const start = temperature(plan.startK, units);
+  // Heated whenever the start is above the room; the kettle preset only when one matches.
+  const heated = plan.startK > plan.ambientK + 0.5;
+  const preset = plan.kettlePresetK;
+  const temperatureNotes = heated
+    ? [
+        preset !== null && site.kettlePresetsK.some((k) => sameK(k, preset))
+          ? words.water.kettlePreset(temperature(preset, units).text)
+          : words.water.thermometer(start.text),
+        words.water.heatedNote,
+      ]
+    : [words.water.roomTemperatureNote(temperature(plan.ambientK, units).text)];
+  const fillHeight = length(plan.fillHeightM, units);
+  const belowValve = length(plan.belowValveM, units);
+  const fillMass = waterMass(plan.fillKg, units);
+  const drawing = crossSection({
+    pot: e.pot.model,
+    potName: e.pot.name,
+    fillHeightM: plan.fillHeightM,
+    units,
+  });
+
+  const band = temperatureBand(plan.targetBandK, units);
+  const planShare = share(plan.extraction.inBandShare).text;
+  const coldShare = share(plan.coldStart.inBandShare).text;
+  const spec = cupChartSpec({
+    units,
+    plan: plan.brew.cupCurve,
+    cold: plan.coldBrew.cupCurve,
+    bandK: plan.targetBandK,
+  });
+
+  const expectRows: LabelledValue[] = [
+    { label: words.expect.yield, value: waterVolume(plan.yieldM3, units).text },
+    { label: words.expect.inBand(band), value: words.expect.inBandValue(planShare, coldShare) },
+    {
+      label: words.expect.peakPressure,
+      value: words.expect.peakPressureValue(
+        pressure(plan.peakGaugePa, units).text,
+        pressure(plan.valveOpeningGaugePa, units).text,
+        e.pot.valveOpeningAssumed,
+      ),
+    },
+  ];
+  if (Math.abs(plan.altitudeM) >= 0.5) {
+    expectRows.push({
+      label: words.expect.boiling,
+      value: words.expect.boilingValue(
+        temperature(plan.boilingK, units).text,
+        altitude(plan.altitudeM, units).text,
+      ),
+    });
+  }
+  const grindAssumed = e.coffee.permeabilityAssumed ? e.coffee.grind : null;
+  const stoveAssumed = e.stove.efficiencyAssumed && !e.stove.levels[plan.levelIndex]?.fitted;
+  const notes =
+    grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : [];
+
+  return {
+    water: {
+      heading: words.water.heading,
+      temperatureLabel: heated ? words.water.heated : words.water.roomTemperature,
+      temperature: start,
+      heated,
+      temperatureNotes,
+      fillLabel: words.water.fill,
+      fillVolume: waterVolume(plan.fillM3, units),
+      fillMass,
+      fillMassText: words.water.fillMass(fillMass.text),
+      fillHeight,
+      belowValve,
+      fillLineText: words.water.fillLine(fillHeight.text, belowValve.text),
+      crossSectionSvg: drawing.svg,
+      crossSection: drawing.layout,
+    },
+    coffee: {
+      heading: words.coffee.heading,
+      doseLabel: words.coffee.dose,
+      dose: dose(plan.doseKg, units),
+      lines: [words.coffee.level, words.coffee.grind(e.coffee.grind), words.coffee.noTamp],
+    },
+    heat: {
+      heading: words.heat.heading,
+      settingLabel: words.heat.setting,
+      level: plan.levelLabel,
+      stoveText: words.heat.on(e.stove.name),
+      note: e.stove.levels[plan.levelIndex]?.fitted ? words.heat.fitted : null,
+    },
+    timings: {
+      heading: words.timings.heading,
+      note: words.timings.clockNote,
+      firstCoffeeLabel: words.timings.firstCoffee,
+      firstCoffee: timeRange(plan.firstCoffeeS.lowS, plan.firstCoffeeS.highS),
+      offHeatLabel: words.timings.offHeat,
+      offHeat: timeRange(plan.offHeatS.lowS, plan.offHeatS.highS),
+      watchHeading: words.timings.watchHeading,
+      watch: words.timings.watch,
+    },
+    chart: {
+      heading: words.chart.heading,
+      svg: await renderChartSvg(spec),
+      spec,
+      caption: words.chart.caption,
+      alt: words.chart.alt(planShare, coldShare, band),
+    },
+    expect: { heading: words.expect.heading, rows: expectRows, notes },
+  };
+}
+
+function refusal(plan: RefusedPlan): RefusalBlock {
+  const words = cardWords.refusal;
+  return {
+    heading: words.heading,
+    note: words.note,
+    whyLabel: words.why,
+    reason: plan.refused.reason,
+    changeLabel: words.change,
+    suggestion: plan.refused.suggestion,
+  };
+}
+
+/** The full card for one pot × coffee × stove: a recipe, or a refusal that says why. */
+export async function stationCardView(
+  plan: CardPlan,
+  catalogue: Catalogue,
+  options: CardViewOptions,
+): Promise<StationCardView> {
+  const e = entriesOf(plan, catalogue);
+  const units = options.units ?? catalogue.site.units;
+  const paper = options.paper ?? catalogue.site.paper;
+  const request = { potId: plan.potId, coffeeId: plan.coffeeId, stoveId: plan.stoveId };
+  const paths = stationPaths(request, catalogue.site.baseUrl);
+  return {
+    kind: 'station',
+    id: paths.pageUrl.slice('cards/'.length, -1),
+    ...request,
+    title: e.coffee.name,
+    subtitle: cardWords.stationSubtitle(e.pot.name, e.stove.name),
+    potName: e.pot.name,
+    coffeeName: e.coffee.name,
+    stoveName: e.stove.name,
+    page: pageSetup(units, paper),
+    paths,
+    recipe: plan.refused === null ? await recipe(plan, e, catalogue, units) : null,
+    refusal: plan.refused === null ? null : refusal(plan),
+    warnings: warnings(plan.warnings),
+    cautions: cautions(),
+    footer: await footer(catalogue, paths, options),
+  };
+}
+
+function insertRow(
+  row: InsertCardInput['rows'][number],
+  potRowSpan: number,
+  catalogue: Catalogue,
+  units: UnitSystem,
+): InsertRow {
+  const { plan } = row;
+  const e = entriesOf(plan, catalogue);
+  const kind = heatKindOf[e.stove.stoveKind];
+  const words = cardWords.insert;
+  const base = {
+    potId: row.potId,
+    stoveId: row.stoveId,
+    potName: e.pot.name,
+    cupsLabel: words.cups(e.pot.cups),
+    potRowSpan,
+    heatKind: kind,
+    heatLabel: words.heatKind(kind),
+    stoveName: e.stove.name,
+    stationPaths: stationPaths(
+      { potId: row.potId, coffeeId: plan.coffeeId, stoveId: row.stoveId },
+      catalogue.site.baseUrl,
+    ),
+  };
+  if (plan.refused !== null) {
+    return {
+      ...base,
+      refused: { label: words.notSuitable, reason: cardWords.refusal.short[plan.refused.code] },
+      fill: null,
+      dose: null,
+      start: null,
+      level: null,
+      firstCoffee: null,
+      offHeat: null,
+    };
+  }
+  return {
+    ...base,
+    refused: null,
+    fill: waterVolume(plan.fillM3, units),
+    dose: dose(plan.doseKg, units),
+    start:
+      plan.startK > plan.ambientK + 0.5
+        ? temperature(plan.startK, units).text
+        : words.roomTemperature,
+    level: plan.levelLabel,
+    firstCoffee: timeRange(plan.firstCoffeeS.lowS, plan.firstCoffeeS.highS),
+    offHeat: timeRange(plan.offHeatS.lowS, plan.offHeatS.highS),
+  };
+}
+
+/** Each distinct warning once, naming the rows it applies to ("3-cup gas, 6-cup electric: …"). */
+function insertWarnings(
+  rows: readonly InsertRow[],
+  inputs: InsertCardInput['rows'],
+): Warnings | null {
+  const byText = new Map<string, string[]>();
+  inputs.forEach((input, i) => {
+    for (const text of input.plan.warnings) {
+      const names = byText.get(text) ?? [];
+      names.push(cardWords.insert.rowName(rows[i]!.cupsLabel, rows[i]!.heatLabel));
+      byText.set(text, names);
+    }
+  });
+  return warnings(
+    [...byText.entries()].map(([text, names]) => cardWords.insert.rowWarning(names, text)),
+  );
+}
+
+/** The insert card of one coffee: a row per pot size × kind of stove. */
+export async function insertCardView(
+  input: InsertCardInput,
+  catalogue: Catalogue,
+  options: CardViewOptions,
+): Promise<InsertCardView> {
+  const coffee = entry(catalogue.coffees, input.coffeeId, 'coffee');
+  const units = options.units ?? catalogue.site.units;
+  const paper = options.paper ?? catalogue.site.paper;
+  const paths = insertPaths(input.slug ?? input.coffeeId, catalogue.site.baseUrl);
+  const words = cardWords.insert;
+  const rows = input.rows.map((row, i) => {
+    const first = i === 0 || input.rows[i - 1]!.potId !== row.potId;
+    let span = 0;
+    if (first) while (input.rows[i + span]?.potId === row.potId) span++;
+    return insertRow(row, span, catalogue, units);
+  });
+  return {
+    kind: 'insert',
+    id: input.slug ?? input.coffeeId,
+    setId: input.setId,
+    coffeeId: input.coffeeId,
+    title: coffee.name,
+    subtitle: cardWords.insertSubtitle(coffee.roast, coffee.grind),
+    notes: coffee.notes ?? null,
+    heading: words.heading,
+    intro: words.intro,
+    columns: words.columns,
+    rows,
+    webLine: paths.webUrl ? words.web(paths.webUrl) : null,
+    page: pageSetup(units, paper),
+    paths,
+    warnings: insertWarnings(rows, input.rows),
+    cautions: cautions(),
+    footer: await footer(catalogue, paths, options),
+  };
+}

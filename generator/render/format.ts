@@ -1,0 +1,146 @@
+/**
+ * SI → the numbers a card prints, in the site's unit system, with the rounding each
+ * quantity is printed at. The conversions are generator/units.ts (NIST SP 811, Appendix B);
+ * the two that module lacks are defined here from the same source:
+ * 1 psi = 6894.757293168 Pa, 1 ft = 0.3048 m (both exact by definition).
+ *
+ * Rounding (what "correct to the rounding shown" means on a card):
+ *   temperature    metric 1 °C            us 1 °F
+ *   water volume   metric 1 mL            us 0.1 fl oz
+ *   water mass     metric 1 g             us 0.1 oz
+ *   dose           metric 0.1 g           us 0.01 oz
+ *   length         metric 1 mm            us 0.01 in
+ *   pressure       metric 0.01 bar        us 0.1 psi
+ *   altitude       metric 1 m             us 1 ft
+ *   share          1 %
+ *   time ranges    5 s, the low end rounded down and the high end up (never narrower
+ *                  than the model's spread)
+ */
+import type { UnitSystem } from '../content/types.ts';
+import {
+  round,
+  toBar,
+  toCelsius,
+  toFahrenheit,
+  toFahrenheitDelta,
+  toFlOz,
+  toGrams,
+  toInches,
+  toMl,
+  toMm,
+  toOunces,
+} from '../units.ts';
+
+/** Pa per pound-force per square inch (NIST SP 811, B.8; exact to the digits given). */
+export const PA_PER_PSI = 6894.757293168;
+/** Metres per international foot (NIST SP 811, B.8; exact). */
+export const M_PER_FT = 0.3048;
+/** Time ranges are printed to this step, s. */
+export const TIME_STEP_S = 5;
+
+/** A number and its unit, formatted; `text` is the two joined with a narrow no-break space. */
+export interface Quantity {
+  /** The digits, e.g. "62" or "2.1". */
+  readonly value: string;
+  /** The unit symbol, e.g. "°C", "fl oz". */
+  readonly unit: string;
+  /** "62 °C": value and unit joined by U+00A0 (never split over two lines). */
+  readonly text: string;
+}
+
+/** A time range as printed: "1:50–2:20". */
+export interface TimeRangeText {
+  /** Low end, m:ss (rounded down to TIME_STEP_S). */
+  readonly low: string;
+  /** High end, m:ss (rounded up to TIME_STEP_S). */
+  readonly high: string;
+  /** "1:50–2:20" (en dash), or one time when both ends round to the same step. */
+  readonly text: string;
+  /** The printed ends in seconds, for checks. */
+  readonly lowS: number;
+  readonly highS: number;
+}
+
+const NBSP = '\u00a0';
+
+export function quantity(value: number, digits: number, unit: string): Quantity {
+  const v = fixed(value, digits);
+  return { value: v, unit, text: `${v}${NBSP}${unit}` };
+}
+
+/** Fixed decimals without "-0". */
+export function fixed(value: number, digits: number): string {
+  return round(value, digits).toFixed(digits);
+}
+
+export function temperature(k: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(toFahrenheit(k), 0, '°F') : quantity(toCelsius(k), 0, '°C');
+}
+
+/** A temperature difference (K) as °C or °F degrees. */
+export function temperatureDelta(dk: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(toFahrenheitDelta(dk), 0, '°F') : quantity(dk, 0, '°C');
+}
+
+/** A temperature band "90–96 °C". */
+export function temperatureBand(band: readonly [number, number], units: UnitSystem): string {
+  const lo = temperature(band[0], units);
+  const hi = temperature(band[1], units);
+  return `${lo.value}–${hi.value}${NBSP}${hi.unit}`;
+}
+
+export function waterVolume(m3: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(toFlOz(m3), 1, 'fl oz') : quantity(toMl(m3), 0, 'mL');
+}
+
+export function waterMass(kg: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(toOunces(kg), 1, 'oz') : quantity(toGrams(kg), 0, 'g');
+}
+
+export function dose(kg: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(toOunces(kg), 2, 'oz') : quantity(toGrams(kg), 1, 'g');
+}
+
+export function length(m: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(toInches(m), 2, 'in') : quantity(toMm(m), 0, 'mm');
+}
+
+export function pressure(pa: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(pa / PA_PER_PSI, 1, 'psi') : quantity(toBar(pa), 2, 'bar');
+}
+
+export function altitude(m: number, units: UnitSystem): Quantity {
+  return units === 'us' ? quantity(m / M_PER_FT, 0, 'ft') : quantity(m, 0, 'm');
+}
+
+/** A share 0–1 as "78 %". */
+export function share(value: number): Quantity {
+  return quantity(value * 100, 0, '%');
+}
+
+/** Seconds as m:ss ("2:05"); negative input is a bug upstream and prints as 0:00. */
+export function clock(s: number): string {
+  const whole = Math.max(0, Math.round(s));
+  return `${Math.floor(whole / 60)}:${String(whole % 60).padStart(2, '0')}`;
+}
+
+/** A range printed outward to TIME_STEP_S, so the printed range always contains the model's. */
+export function timeRange(lowS: number, highS: number): TimeRangeText {
+  const lo = Math.floor(Math.min(lowS, highS) / TIME_STEP_S + 1e-9) * TIME_STEP_S;
+  const hi = Math.ceil(Math.max(lowS, highS) / TIME_STEP_S - 1e-9) * TIME_STEP_S;
+  const low = clock(lo);
+  const high = clock(hi);
+  return { low, high, text: lo === hi ? low : `${low}–${high}`, lowS: lo, highS: hi };
+}
+
+/** Axis units of the cup chart in this unit system. */
+export function chartUnits(units: UnitSystem): {
+  volume: (m3: number) => number;
+  temperature: (k: number) => number;
+  volumeUnit: string;
+  temperatureUnit: string;
+} {
+  return units === 'us'
+    ? { volume: toFlOz, temperature: toFahrenheit, volumeUnit: 'fl oz', temperatureUnit: '°F' }
+    : { volume: toMl, temperature: toCelsius, volumeUnit: 'mL', temperatureUnit: '°C' };
+}

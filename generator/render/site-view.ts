@@ -1,0 +1,269 @@
+/**
+ * The data of the site's other pages (index, set pages, method, troubleshooting) and the
+ * one global object the templates read (`stovecard`), built from the card views. Like
+ * card-view.ts, every string is final: templates only place them.
+ */
+import type { Catalogue } from '../content/types.ts';
+import type { AcceptedPlan } from '../planning/types.ts';
+import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
+import type { InsertCardView, PageSetup, StationCardView } from './card-view.ts';
+import { pageSetup } from './card-view.ts';
+import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts';
+import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './format.ts';
+import { setPaths, type CardPaths } from './paths.ts';
+
+export interface SiteInfo {
+  readonly title: string;
+  readonly businessName: string;
+  readonly contact: string;
+  readonly page: PageSetup;
+  readonly builtOn: string;
+  readonly baseUrl: string | null;
+  readonly fontFamily: string;
+  /** @font-face sources, site-relative. */
+  readonly fonts: readonly {
+    readonly file: string;
+    readonly weight: string;
+    readonly style: string;
+  }[];
+}
+
+/** One line of a set's list: a card and its links. */
+export interface CardLink {
+  readonly kind: 'station' | 'insert';
+  readonly title: string;
+  readonly potName: string;
+  readonly coffeeName: string;
+  readonly stoveName: string;
+  /** Site-relative page and PDF. */
+  readonly pageUrl: string;
+  readonly pdfFile: string;
+  /** "no recipe" for a refused station card, a row count for an insert; else ''. */
+  readonly status: string;
+  readonly refused: boolean;
+}
+
+export interface SetView {
+  readonly id: string;
+  readonly title: string;
+  readonly layout: 'station' | 'insert';
+  /** "Station cards" or "Bag inserts". */
+  readonly layoutLabel: string;
+  readonly paths: CardPaths;
+  readonly cards: readonly CardLink[];
+}
+
+export interface IndexView {
+  readonly title: string;
+  readonly intro: string;
+  readonly setsHeading: string;
+  readonly moreHeading: string;
+  readonly links: readonly { readonly label: string; readonly url: string }[];
+  readonly columns: {
+    readonly pot: string;
+    readonly coffee: string;
+    readonly stove: string;
+    readonly page: string;
+    readonly pdf: string;
+    readonly open: string;
+    readonly download: string;
+  };
+}
+
+export interface MethodView {
+  readonly title: string;
+  readonly sections: readonly {
+    readonly heading: string;
+    readonly paragraphs: readonly string[];
+  }[];
+  readonly exampleHeading: string;
+  /** A worked comparison from one of the site's own cards; null when no card has a recipe. */
+  readonly example: string | null;
+}
+
+/** One input changed on one card's recipe, and what the model says it does. */
+export interface MoveRow {
+  readonly change: string;
+  readonly firstCoffee: string;
+  readonly meanTemperature: string;
+  readonly inBand: string;
+  readonly peak: string;
+}
+
+export interface MovesView {
+  readonly heading: string;
+  readonly intro: string;
+  readonly columns: typeof troubleshootingWords.movesColumns;
+  readonly rows: readonly MoveRow[];
+}
+
+export interface TroubleshootingView {
+  readonly title: string;
+  readonly intro: string;
+  readonly columns: typeof troubleshootingWords.columns;
+  readonly rows: typeof troubleshootingWords.rows;
+  readonly moves: MovesView | null;
+}
+
+export interface SiteData {
+  readonly site: SiteInfo;
+  readonly nav: typeof cardWords.nav;
+  readonly index: IndexView;
+  readonly sets: readonly SetView[];
+  readonly stationCards: readonly StationCardView[];
+  readonly insertCards: readonly InsertCardView[];
+  readonly method: MethodView;
+  readonly troubleshooting: TroubleshootingView;
+}
+
+/** What the build knows about a set: its id, title, layout and card slugs in order. */
+export interface SetOutline {
+  readonly id: string;
+  readonly title: string;
+  readonly layout: 'station' | 'insert';
+  readonly cardSlugs: readonly string[];
+}
+
+const FACE_CSS: Record<FontFace, { weight: string; style: string }> = {
+  regular: { weight: 'normal', style: 'normal' },
+  bold: { weight: 'bold', style: 'normal' },
+  oblique: { weight: 'normal', style: 'italic' },
+  'bold-oblique': { weight: 'bold', style: 'italic' },
+};
+
+/** Where the build copies the fonts, site-relative. */
+export const FONTS_DIR = 'assets/fonts';
+
+export function siteInfo(catalogue: Catalogue, builtOn: string): SiteInfo {
+  const site = catalogue.site;
+  return {
+    title: cardWords.siteTitle,
+    businessName: site.business.name,
+    contact: site.business.contact,
+    page: pageSetup(site.units, site.paper),
+    builtOn,
+    baseUrl: site.baseUrl ?? null,
+    fontFamily: FONT_FAMILY,
+    fonts: FONT_FACES.map((face) => ({
+      file: `${FONTS_DIR}/${fontFileName(face)}`,
+      ...FACE_CSS[face],
+    })),
+  };
+}
+
+function stationLink(card: StationCardView): CardLink {
+  return {
+    kind: 'station',
+    title: card.title,
+    potName: card.potName,
+    coffeeName: card.coffeeName,
+    stoveName: card.stoveName,
+    pageUrl: card.paths.pageUrl,
+    pdfFile: card.paths.pdfFile,
+    status: card.refusal ? cardWords.index.refused : '',
+    refused: card.refusal !== null,
+  };
+}
+
+function insertLink(card: InsertCardView): CardLink {
+  return {
+    kind: 'insert',
+    title: card.title,
+    potName: '',
+    coffeeName: card.title,
+    stoveName: '',
+    pageUrl: card.paths.pageUrl,
+    pdfFile: card.paths.pdfFile,
+    status: '',
+    refused: false,
+  };
+}
+
+export function setViews(
+  outlines: readonly SetOutline[],
+  stations: ReadonlyMap<string, StationCardView>,
+  inserts: ReadonlyMap<string, InsertCardView>,
+  baseUrl?: string,
+): SetView[] {
+  return outlines.map((set) => ({
+    id: set.id,
+    title: set.title,
+    layout: set.layout,
+    layoutLabel: set.layout === 'station' ? cardWords.index.station : cardWords.index.insert,
+    paths: setPaths(set.id, baseUrl),
+    cards: set.cardSlugs.map((slug) => {
+      if (set.layout === 'station') {
+        const card = stations.get(slug);
+        if (!card) throw new Error(`site view: no station card "${slug}"`);
+        return stationLink(card);
+      }
+      const card = inserts.get(slug);
+      if (!card) throw new Error(`site view: no insert card "${slug}"`);
+      return insertLink(card);
+    }),
+  }));
+}
+
+export function indexView(catalogue: Catalogue): IndexView {
+  const words = cardWords.index;
+  return {
+    title: words.title,
+    intro: words.intro(catalogue.site.business.name),
+    setsHeading: words.sets,
+    moreHeading: words.more,
+    links: [
+      { label: words.method, url: 'method/' },
+      { label: words.troubleshooting, url: 'troubleshooting/' },
+    ],
+    columns: {
+      pot: words.pot,
+      coffee: words.coffee,
+      stove: words.stove,
+      page: words.page,
+      pdf: words.pdf,
+      open: words.open,
+      download: words.download,
+    },
+  };
+}
+
+const aboutClock = (s: number): string => clock(Math.round(s / TIME_STEP_S) * TIME_STEP_S);
+
+/** The method page, with a worked example from the first card that has a cold-start comparison. */
+export function methodView(
+  example: { plan: AcceptedPlan; potName: string; coffeeName: string; stoveName: string } | null,
+  catalogue: Catalogue,
+): MethodView {
+  const units = catalogue.site.units;
+  let text: string | null = null;
+  if (example && example.plan.coldStart.firstCoffeeS !== null) {
+    const p = example.plan;
+    text = methodWords.example({
+      coffee: example.coffeeName,
+      pot: example.potName,
+      stove: example.stoveName,
+      start: temperature(p.startK, units).text,
+      planFirst: aboutClock(p.firstCoffeeS.midS),
+      planShare: share(p.extraction.inBandShare).text,
+      coldFirst: aboutClock(p.coldStart.firstCoffeeS!),
+      coldShare: share(p.coldStart.inBandShare).text,
+      band: temperatureBand(p.targetBandK, units),
+    });
+  }
+  return {
+    title: methodWords.title,
+    sections: methodWords.sections,
+    exampleHeading: methodWords.exampleHeading,
+    example: text,
+  };
+}
+
+export function troubleshootingView(moves: MovesView | null): TroubleshootingView {
+  return {
+    title: troubleshootingWords.title,
+    intro: troubleshootingWords.intro,
+    columns: troubleshootingWords.columns,
+    rows: troubleshootingWords.rows,
+    moves,
+  };
+}
