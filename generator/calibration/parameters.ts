@@ -1,0 +1,95 @@
+/**
+ * The quantities a brew log can calibrate, each with its prior (the entry's current value)
+ * and the range the search may explore (the range the entry's schema accepts, so a fitted
+ * value can always be written back):
+ *   permeability  the coffee bed's Darcy permeability k, m²       → coffees/<id>.yaml permeability_m2
+ *   heat          heat reaching the pot at one stove level, W     → stoves/<id>.yaml levels[i].heat_to_pot_w
+ *   heat-loss     the base's heat-loss coefficient U·A, W/K       → pots/<id>.yaml base.heat_loss_w_per_k
+ * The fit works on their natural logarithms, so they stay positive and a step means the
+ * same relative change whatever the unit.
+ */
+import coffeeSchema from '../content/schemas/coffee.schema.json' with { type: 'json' };
+import potSchema from '../content/schemas/pot.schema.json' with { type: 'json' };
+import stoveSchema from '../content/schemas/stove.schema.json' with { type: 'json' };
+import type { CoffeeEntry, LogEntry, PotEntry, StoveEntry } from '../content/types.ts';
+
+export type ParameterKind = 'permeability' | 'heat' | 'heat-loss';
+
+export interface Parameter {
+  /** `permeability`, `heat:<level>`, `heat-loss`. */
+  readonly id: string;
+  readonly kind: ParameterKind;
+  /** The stove level, for kind 'heat'. */
+  readonly level?: string;
+  /** The entry's current value, SI. */
+  readonly prior: number;
+  /** Range the search may explore, SI. */
+  readonly min: number;
+  readonly max: number;
+}
+
+/** The values one simulation needs, SI. */
+export interface ModelValues {
+  readonly permeabilityM2: number;
+  readonly heatW: ReadonlyMap<string, number>;
+  readonly heatLossWPerK: number;
+}
+
+const RANGE = {
+  permeability: range(coffeeSchema.properties.permeability_m2),
+  heat: range(stoveSchema.properties.levels.items.properties.heat_to_pot_w),
+  'heat-loss': range(potSchema.properties.base.properties.heat_loss_w_per_k),
+} as const;
+
+function range(spec: { minimum: number; maximum: number }): { min: number; max: number } {
+  return { min: spec.minimum, max: spec.maximum };
+}
+
+/**
+ * The candidate parameters of a log: the coffee's permeability, one heat per stove level
+ * the log uses (in the stove's order, gentlest first), and the pot's U·A.
+ */
+export function candidateParameters(
+  log: LogEntry,
+  pot: PotEntry,
+  coffee: CoffeeEntry,
+  stove: StoveEntry,
+): Parameter[] {
+  const used = new Set(log.brews.map((brew) => brew.level));
+  const heats = stove.levels
+    .filter((level) => used.has(level.label))
+    .map((level) => ({
+      id: `heat:${level.label}`,
+      kind: 'heat' as const,
+      level: level.label,
+      prior: level.heatToPotW,
+      ...RANGE.heat,
+    }));
+  return [
+    {
+      id: 'permeability',
+      kind: 'permeability',
+      prior: coffee.bed.permeabilityM2,
+      ...RANGE.permeability,
+    },
+    ...heats,
+    { id: 'heat-loss', kind: 'heat-loss', prior: pot.model.heatLossWPerK, ...RANGE['heat-loss'] },
+  ];
+}
+
+/** The model values with `parameters[i]` set to `values[i]`. */
+export function modelValues(
+  parameters: readonly Parameter[],
+  values: readonly number[],
+): ModelValues {
+  let permeabilityM2 = NaN;
+  let heatLossWPerK = NaN;
+  const heatW = new Map<string, number>();
+  parameters.forEach((parameter, i) => {
+    const value = values[i]!;
+    if (parameter.kind === 'permeability') permeabilityM2 = value;
+    else if (parameter.kind === 'heat-loss') heatLossWPerK = value;
+    else heatW.set(parameter.level!, value);
+  });
+  return { permeabilityM2, heatW, heatLossWPerK };
+}
