@@ -23,7 +23,7 @@ const quantityNames: Record<string, string> = {
 export const planWords = {
   inductionNeedsMagneticBase: (potName: string): Refusal => ({
     code: 'induction-needs-magnetic-base',
-    reason: `${potName} has an aluminium base, which an induction hob cannot heat.`,
+    reason: `${potName}: an induction hob cannot heat its aluminium base.`,
     suggestion:
       'Use a pot with a stainless-steel (magnetic) base, or brew this pot on gas or electric. If this pot has an induction plate, add induction_plate: true to its base.',
   }),
