@@ -2,6 +2,7 @@
 import { buildSite, type BuildResult } from '../build/build-site.ts';
 import { terminalProgress } from '../build/progress.ts';
 import { serveSite } from '../build/serve.ts';
+import { pdfBuildStep } from '../render/pdf/site-pdfs.ts';
 import { buildWords } from '../words/card.ts';
 import { UsageError } from './errors.ts';
 import { parseOptions } from './options.ts';
@@ -44,7 +45,12 @@ export async function run(argv: string[]): Promise<number> {
   const progress = terminalProgress(process.stderr);
   let result: BuildResult;
   try {
-    result = await buildSite({ contentDir, outDir, onProgress: progress });
+    result = await buildSite({
+      contentDir,
+      outDir,
+      onProgress: progress,
+      extraSteps: [pdfBuildStep],
+    });
   } catch (error) {
     progress.finish();
     process.stderr.write(`stovecard: ${buildWords.failed(outDir)}\n`);

@@ -1,0 +1,339 @@
+/**
+ * A set's PDF: its cards in order, one per page, page-numbered and bookmarked. A training
+ * binder opens with front matter first: a contents page, the method pages and the
+ * troubleshooting pages, whose words and numbers come from the site's own views
+ * (MethodView, TroubleshootingView in ../site-view.ts, the same data the HTML pages show).
+ *
+ *   front matter (measured, so the contents can print page numbers) ─▶ contents pages
+ *     ─▶ method pages ─▶ troubleshooting pages ─▶ one page per card (card.ts)
+ */
+import type { PageSetup } from '../card-view.ts';
+import type { MethodView, SetView, TroubleshootingView } from '../site-view.ts';
+import { cardWords } from '../../words/card.ts';
+import { pdfWords } from '../../words/pdf.ts';
+import { addCardPage, cardTitle, type CardPage, type CardView } from './card.ts';
+import { openPdf, pageSizePt, pdfDate } from './document.ts';
+import type { Block, PageBox } from './layout.ts';
+import { drawPageNumber, flowPages, type FlowFrame, type FlowItem } from './pages.ts';
+import { Pen } from './pen.ts';
+import { INK, RULE_SOFT, textPageStyle, type TextPageStyle } from './style.ts';
+
+export interface FrontMatter {
+  readonly method: MethodView;
+  readonly troubleshooting: TroubleshootingView;
+}
+
+export interface SetPdfInput {
+  readonly set: SetView;
+  /** The set's cards, in the set's order. */
+  readonly cards: readonly CardView[];
+  /** Present for a training binder. */
+  readonly frontMatter: FrontMatter | null;
+  /** Paper of the text pages (the site's). */
+  readonly page: PageSetup;
+  readonly author: string;
+  readonly builtOn: string;
+  readonly env?: NodeJS.ProcessEnv;
+}
+
+export interface SetPdf {
+  readonly bytes: Buffer;
+  readonly pages: number;
+  /** Contents, method and troubleshooting pages (0 without front matter). */
+  readonly frontMatterPages: number;
+  readonly cards: readonly CardPage[];
+}
+
+/** A heading or paragraph as a flow block. */
+function para(tag: 'H1' | 'H2' | 'P', text: string, font: TextPageStyle['body'], after = 0): Block {
+  return (pen, x, y, w) => pen.para(tag, text, x, y, w, font) + after;
+}
+
+function methodItems(view: MethodView, st: TextPageStyle): FlowItem[] {
+  const items: FlowItem[] = [{ block: para('H1', view.title, st.h1), keepWithNext: true }];
+  for (const section of view.sections) {
+    items.push({ block: para('H2', section.heading, st.h2), keepWithNext: true });
+    for (const p of section.paragraphs) items.push({ block: para('P', p, st.body) });
+  }
+  if (view.example) {
+    items.push({ block: para('H2', view.exampleHeading, st.h2), keepWithNext: true });
+    items.push({ block: para('P', view.example, st.body) });
+  }
+  return items;
+}
+
+/** A table of short cells: a row-header column of text, the rest numbers (right-aligned). */
+function numberTable(
+  head: readonly string[],
+  rows: readonly (readonly string[])[],
+  st: TextPageStyle,
+): Block {
+  const pad = st.gap * 0.35;
+  return (pen, x, y, w) => {
+    const cols = head.length;
+    const widthOf = (c: number, min: boolean) =>
+      Math.max(
+        min ? pen.minWidth(head[c]!, st.tableHead) : pen.width(head[c]!, st.tableHead),
+        ...rows.map((r) => (min ? pen.minWidth(r[c]!, st.table) : pen.width(r[c]!, st.table))),
+      ) +
+      2 * pad;
+    const lo = Array.from({ length: cols }, (_, c) => widthOf(c, true));
+    const hi = Array.from({ length: cols }, (_, c) => widthOf(c, false));
+    const loSum = lo.reduce((a, b) => a + b, 0);
+    if (loSum > w) return Number.POSITIVE_INFINITY;
+    const want = hi.map((h, c) => h - lo[c]!);
+    const wantSum = want.reduce((a, b) => a + b, 0);
+    const spare = w - loSum;
+    const widths =
+      wantSum >= spare
+        ? lo.map((l, c) => l + (wantSum > 0 ? (want[c]! * spare) / wantSum : 0))
+        : hi.map((h, c) => h + (c === 0 ? spare - wantSum : 0));
+    const lefts = widths.map((_, c) => x + widths.slice(0, c).reduce((a, b) => a + b, 0));
+    const inner = (c: number) => widths[c]! - 2 * pad;
+    let h = 0;
+    pen.group('Table', () => {
+      const headH = Math.max(...head.map((t, c) => pen.height(t, inner(c), st.tableHead)));
+      pen.group('THead', () =>
+        pen.group('TR', () =>
+          head.forEach((t, c) => {
+            const th = pen.height(t, inner(c), st.tableHead);
+            pen.leaf(
+              'TH',
+              () =>
+                pen.write(t, lefts[c]! + pad, y + pad + headH - th, inner(c), st.tableHead, {
+                  align: c === 0 ? 'left' : 'right',
+                }),
+              {
+                scope: 'Column',
+              },
+            );
+          }),
+        ),
+      );
+      h = headH + 2 * pad;
+      pen.rule(x, y + h, w, 1.2, INK);
+      h += 1.2;
+      pen.group('TBody', () =>
+        rows.forEach((row, r) => {
+          const rowH = Math.max(...row.map((t, c) => pen.height(t, inner(c), st.table))) + 2 * pad;
+          pen.group('TR', () =>
+            row.forEach((t, c) => {
+              pen.leaf(
+                c === 0 ? 'TH' : 'TD',
+                () =>
+                  pen.write(t, lefts[c]! + pad, y + h + pad, inner(c), st.table, {
+                    align: c === 0 ? 'left' : 'right',
+                  }),
+                c === 0 ? { scope: 'Row' } : {},
+              );
+            }),
+          );
+          h += rowH;
+          if (r < rows.length - 1) {
+            pen.rule(x, y + h, w, 0.5, RULE_SOFT);
+            h += 0.5;
+          }
+        }),
+      );
+    });
+    return h;
+  };
+}
+
+/** A bold label line and its paragraph, kept together ("What to change" + the advice). */
+function labelled(label: string, text: string, st: TextPageStyle): Block {
+  return (pen, x, y, w) => {
+    const h = pen.para('P', label, x, y, w, st.bodyStrong);
+    return h + pen.para('P', text, x, y + h, w, st.body);
+  };
+}
+
+function troubleshootingItems(view: TroubleshootingView, st: TextPageStyle): FlowItem[] {
+  const items: FlowItem[] = [
+    { block: para('H1', view.title, st.h1), keepWithNext: true },
+    { block: para('P', view.intro, st.lead) },
+  ];
+  for (const row of view.rows) {
+    items.push({ block: para('H2', row.symptom, st.h2), keepWithNext: true });
+    items.push({ block: labelled(view.columns.cause, row.cause, st) });
+    items.push({ block: labelled(view.columns.change, row.change, st) });
+  }
+  const moves = view.moves;
+  if (moves) {
+    const c = moves.columns;
+    items.push({ block: para('H2', moves.heading, st.h2), keepWithNext: true });
+    items.push({ block: para('P', moves.intro, st.body), keepWithNext: true });
+    items.push({
+      block: numberTable(
+        [c.change, c.firstCoffee, c.meanTemperature, c.inBand, c.peak],
+        moves.rows.map((r) => [r.change, r.firstCoffee, r.meanTemperature, r.inBand, r.peak]),
+        st,
+      ),
+    });
+  }
+  return items;
+}
+
+/** A contents line: the entry's text, dot leaders, its page number on the right. */
+function contentsLine(text: string, page: number, st: TextPageStyle): Block {
+  return (pen, x, y, w) => {
+    const number = String(page);
+    const numW = pen.width('0000', st.body);
+    const textW = w - numW - st.gutter;
+    const h = pen.height(text, textW, st.body);
+    pen.group('TOCI', () => {
+      pen.para('P', text, x, y, textW, st.body);
+      const lineH = pen.lineHeight(st.body);
+      pen.artifact(() => {
+        const baseline = y + h - lineH + pen.ascent(st.body);
+        pen.doc
+          .lineWidth(0.6)
+          .dash(0.6, { space: 2.4 })
+          .moveTo(
+            x + Math.min(textW, pen.width(lastLine(pen, text, textW, st), st.body)) + 3,
+            baseline,
+          )
+          .lineTo(x + w - pen.width(number, st.body) - 3, baseline)
+          .stroke(RULE_SOFT)
+          .undash();
+      });
+      pen.para('Reference', number, x + w - numW, y + h - pen.lineHeight(st.body), numW, st.body, {
+        noWrap: true,
+        align: 'right',
+      });
+    });
+    return h;
+  };
+}
+
+/** The text of the last line `text` wraps to at `width` (for the leaders after it). */
+function lastLine(pen: Pen, text: string, width: number, st: TextPageStyle): string {
+  const words = text.split(' ');
+  let line = '';
+  for (const word of words) {
+    const next = line === '' ? word : `${line} ${word}`;
+    line = pen.width(next, st.body) > width ? word : next;
+  }
+  return line;
+}
+
+interface ContentsEntry {
+  readonly text: string;
+  readonly page: number;
+}
+
+function contentsItems(
+  set: SetView,
+  front: readonly ContentsEntry[],
+  cards: readonly ContentsEntry[],
+  st: TextPageStyle,
+): FlowItem[] {
+  const words = pdfWords.contents;
+  const toc = (entries: readonly ContentsEntry[]): FlowItem[] => [
+    { block: (pen) => (pen.open('TOC'), 0), keepWithNext: true },
+    ...entries.map((e) => ({ block: contentsLine(e.text, e.page, st) })),
+    { block: (pen) => (pen.close(), 0) },
+  ];
+  return [
+    { block: para('H1', set.title, st.h1), keepWithNext: true },
+    { block: para('P', words.intro(cards.length), st.lead) },
+    { block: para('H2', words.frontMatter, st.h2), keepWithNext: true },
+    ...toc(front),
+    { block: para('H2', words.cards, st.h2), keepWithNext: true },
+    ...toc(cards),
+  ];
+}
+
+function contentsText(card: CardView): string {
+  const words = pdfWords.contents;
+  if (card.kind === 'insert') return card.title;
+  const line = words.station(card.title, card.subtitle);
+  return card.refusal ? words.refused(line, cardWords.index.refused) : line;
+}
+
+/** A set's cards in one PDF; with front matter, the training binder. */
+export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
+  const [widthPt, heightPt] = pageSizePt(input.page.widthMm, input.page.heightMm);
+  const textPage: PageBox = { widthPt, heightPt };
+  const st = textPageStyle(input.page.paper);
+  const frame: FlowFrame = { page: textPage, marginPt: st.marginPt, gap: st.gap };
+  const open = openPdf({
+    title: pdfWords.setTitle(input.set.title),
+    author: input.author,
+    date: pdfDate(input.builtOn, input.env),
+    idSeed: JSON.stringify({ set: input.set, cards: input.cards, front: input.frontMatter }),
+  });
+  const { doc } = open;
+  const measure = new Pen(doc, false);
+
+  // Front matter is measured first: the contents needs every part's first page.
+  let parts: { title: string; items: FlowItem[]; pages: number }[] = [];
+  let contents: FlowItem[] = [];
+  let contentsPages = 0;
+  if (input.frontMatter) {
+    const { method, troubleshooting } = input.frontMatter;
+    parts = [
+      { title: method.title, items: methodItems(method, st), pages: 0 },
+      { title: troubleshooting.title, items: troubleshootingItems(troubleshooting, st), pages: 0 },
+    ];
+    for (const part of parts) part.pages = flowPages(measure, frame, part.items, () => {});
+    // Page numbers only widen to another digit rarely; measure with the final ones.
+    const contentsFor = (first: number) => {
+      let page = first;
+      const front = parts.map((part) => {
+        const entry = { text: part.title, page };
+        page += part.pages;
+        return entry;
+      });
+      const cards = input.cards.map((card, i) => ({ text: contentsText(card), page: page + i }));
+      return contentsItems(input.set, front, cards, st);
+    };
+    contentsPages = flowPages(measure, frame, contentsFor(2), () => {});
+    contents = contentsFor(contentsPages + 1);
+    const again = flowPages(measure, frame, contents, () => {});
+    if (again !== contentsPages) {
+      contentsPages = again;
+      contents = contentsFor(contentsPages + 1);
+    }
+  }
+  const frontMatterPages = contentsPages + parts.reduce((sum, part) => sum + part.pages, 0);
+  const total = frontMatterPages + input.cards.length;
+
+  let pageNo = 0;
+  const pen = new Pen(doc, true, open.root);
+  const newTextPage = () => {
+    doc.addPage({ size: [widthPt, heightPt], margin: 0 });
+    pageNo += 1;
+    drawPageNumber(pen, textPage, st.marginPt, pdfWords.pageNumber(pageNo, total), st.pageNumber);
+  };
+  if (input.frontMatter) {
+    pen.group('Sect', () => flowPages(pen, frame, contents, newTextPage), {
+      title: pdfWords.contents.heading,
+    });
+    doc.outline.addItem(pdfWords.contents.heading, { pageNumber: 0 } as never);
+    for (const part of parts) {
+      const first = pageNo;
+      pen.group('Sect', () => flowPages(pen, frame, part.items, newTextPage), {
+        title: part.title,
+      });
+      doc.outline.addItem(part.title, { pageNumber: first } as never);
+    }
+  }
+  const cards: CardPage[] = [];
+  for (const card of input.cards) {
+    const result = addCardPage(open, card);
+    pageNo += 1;
+    const box = { widthPt: doc.page.width, heightPt: doc.page.height };
+    drawPageNumber(
+      pen,
+      box,
+      result.fit.style.marginPt,
+      pdfWords.pageNumber(pageNo, total),
+      st.pageNumber,
+    );
+    doc.outline.addItem(cardTitle(card));
+    cards.push(result);
+  }
+  const bytes = await open.finish();
+  return { bytes, pages: pageNo, frontMatterPages, cards };
+}

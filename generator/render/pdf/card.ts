@@ -1,0 +1,94 @@
+/**
+ * One card on one page: the pure core the PDF files are made of.
+ *
+ *   card view ─ fitCard (measure at font steps) ─▶ CardFit ─ drawCard (same blocks, drawing
+ *   pen) ─▶ a page of the card's paper size in an open document
+ *
+ * `cardPdf` makes the one-page PDF twin of a card; sets and binders add card pages to a
+ * longer document with `addCardPage`.
+ */
+import type { InsertCardView, StationCardView } from '../card-view.ts';
+import { pdfWords } from '../../words/pdf.ts';
+import { openPdf, pageSizePt, pdfDate, type OpenPdf } from './document.ts';
+import { insertFrame } from './insert-card.ts';
+import { fitCard, placeCard, type CardFit, type CardFrame, type PageBox } from './layout.ts';
+import { Pen } from './pen.ts';
+import { stationFrame } from './station-card.ts';
+import type { CardStyle } from './style.ts';
+
+export type CardView = StationCardView | InsertCardView;
+
+/** A card whose text does not fit one page even at the smallest font step. */
+export class PdfLayoutError extends Error {
+  constructor(
+    readonly cardId: string,
+    readonly fit: CardFit,
+  ) {
+    super(pdfWords.doesNotFit(cardId, fit.style.paper, fit.usedHeightPt, fit.availableHeightPt));
+    this.name = 'PdfLayoutError';
+  }
+}
+
+export function pageBox(view: CardView): PageBox {
+  const [widthPt, heightPt] = pageSizePt(view.page.widthMm, view.page.heightMm);
+  return { widthPt, heightPt };
+}
+
+export function cardFrame(view: CardView, style: CardStyle): CardFrame {
+  return view.kind === 'station' ? stationFrame(view, style) : insertFrame(view, style);
+}
+
+export function cardTitle(view: CardView): string {
+  return view.kind === 'station'
+    ? pdfWords.stationTitle(view.title, view.subtitle)
+    : pdfWords.insertTitle(view.title);
+}
+
+/** Measures the card at its paper's font steps; needs only a document for the fonts. */
+export function layoutCard(doc: PDFKit.PDFDocument, view: CardView): CardFit {
+  return fitCard(new Pen(doc, false), pageBox(view), view.page.paper, (style) =>
+    cardFrame(view, style),
+  );
+}
+
+export interface CardPage {
+  readonly fit: CardFit;
+  /** svg-to-pdfkit's complaints about the drawings (none expected). */
+  readonly warnings: readonly string[];
+}
+
+/** Adds a page of the card's size to `open` and draws the card on it, tagged as an article. */
+export function addCardPage(open: OpenPdf, view: CardView): CardPage {
+  const page = pageBox(view);
+  open.doc.addPage({ size: [page.widthPt, page.heightPt], margin: 0 });
+  const fit = layoutCard(open.doc, view);
+  if (!fit.fits) throw new PdfLayoutError(view.id, fit);
+  const pen = new Pen(open.doc, true, open.root);
+  pen.group('Art', () => placeCard(pen, page, fit.style, cardFrame(view, fit.style)), {
+    title: view.title,
+  });
+  return { fit, warnings: pen.warnings };
+}
+
+export interface CardPdf extends CardPage {
+  readonly bytes: Buffer;
+}
+
+export interface PdfContext {
+  /** Who prints the cards (Info Author, dc:creator). */
+  readonly author: string;
+  /** For SOURCE_DATE_EPOCH; default process.env. */
+  readonly env?: NodeJS.ProcessEnv;
+}
+
+/** The one-page PDF twin of a card. */
+export async function cardPdf(view: CardView, context: PdfContext): Promise<CardPdf> {
+  const open = openPdf({
+    title: cardTitle(view),
+    author: context.author,
+    date: pdfDate(view.footer.builtOn, context.env),
+    idSeed: JSON.stringify(view),
+  });
+  const page = addCardPage(open, view);
+  return { ...page, bytes: await open.finish() };
+}

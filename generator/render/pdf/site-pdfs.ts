@@ -1,0 +1,119 @@
+/**
+ * Every PDF of the site, written into the build's temporary folder before it is swapped
+ * in (buildSite's `extraSteps`):
+ *
+ *   cards/<pot>--<coffee>--<stove>.pdf   each station card, beside its index.html folder
+ *   inserts/<slug>.pdf                   each bag insert
+ *   sets/<set>.pdf                       each set's cards in order; a training set (its id
+ *                                        contains "training") opens with the binder's
+ *                                        contents, method and troubleshooting pages
+ *
+ * The file names are the views' `paths.pdfFile` (../paths.ts), the same the pages link.
+ */
+import { mkdir, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import type { SetView, SiteData } from '../site-view.ts';
+import { cardPdf, type CardView } from './card.ts';
+import { setPdf, type FrontMatter } from './binder.ts';
+
+/** What the step reports, in the build's terms (phase 'steps', PDFs written of all). */
+export type PdfProgress = (event: {
+  readonly phase: 'steps';
+  readonly done: number;
+  readonly total: number;
+}) => void;
+
+export interface PdfFile {
+  /** Site-relative path. */
+  readonly file: string;
+  readonly pages: number;
+  readonly bytes: number;
+  readonly ms: number;
+}
+
+export interface PdfReport {
+  readonly files: readonly PdfFile[];
+  readonly ms: number;
+}
+
+/** A set gets the binder's front matter when its id says it is for training. */
+export function isTrainingSet(set: Pick<SetView, 'id'>): boolean {
+  return /training/i.test(set.id);
+}
+
+/** The set's cards as views, in the set's order. */
+export function setCards(set: SetView, data: SiteData): CardView[] {
+  const byPdf = new Map<string, CardView>();
+  for (const card of [...data.stationCards, ...data.insertCards])
+    byPdf.set(card.paths.pdfFile, card);
+  return set.cards.map((link) => {
+    const card = byPdf.get(link.pdfFile);
+    if (!card)
+      throw new Error(`PDF: set "${set.id}" lists ${link.pdfFile}, which no card view has`);
+    return card;
+  });
+}
+
+async function write(siteDir: string, file: string, bytes: Buffer): Promise<void> {
+  const target = path.join(siteDir, file);
+  await mkdir(path.dirname(target), { recursive: true });
+  await writeFile(target, bytes);
+}
+
+/** Writes every card's PDF and every set's PDF into `siteDir`. */
+export async function writeSitePdfs(
+  siteDir: string,
+  data: SiteData,
+  onProgress: PdfProgress = () => {},
+  env: NodeJS.ProcessEnv = process.env,
+): Promise<PdfReport> {
+  const started = performance.now();
+  const author = data.site.businessName;
+  const cards: CardView[] = [...data.stationCards, ...data.insertCards];
+  const total = cards.length + data.sets.length;
+  const files: PdfFile[] = [];
+  onProgress({ phase: 'steps', done: 0, total });
+  for (const card of cards) {
+    const t = performance.now();
+    const pdf = await cardPdf(card, { author, env });
+    await write(siteDir, card.paths.pdfFile, pdf.bytes);
+    files.push({
+      file: card.paths.pdfFile,
+      pages: 1,
+      bytes: pdf.bytes.length,
+      ms: performance.now() - t,
+    });
+    onProgress({ phase: 'steps', done: files.length, total });
+  }
+  const frontMatter: FrontMatter = { method: data.method, troubleshooting: data.troubleshooting };
+  for (const set of data.sets) {
+    const t = performance.now();
+    const pdf = await setPdf({
+      set,
+      cards: setCards(set, data),
+      frontMatter: isTrainingSet(set) ? frontMatter : null,
+      page: data.site.page,
+      author,
+      builtOn: data.site.builtOn,
+      env,
+    });
+    await write(siteDir, set.paths.pdfFile, pdf.bytes);
+    files.push({
+      file: set.paths.pdfFile,
+      pages: pdf.pages,
+      bytes: pdf.bytes.length,
+      ms: performance.now() - t,
+    });
+    onProgress({ phase: 'steps', done: files.length, total });
+  }
+  return { files, ms: performance.now() - started };
+}
+
+/** buildSite's extra step (generator/build/build-site.ts BuildStep). */
+export async function pdfBuildStep(context: {
+  readonly siteDir: string;
+  readonly data: SiteData;
+  readonly onProgress: PdfProgress;
+}): Promise<void> {
+  await writeSitePdfs(context.siteDir, context.data, context.onProgress);
+}

@@ -1,0 +1,79 @@
+/**
+ * Reading PDFs back in tests with pdfjs-dist's legacy build (runs in Node without a
+ * canvas or poppler): page count and sizes, text per page, the XMP packet, MarkInfo and
+ * the structure tree.
+ */
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+
+export interface StructNode {
+  readonly role?: string;
+  readonly alt?: string;
+  readonly children?: readonly (StructNode | { readonly type: string })[];
+}
+
+export interface ReadPdf {
+  readonly pages: number;
+  /** [width, height] of each page, pt. */
+  readonly sizes: readonly (readonly [number, number])[];
+  /** Text of each page, items joined with spaces (line ends as spaces). */
+  readonly text: readonly string[];
+  /** The raw XMP packet. */
+  readonly xmp: string;
+  readonly info: Record<string, unknown>;
+  readonly marked: boolean;
+  /** Structure tree of each page (pdfjs's view of it). */
+  readonly structure: readonly (StructNode | null)[];
+}
+
+export async function readPdf(bytes: Uint8Array): Promise<ReadPdf> {
+  const doc = await getDocument({
+    data: new Uint8Array(bytes),
+    isEvalSupported: false,
+    useSystemFonts: false,
+    verbosity: 0,
+  }).promise;
+  try {
+    const sizes: [number, number][] = [];
+    const text: string[] = [];
+    const structure: (StructNode | null)[] = [];
+    for (let i = 1; i <= doc.numPages; i++) {
+      const page = await doc.getPage(i);
+      const [x0, y0, x1, y1] = page.view as [number, number, number, number];
+      sizes.push([x1 - x0, y1 - y0]);
+      const content = await page.getTextContent();
+      text.push(
+        content.items
+          .map((item) => ('str' in item ? item.str + (item.hasEOL ? ' ' : '') : ''))
+          .join(' '),
+      );
+      structure.push((await page.getStructTree()) as StructNode | null);
+    }
+    const meta = await doc.getMetadata();
+    const markInfo = (await doc.getMarkInfo()) as { Marked?: boolean } | null;
+    return {
+      pages: doc.numPages,
+      sizes,
+      text,
+      xmp: meta.metadata?.getRaw() ?? '',
+      info: meta.info as Record<string, unknown>,
+      marked: markInfo?.Marked === true,
+      structure,
+    };
+  } finally {
+    await doc.destroy();
+  }
+}
+
+/** Text with every run of white space (spaces, no-break spaces, line ends) removed. */
+export function squash(text: string): string {
+  return text.replace(/[\s\u00a0\u202f]+/g, '');
+}
+
+/** Every node of a structure tree, depth first (the reading order). */
+export function structNodes(node: StructNode | null): StructNode[] {
+  if (!node) return [];
+  const out: StructNode[] = [node];
+  for (const child of node.children ?? [])
+    if ('role' in child || 'children' in child) out.push(...structNodes(child as StructNode));
+  return out;
+}
