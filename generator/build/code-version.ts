@@ -1,62 +1,105 @@
 /**
- * The code version of a plan: sha256 over the source of everything that decides what a
- * plan contains (the simulation, physics, numerics, the planner, and the planner's words,
- * which are copied into refusals and warnings). Any edit there invalidates every cached
- * plan; edits to the loader, the renderers or the templates do not.
+ * Code versions the caches are keyed by: sha256 over the source files whose code decides
+ * what a cached item contains, so any edit there invalidates exactly those items.
+ *
+ *   plan     the simulation, physics, numerics, the planner and the planner's words (which
+ *            are copied into refusals and warnings); loader, renderer or template edits
+ *            keep every plan
+ *   render   the renderers (views, charts, drawings, PDFs) and every word they print, and
+ *            the installed packages (package-lock.json: vega, qrcode, pdfkit, the fonts)
+ *   page     the templates and the Eleventy wiring, and the installed packages
+ *
+ * A view or PDF is keyed by its plan's key as well, so it also follows the plan code.
  */
 import { createHash } from 'node:crypto';
 import { readdir, readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-const generatorDir = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
+const projectDir = path.dirname(path.dirname(path.dirname(fileURLToPath(import.meta.url))));
 
 /** Folders and files under generator/ whose source makes up the plan's code version. */
 export const PLAN_SOURCES: readonly string[] = [
-  'brew',
-  'physics',
-  'numerics',
-  'planning',
-  'words/plan.ts',
+  'generator/brew',
+  'generator/physics',
+  'generator/numerics',
+  'generator/planning',
+  'generator/words/plan.ts',
 ];
 
+/** … of the render code version (views, charts, drawings, PDFs). */
+export const RENDER_SOURCES: readonly string[] = [
+  'generator/render',
+  'generator/words',
+  'package-lock.json',
+];
+
+/** … of the page code version (what Eleventy makes of a view). */
+export const PAGE_SOURCES: readonly string[] = [
+  'templates',
+  '.eleventy.js',
+  'generator/render/eleventy-setup.ts',
+  'package-lock.json',
+];
+
+const SOURCE_FILE = /\.(ts|mjs|js|json|njk|css)$/;
+
 async function sourceFiles(relative: string): Promise<string[]> {
-  const full = path.join(generatorDir, relative);
-  if (relative.endsWith('.ts')) return [relative];
+  const full = path.join(projectDir, relative);
   let entries;
   try {
     entries = await readdir(full, { withFileTypes: true });
   } catch (error) {
-    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return [];
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === 'ENOTDIR') return [relative];
+    if (code === 'ENOENT') return [];
     throw error;
   }
   const files: string[] = [];
   for (const entry of entries) {
     const child = `${relative}/${entry.name}`;
     if (entry.isDirectory()) files.push(...(await sourceFiles(child)));
-    else if (entry.isFile() && /\.(ts|json)$/.test(entry.name)) files.push(child);
+    else if (entry.isFile() && SOURCE_FILE.test(entry.name)) files.push(child);
   }
   return files;
 }
 
-let memo: Promise<string> | null = null;
+async function versionOf(sources: readonly string[]): Promise<string> {
+  const files = (await Promise.all(sources.map(sourceFiles))).flat().sort();
+  const hash = createHash('sha256');
+  for (const file of files) {
+    hash.update(`${file}\0`);
+    hash.update(await readFile(path.join(projectDir, file)));
+    hash.update('\0');
+  }
+  return hash.digest('hex');
+}
+
+const memo = new Map<readonly string[], Promise<string>>();
+
+function memoised(sources: readonly string[]): Promise<string> {
+  let version = memo.get(sources);
+  if (!version) {
+    version = versionOf(sources);
+    memo.set(sources, version);
+  }
+  return version;
+}
 
 /** Hex sha256 of the plan sources (names and bytes, sorted by name); computed once per process. */
 export function planCodeVersion(): Promise<string> {
-  memo ??= (async () => {
-    const files = (await Promise.all(PLAN_SOURCES.map(sourceFiles))).flat().sort();
-    const hash = createHash('sha256');
-    for (const file of files) {
-      hash.update(`${file}\0`);
-      hash.update(await readFile(path.join(generatorDir, file)));
-      hash.update('\0');
-    }
-    return hash.digest('hex');
-  })();
-  return memo;
+  return memoised(PLAN_SOURCES);
 }
 
-/** For tests and long-running servers that edit the sources: forget the memoised version. */
-export function forgetPlanCodeVersion(): void {
-  memo = null;
+export function renderCodeVersion(): Promise<string> {
+  return memoised(RENDER_SOURCES);
+}
+
+export function pageCodeVersion(): Promise<string> {
+  return memoised(PAGE_SOURCES);
+}
+
+/** For tests and long-running servers that edit the sources: forget the memoised versions. */
+export function forgetCodeVersions(): void {
+  memo.clear();
 }

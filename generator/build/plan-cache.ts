@@ -7,10 +7,10 @@
  * delivers nothing) are written as tagged objects so they come back as numbers.
  */
 import { createHash } from 'node:crypto';
-import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { CoffeeEntry, PotEntry, SiteEntry, StoveEntry } from '../content/types.ts';
 import type { CardPlan } from '../planning/types.ts';
+import { FileCache } from './file-cache.ts';
 
 /** Bumped when the cache file layout changes. */
 const CACHE_FORMAT = 1;
@@ -61,46 +61,71 @@ export function planKey(input: PlanKeyInput): string {
 
 const NON_FINITE = '$nonFinite';
 
-export function planToJson(plan: CardPlan): string {
-  return JSON.stringify(plan, (_key, v: unknown) =>
+/** JSON of plain data, with non-finite numbers as tagged objects (JSON has none). */
+export function toTaggedJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) =>
     typeof v === 'number' && !Number.isFinite(v) ? { [NON_FINITE]: String(v) } : v,
   );
 }
 
-export function planFromJson(text: string): CardPlan {
+/** The inverse of toTaggedJson (text without a tagged number parses without a reviver). */
+export function fromTaggedJson<T>(text: string): T {
+  if (!text.includes(NON_FINITE)) return JSON.parse(text) as T;
   return JSON.parse(text, (_key, v: unknown) => {
     if (v && typeof v === 'object' && NON_FINITE in v && Object.keys(v).length === 1) {
       return Number((v as Record<string, string>)[NON_FINITE]);
     }
     return v;
-  }) as CardPlan;
+  }) as T;
+}
+
+export function planToJson(plan: CardPlan): string {
+  return toTaggedJson(plan);
+}
+
+export function planFromJson(text: string): CardPlan {
+  return fromTaggedJson<CardPlan>(text);
 }
 
 export class PlanCache {
   readonly dir: string;
+  private readonly files: FileCache;
 
   constructor(cacheDir: string) {
     this.dir = path.join(cacheDir, 'plans');
-  }
-
-  private file(key: string): string {
-    return path.join(this.dir, `${key}.json`);
+    this.files = new FileCache(this.dir, '.json');
   }
 
   /** The cached plan, or null when absent or unreadable (a damaged file is re-planned). */
   async get(key: string): Promise<CardPlan | null> {
+    const text = await this.files.getText(key);
+    if (text === null) return null;
     try {
-      return planFromJson(await readFile(this.file(key), 'utf8'));
+      return planFromJson(text);
     } catch {
       return null;
     }
   }
 
-  /** Written to a temporary name and renamed, so a crash never leaves half a file. */
+  async has(key: string): Promise<boolean> {
+    return this.files.has(key);
+  }
+
+  /** The cached planToJson text, unparsed (null when absent). */
+  getText(key: string): Promise<string | null> {
+    return this.files.getText(key);
+  }
+
+  getTextSync(key: string): string | null {
+    return this.files.getTextSync(key);
+  }
+
   async put(key: string, plan: CardPlan): Promise<void> {
-    await mkdir(this.dir, { recursive: true });
-    const tmp = `${this.file(key)}.tmp-${process.pid}`;
-    await writeFile(tmp, planToJson(plan));
-    await rename(tmp, this.file(key));
+    await this.putJson(key, planToJson(plan));
+  }
+
+  /** A plan already as planToJson text (as the worker pool returns it). */
+  async putJson(key: string, json: string): Promise<void> {
+    await this.files.put(key, json);
   }
 }

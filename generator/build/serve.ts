@@ -11,8 +11,8 @@ import http from 'node:http';
 import path from 'node:path';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
-import { buildSite, type BuildResult } from './build-site.ts';
-import { forgetPlanCodeVersion } from './code-version.ts';
+import { buildSite, type BuildResult, type BuildStep } from './build-site.ts';
+import { forgetCodeVersions } from './code-version.ts';
 import { TEMPLATES_DIR } from './eleventy.ts';
 
 export interface ServeOptions {
@@ -20,6 +20,8 @@ export interface ServeOptions {
   readonly outDir: string;
   readonly port: number;
   readonly cacheDir?: string;
+  /** Each rebuild's extra steps, as the first build had them (e.g. the PDFs). */
+  readonly extraSteps?: readonly BuildStep[];
   readonly log: (line: string) => void;
   /** One line describing a finished build. */
   readonly describe?: (result: BuildResult) => string;
@@ -100,12 +102,13 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
     running = (async () => {
       do {
         again = false;
-        forgetPlanCodeVersion();
+        forgetCodeVersions();
         try {
           const result = await buildSite({
             contentDir: options.contentDir,
             outDir: options.outDir,
             ...(options.cacheDir ? { cacheDir: options.cacheDir } : {}),
+            ...(options.extraSteps ? { extraSteps: options.extraSteps } : {}),
           });
           options.log(
             buildWords.rebuilt(

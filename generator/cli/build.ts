@@ -3,8 +3,10 @@ import { buildSite, type BuildResult } from '../build/build-site.ts';
 import { terminalProgress } from '../build/progress.ts';
 import { serveSite } from '../build/serve.ts';
 import { pdfBuildStep } from '../render/pdf/site-pdfs.ts';
+import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
 import { UsageError } from './errors.ts';
+import { checkOutFolder } from './out-folder.ts';
 import { parseOptions } from './options.ts';
 
 export function summaryLine(result: BuildResult): string {
@@ -18,6 +20,17 @@ export function summaryLine(result: BuildResult): string {
     refused: result.refused,
     seconds: result.durationMs / 1000,
   });
+}
+
+/** The build log's copy of every warning the station cards print, one line each. */
+export function warningLines(result: BuildResult): string {
+  return result.data.stationCards
+    .flatMap((card) =>
+      (card.warnings?.items ?? []).map(
+        (text) => `${buildWords.cardWarning(card.potId, card.coffeeId, card.stoveId, text)}\n`,
+      ),
+    )
+    .join('');
 }
 
 function portOption(raw: string | boolean | undefined): number {
@@ -42,6 +55,7 @@ export async function run(argv: string[]): Promise<number> {
   const contentDir = typeof values.content === 'string' ? values.content : 'content';
   const outDir = typeof values.out === 'string' ? values.out : 'site';
   const port = portOption(values.port);
+  await checkOutFolder(contentDir, outDir);
   const progress = terminalProgress(process.stderr);
   let result: BuildResult;
   try {
@@ -54,9 +68,15 @@ export async function run(argv: string[]): Promise<number> {
   } catch (error) {
     progress.finish();
     process.stderr.write(`stovecard: ${buildWords.failed(outDir)}\n`);
+    // A whole content folder: the report with its heading, every problem of every file.
+    if (error instanceof ContentErrors) {
+      process.stderr.write(`${formatContentErrors(error)}\n`);
+      return 2;
+    }
     throw error;
   }
   progress.finish();
+  process.stderr.write(warningLines(result));
   process.stderr.write(`${summaryLine(result)}\n`);
   if (values.serve) {
     await serveSite({

@@ -1,5 +1,5 @@
 /** Turning failures into one clear line on stderr and an exit code. */
-import { ContentErrors, formatContentErrors } from '../content/index.ts';
+import { ContentErrors } from '../content/index.ts';
 import { BrewSetupError } from '../brew/errors.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
 
@@ -13,9 +13,15 @@ export class InputError extends Error {
   override readonly name = 'InputError';
 }
 
+/**
+ * A command that reads single entry files (simulate, plan, fit) prints each problem as one
+ * `stovecard: file:line:column field — …` line; `build`, which reads a whole content folder,
+ * prints the heading report itself (see build.ts).
+ */
 export function reportError(error: unknown): number {
   if (error instanceof ContentErrors) {
-    process.stderr.write(formatContentErrors(error) + '\n');
+    const lines = error.issues.length > 0 ? error.issues.map(String) : [error.message];
+    process.stderr.write(lines.map((line) => `stovecard: ${line}\n`).join(''));
     return 2;
   }
   if (
@@ -29,6 +35,7 @@ export function reportError(error: unknown): number {
   }
   const message = error instanceof Error ? error.message : String(error);
   process.stderr.write(`stovecard: internal error: ${message}\n`);
-  if (process.env.STOVECARD_DEBUG && error instanceof Error) process.stderr.write(`${error.stack}\n`);
+  if (process.env.STOVECARD_DEBUG && error instanceof Error)
+    process.stderr.write(`${error.stack}\n`);
   return 1;
 }

@@ -1,11 +1,13 @@
 /** `stovecard plan`: the recipe a card would print for one pot × coffee × stove. */
 import { loadCoffeeFile, loadPotFile, loadStoveFile } from '../content/index.ts';
 import { planCard } from '../planning/plan.ts';
-import { DEFAULT_ROOM } from '../planning/setup.ts';
+import { maxSafeFill } from '../planning/fill.ts';
+import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
 import { cliWords } from '../words/cli.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
-import { UsageError } from './errors.ts';
+import { InputError, UsageError } from './errors.ts';
+import { allEntries } from './load-entries.ts';
 import { numberOption, parseOptions, requiredString } from './options.ts';
 
 export async function run(argv: string[]): Promise<number> {
@@ -23,25 +25,37 @@ export async function run(argv: string[]): Promise<number> {
     process.stdout.write(cliWords.planHelp);
     return 0;
   }
-  const [pot, coffee, stove] = await Promise.all([
-    loadPotFile(requiredString(values, 'pot', cliWords.planHelp)),
-    loadCoffeeFile(requiredString(values, 'coffee', cliWords.planHelp)),
-    loadStoveFile(requiredString(values, 'stove', cliWords.planHelp)),
-  ]);
+  const files = {
+    pot: requiredString(values, 'pot', cliWords.planHelp),
+    coffee: requiredString(values, 'coffee', cliWords.planHelp),
+    stove: requiredString(values, 'stove', cliWords.planHelp),
+  };
   const ambientC = numberOption(values, 'ambient-c');
+  const altitudeM = numberOption(values, 'altitude-m');
   const presets = typeof values['presets-c'] === 'string' ? parsePresets(values['presets-c']) : undefined;
   const fillMl = numberOption(values, 'fill-ml');
+  const [pot, coffee, stove] = await allEntries([
+    loadPotFile(files.pot),
+    loadCoffeeFile(files.coffee),
+    loadStoveFile(files.stove),
+  ]);
+  const room = {
+    ambientK: ambientC !== undefined ? fromCelsius(ambientC) : DEFAULT_ROOM.ambientK,
+    altitudeM: altitudeM ?? DEFAULT_ROOM.altitudeM,
+  };
   const plan = planCard({
     pot,
     coffee,
     stove,
-    room: {
-      ambientK: ambientC !== undefined ? fromCelsius(ambientC) : DEFAULT_ROOM.ambientK,
-      altitudeM: numberOption(values, 'altitude-m') ?? DEFAULT_ROOM.altitudeM,
-    },
+    room,
     ...(presets ? { kettlePresetsK: presets.map(fromCelsius) } : {}),
     ...(fillMl !== undefined ? { fillM3: fromMl(fillMl) } : {}),
   });
+  // A --fill-ml above the valve is a wrong flag, as in `simulate`: one line and exit 2.
+  if (fillMl !== undefined && plan.refused?.code === 'fill-above-valve') {
+    const limit = maxSafeFill(pot.model, room.ambientK, roomModel(room).ambientPa);
+    throw new InputError(cliWords.fillAboveValve(fillMl, Math.floor(toMl(limit.maxFillM3))));
+  }
   process.stdout.write(values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan));
   return plan.refused ? 3 : 0;
 }

@@ -6,6 +6,7 @@ import { maxSafeFill } from '../planning/fill.ts';
 import { cliWords } from '../words/cli.ts';
 import { fromCelsius, fromMl, round, toMl } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
+import { allEntries } from './load-entries.ts';
 import { numberOption, parseOptions, requiredString } from './options.ts';
 import { brewJson, brewSummary } from './brew-output.ts';
 
@@ -29,21 +30,24 @@ export async function run(argv: string[]): Promise<number> {
   }
   const potFile = requiredString(values, 'pot', cliWords.simulateHelp);
   const coffeeFile = requiredString(values, 'coffee', cliWords.simulateHelp);
-  const [pot, coffee] = await Promise.all([loadPotFile(potFile), loadCoffeeFile(coffeeFile)]);
-
+  const stoveFile = typeof values.stove === 'string' ? values.stove : undefined;
   const powerW = numberOption(values, 'power-w');
+  // Exactly one of the two ways to say the heat.
+  if ((stoveFile === undefined) === (powerW === undefined)) throw new UsageError(cliWords.levelOrPower);
+  const label = stoveFile !== undefined ? requiredString(values, 'level', cliWords.simulateHelp) : '';
+  const [pot, coffee, stove] = await allEntries([
+    loadPotFile(potFile),
+    loadCoffeeFile(coffeeFile),
+    stoveFile !== undefined ? loadStoveFile(stoveFile) : undefined,
+  ]);
+
   let heatInputW: number;
-  if (typeof values.stove === 'string') {
-    if (powerW !== undefined) throw new UsageError(cliWords.levelOrPower);
-    const stove = await loadStoveFile(values.stove);
-    const label = requiredString(values, 'level', cliWords.simulateHelp);
+  if (stove !== undefined) {
     const level = stove.levels.find((l) => l.label === label);
-    if (!level) throw new UsageError(cliWords.levelNotFound(label, values.stove, stove.levels.map((l) => l.label)));
+    if (!level) throw new UsageError(cliWords.levelNotFound(label, stoveFile!, stove.levels.map((l) => l.label)));
     heatInputW = level.heatToPotW;
-  } else if (powerW !== undefined) {
-    heatInputW = powerW;
   } else {
-    throw new UsageError(cliWords.levelOrPower);
+    heatInputW = powerW!;
   }
 
   const ambientC = numberOption(values, 'ambient-c');

@@ -6,7 +6,7 @@
  *     ─▶ logs and site.yaml: the same, plus the ids and levels they name
  *     ─▶ Catalogue, or one ContentErrors listing every issue of every file
  */
-import { readdir } from 'node:fs/promises';
+import { readdir, stat } from 'node:fs/promises';
 import { extname, join } from 'node:path';
 import { contentWords } from '../words/content.ts';
 import { buildCoffee } from './coffee.ts';
@@ -49,15 +49,24 @@ const compare = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
 async function listFolder(contentDir: string, kind: FolderKind): Promise<Listing> {
   const folder = FOLDERS[kind];
   let names: string[];
+  const issues: ContentIssue[] = [];
   try {
     const entries = await readdir(join(contentDir, folder), { withFileTypes: true });
     names = entries.filter((entry) => entry.isFile()).map((entry) => entry.name);
+    // A link to a shared entry file counts as that file; a broken or looping link is an issue.
+    for (const entry of entries.filter((each) => each.isSymbolicLink())) {
+      if (!['.yaml', '.yml'].includes(extname(entry.name))) continue;
+      try {
+        if ((await stat(join(contentDir, folder, entry.name))).isFile()) names.push(entry.name);
+      } catch (error) {
+        issues.push(unreadable(`${folder}/${entry.name}`, error));
+      }
+    }
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code === 'ENOENT') return { files: [], issues: [] };
     return { files: [], issues: [unreadable(folder, error)] };
   }
   const files: ListedFile[] = [];
-  const issues: ContentIssue[] = [];
   const fileOfId = new Map<string, string>();
   const yamlNames = names.filter((each) => ['.yaml', '.yml'].includes(extname(each)));
   // By id, then by name: ids come out sorted even where `a-b.yaml` sorts before `a.yaml`.

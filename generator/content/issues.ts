@@ -16,6 +16,7 @@ export type ContentIssueCode =
   | 'yaml-syntax'
   | 'duplicate-key'
   | 'too-many-aliases'
+  | 'too-deep'
   | 'empty-file'
   | 'unknown-key'
   | 'missing-key'

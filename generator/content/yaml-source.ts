@@ -54,6 +54,22 @@ function yamlIssue(source: YamlSource, error: YAMLError): ContentIssue {
   return new ContentIssue('yaml-syntax', at, contentWords.yamlSyntax(detail, error.code));
 }
 
+function tooDeepAt(source: YamlSource, offset: number): ContentIssue {
+  const at = { ...positionOfOffset(source, offset), file: source.file, field: '' };
+  return new ContentIssue('too-deep', at, contentWords.nestedTooDeeply());
+}
+
+/** The same problem at the same place once (the yaml package can repeat an error per level). */
+function uniqueIssues(issues: readonly ContentIssue[]): ContentIssue[] {
+  const seen = new Set<string>();
+  return issues.filter((issue) => {
+    const key = `${issue.line}:${issue.column}:${issue.code}:${issue.problem}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
 /**
  * Parse one file's text. Syntax errors come back as issues with positions and no value; a
  * duplicate key is an issue too, but the rest of the file is still read (the later value wins).
@@ -63,12 +79,20 @@ export function parseYamlSource(text: string, file: string): ParsedYaml {
   const doc = parseDocument(text, { lineCounter, prettyErrors: true, uniqueKeys: true });
   const source: YamlSource = { file, text, doc, lineCounter };
   const problems = [...doc.errors, ...doc.warnings];
-  const issues = problems.map((error) => yamlIssue(source, error));
+  // Nesting deep enough to overflow the parser's stack (10,000 `[`) makes the yaml package
+  // report the overflow, and often hundreds of follow-on errors at the same place: one
+  // issue says it instead.
+  const exhausted = problems.find((error) => error.code === 'RESOURCE_EXHAUSTION');
+  if (exhausted) return { source, value: undefined, issues: [tooDeepAt(source, exhausted.pos[0])] };
+  const issues = uniqueIssues(problems.map((error) => yamlIssue(source, error)));
   if (problems.some((error) => error.code !== 'DUPLICATE_KEY'))
     return { source, value: undefined, issues };
   try {
     return { source, value: doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT }), issues };
   } catch (error) {
+    // Turning a nesting the parser survived into plain data can still overflow the stack.
+    if (error instanceof RangeError)
+      return { source, value: undefined, issues: [tooDeepAt(source, 0)] };
     if (!(error instanceof ReferenceError)) throw error;
     const tooMany = issueAt(
       source,

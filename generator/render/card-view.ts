@@ -25,7 +25,10 @@ import { crossSection, type CrossSectionLayout } from './cross-section.ts';
 import {
   altitude,
   dose,
+  fillMass as fillMassQuantity,
+  fillVolume,
   length,
+  lengthDown,
   pressure,
   share,
   temperature,
@@ -372,9 +375,10 @@ async function recipe(
         words.water.heatedNote,
       ]
     : [words.water.roomTemperatureNote(temperature(plan.ambientK, units).text)];
-  const fillHeight = length(plan.fillHeightM, units);
-  const belowValve = length(plan.belowValveM, units);
-  const fillMass = waterMass(plan.fillKg, units);
+  // Fill numbers are safety limits: rounded down, never up (generator/render/format.ts).
+  const fillHeight = lengthDown(plan.fillHeightM, units);
+  const belowValve = lengthDown(plan.belowValveM, units);
+  const fillMass = fillMassQuantity(plan.fillKg, units);
   const drawing = crossSection({
     pot: e.pot.model,
     potName: e.pot.name,
@@ -426,7 +430,7 @@ async function recipe(
       heated,
       temperatureNotes,
       fillLabel: words.water.fill,
-      fillVolume: waterVolume(plan.fillM3, units),
+      fillVolume: fillVolume(plan.fillM3, units),
       fillMass,
       fillMassText: words.water.fillMass(fillMass.text),
       fillHeight,
@@ -550,7 +554,7 @@ function insertRow(
   return {
     ...base,
     refused: null,
-    fill: waterVolume(plan.fillM3, units),
+    fill: fillVolume(plan.fillM3, units),
     dose: dose(plan.doseKg, units),
     start:
       plan.startK > plan.ambientK + 0.5

@@ -93,6 +93,30 @@ export function waterVolume(m3: number, units: UnitSystem): Quantity {
   return units === 'us' ? quantity(toFlOz(m3), 1, 'fl oz') : quantity(toMl(m3), 0, 'mL');
 }
 
+/**
+ * The fill, rounded DOWN at the shown precision: the planned fill is the most water that
+ * stays below the valve, so a card must never print a larger number.
+ */
+export function fillVolume(m3: number, units: UnitSystem): Quantity {
+  return units === 'us'
+    ? quantity(Math.floor(toFlOz(m3) * 10) / 10, 1, 'fl oz')
+    : quantity(Math.floor(toMl(m3)), 0, 'mL');
+}
+
+/** The fill's mass, rounded down like `fillVolume`. */
+export function fillMass(kg: number, units: UnitSystem): Quantity {
+  return units === 'us'
+    ? quantity(Math.floor(toOunces(kg) * 10) / 10, 1, 'oz')
+    : quantity(Math.floor(toGrams(kg)), 0, 'g');
+}
+
+/** A height that must not be overstated (the fill line, its distance below the valve): rounded down. */
+export function lengthDown(m: number, units: UnitSystem): Quantity {
+  return units === 'us'
+    ? quantity(Math.floor(toInches(m) * 100) / 100, 2, 'in')
+    : quantity(Math.floor(toMm(m)), 0, 'mm');
+}
+
 export function waterMass(kg: number, units: UnitSystem): Quantity {
   return units === 'us' ? quantity(toOunces(kg), 1, 'oz') : quantity(toGrams(kg), 0, 'g');
 }

@@ -362,6 +362,17 @@ export const buildWords = {
   }): string =>
     `built ${s.outDir}: ${s.pages} pages (${s.stations} station cards, ${s.inserts} inserts; ${s.refused} without a recipe); planned ${s.planned}, from cache ${s.cached}; ${s.seconds.toFixed(1)} s`,
   failed: (outDir: string): string => `the build failed; ${outDir} was left as it was`,
+  /** One line of the build log per warning a station card carries (the card prints it too). */
+  cardWarning: (potId: string, coffeeId: string, stoveId: string, warning: string): string =>
+    `warning: ${potId} × ${coffeeId} × ${stoveId}: ${warning}`,
+  outHoldsContent: (outDir: string): string =>
+    `--out ${outDir} is or contains the content folder, and the build replaces the whole --out folder; choose another folder (default: site)`,
+  outHoldsWorkingFolder: (outDir: string): string =>
+    `--out ${outDir} is or contains the folder you are working in, and the build replaces the whole --out folder; choose a folder of its own (default: site)`,
+  outNotAFolder: (outDir: string): string =>
+    `--out ${outDir} is a file, not a folder; choose a folder for the site (default: site)`,
+  outNotASite: (outDir: string): string =>
+    `--out ${outDir} is a folder that holds other files (no index.html of an earlier build), and the build replaces the whole --out folder; choose a new or empty folder, or remove it first`,
   serving: (url: string): string =>
     `serving ${url} (Ctrl-C to stop); rebuilding when content/ or templates/ change`,
   rebuilt: (summary: string): string => `rebuilt: ${summary}`,

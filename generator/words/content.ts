@@ -264,6 +264,14 @@ export const contentWords = {
     };
   },
 
+  /** The YAML nests collections so deeply that reading it would exhaust the stack. */
+  nestedTooDeeply(): Wording {
+    return {
+      problem: 'the YAML nests lists or mappings too deeply to be read',
+      fix: 'An entry needs only a few levels: look for a run of `[` or `{` that is never closed, or indentation that keeps growing.',
+    };
+  },
+
   emptyFile(kindName: ContentKindName): Wording {
     return {
       problem: 'the file is empty',

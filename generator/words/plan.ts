@@ -3,6 +3,8 @@ import type { Refusal } from '../planning/types.ts';
 import type { GrindClass } from '../content/types.ts';
 
 const ml = (m3: number): string => `${Math.round(m3 * 1e6)} mL`;
+/** A limit is never overstated: rounded down. */
+const mlAtMost = (m3: number): string => `${Math.floor(m3 * 1e6)} mL`;
 const bar = (pa: number): string => `${(pa / 1e5).toFixed(2)} bar`;
 const coarser: Record<GrindClass, string> = {
   fine: 'medium-fine',
@@ -30,7 +32,7 @@ export const planWords = {
   fillAboveValve: (askedM3: number, limitM3: number, marginM: number): Refusal => ({
     code: 'fill-above-valve',
     reason: `${ml(askedM3)} of water would rise to or above the safety valve once it warms and expands.`,
-    suggestion: `Fill at most ${ml(limitM3)} (the level stays ${Math.round(marginM * 1000)} mm below the valve when hot).`,
+    suggestion: `Fill at most ${mlAtMost(limitM3)} (the level stays ${Math.round(marginM * 1000)} mm below the valve when hot).`,
   }),
   pressureNearValve: (peakPa: number, valvePa: number, grind: GrindClass): Refusal => ({
     code: 'pressure-near-valve',

@@ -33,12 +33,13 @@ describe('stationCardView(accepted plan, metric)', () => {
     const view = await stationCardView(accepted, catalogue, { ...OPTIONS, units: 'metric' });
     const r = view.recipe!;
     expect(view.refusal).toBeNull();
-    expect(r.water.fillVolume.text).toBe(`${fixed(accepted.fillM3 * 1e6, 0)}${NBSP}mL`);
-    expect(r.water.fillMass.text).toBe(`${fixed(accepted.fillKg * 1e3, 0)}${NBSP}g`);
+    // The fill is a safety limit: printed rounded down, never up.
+    expect(r.water.fillVolume.text).toBe(`${Math.floor(accepted.fillM3 * 1e6)}${NBSP}mL`);
+    expect(r.water.fillMass.text).toBe(`${Math.floor(accepted.fillKg * 1e3)}${NBSP}g`);
     expect(r.water.temperature.text).toBe(`${fixed(accepted.startK - 273.15, 0)}${NBSP}°C`);
     expect(r.coffee.dose.text).toBe(`${fixed(accepted.doseKg * 1e3, 1)}${NBSP}g`);
-    expect(r.water.fillHeight.text).toBe(`${fixed(accepted.fillHeightM * 1e3, 0)}${NBSP}mm`);
-    expect(r.water.belowValve.text).toBe(`${fixed(accepted.belowValveM * 1e3, 0)}${NBSP}mm`);
+    expect(r.water.fillHeight.text).toBe(`${Math.floor(accepted.fillHeightM * 1e3)}${NBSP}mm`);
+    expect(r.water.belowValve.text).toBe(`${Math.floor(accepted.belowValveM * 1e3)}${NBSP}mm`);
     expect(r.heat.level).toBe(accepted.levelLabel);
   });
 
@@ -114,7 +115,7 @@ describe('stationCardView(accepted plan, us)', () => {
     const r = view.recipe!;
     expect(view.page.units).toBe('us');
     expect(r.water.fillVolume.text).toBe(
-      `${fixed((accepted.fillM3 * 1e6) / ML_PER_FL_OZ, 1)}${NBSP}fl oz`,
+      `${(Math.floor(((accepted.fillM3 * 1e6) / ML_PER_FL_OZ) * 10) / 10).toFixed(1)}${NBSP}fl oz`,
     );
     expect(r.water.fillMass.text).toBe(`${fixed((accepted.fillKg * 1e3) / G_PER_OZ, 1)}${NBSP}oz`);
     expect(r.coffee.dose.text).toBe(`${fixed((accepted.doseKg * 1e3) / G_PER_OZ, 2)}${NBSP}oz`);
@@ -185,7 +186,7 @@ describe('insertCardView', () => {
         expect(row.refused!.reason).toBe(cardWords.refusal.short[p.refused.code]);
         expect(row.fill).toBeNull();
       } else {
-        expect(row.fill!.text).toBe(`${fixed(p.fillM3 * 1e6, 0)}${NBSP}mL`);
+        expect(row.fill!.text).toBe(`${Math.floor(p.fillM3 * 1e6)}${NBSP}mL`);
         expect(row.firstCoffee!.text).toMatch(RANGE);
       }
     }

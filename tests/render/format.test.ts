@@ -8,7 +8,10 @@ import {
   altitude,
   clock,
   dose,
+  fillMass,
+  fillVolume,
   length,
+  lengthDown,
   pressure,
   share,
   temperature,
@@ -75,5 +78,19 @@ describe('ranges and shares', () => {
   });
   it('share(0.785) is "79 %"', () => {
     expect(share(0.785).text).toBe(`79${NBSP}%`);
+  });
+});
+
+describe('fillVolume, fillMass, lengthDown (safety limits round down)', () => {
+  it('fillVolume(154.9 mL) prints 154 mL, and 5.29 fl oz prints 5.2 fl oz', () => {
+    expect(fillVolume(154.9e-6, 'metric').text).toBe(`154${NBSP}mL`);
+    // NIST SP 811: 1 US fl oz = 29.5735295625 mL, so 5.29 fl oz = 156.44 mL.
+    expect(fillVolume(5.29 * 29.5735295625e-6, 'us').text).toBe(`5.2${NBSP}fl oz`);
+  });
+  it('fillMass and lengthDown never round up', () => {
+    expect(fillMass(0.1519, 'metric').text).toBe(`151${NBSP}g`);
+    expect(lengthDown(0.0048, 'metric').text).toBe(`4${NBSP}mm`);
+    // 1 in = 25.4 mm (NIST SP 811): 4.8 mm = 0.18897 in → 0.18 in.
+    expect(lengthDown(0.0048, 'us').text).toBe(`0.18${NBSP}in`);
   });
 });

@@ -1,0 +1,112 @@
+/**
+ * The benchmark's measurements and its printed table: one row per build, per-stage time
+ * per card of the full build, and the two ratios against their targets.
+ */
+import { resourceUsage } from 'node:process';
+import type { BuildResult } from '../generator/build/build-site.ts';
+import type { BuildStats } from '../generator/build/stats.ts';
+import type { CatalogueSize } from './catalogue.ts';
+
+export interface Measured {
+  readonly name: string;
+  readonly wallMs: number;
+  /** CPU time of the whole process (every thread), user + system. */
+  readonly cpuMs: number;
+  readonly result: BuildResult;
+  /** Highest process RSS sampled during the build (worker threads included). */
+  readonly peakRssBytes: number;
+}
+
+/** Samples process.memoryUsage.rss() every `everyMs` until stopped. */
+export function memorySampler(everyMs = 50): { stop(): void; peakBytes(): number } {
+  let peak = process.memoryUsage.rss();
+  const timer = setInterval(() => {
+    peak = Math.max(peak, process.memoryUsage.rss());
+  }, everyMs);
+  return {
+    stop() {
+      clearInterval(timer);
+      peak = Math.max(peak, process.memoryUsage.rss());
+    },
+    peakBytes: () => peak,
+  };
+}
+
+export const TARGETS = { fullOverFloor: 1.5, rebuildOverFull: 0.05 } as const;
+
+const mb = (bytes: number): string => `${(bytes / 2 ** 20).toFixed(0)} MB`;
+const s = (ms: number): string => `${(ms / 1000).toFixed(1)} s`;
+const per = (ms: number, n: number): string => (n > 0 ? `${(ms / n).toFixed(1)} ms` : '—');
+
+function row(cells: readonly string[], widths: readonly number[]): string {
+  return cells.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]!) : cell.padStart(widths[i]!))).join('  ');
+}
+
+function phases(stats: BuildStats): string {
+  const w = stats.wallMs;
+  return (['load', 'plan', 'render', 'write', 'steps', 'swap'] as const)
+    .map((phase) => `${phase} ${s(w[phase] ?? 0)}`)
+    .join(', ');
+}
+
+export interface Report {
+  readonly size: CatalogueSize;
+  readonly layout: string;
+  readonly inserts: number;
+  readonly sets: number;
+  readonly full: Measured;
+  readonly floor: Measured;
+  readonly rebuild: Measured;
+  readonly noop: Measured;
+}
+
+export function formatTable(report: Report): string {
+  const { full, floor, rebuild, noop } = report;
+  const runs = [full, floor, rebuild, noop];
+  const head = ['build', 'wall', 'CPU', 'plans made/cached', 'views made/cached', 'pages', 'PDFs made/copied (pages)', 'peak RSS'];
+  const rows = runs.map((m) => {
+    const st = m.result.stats;
+    return [
+      m.name,
+      s(m.wallMs),
+      s(m.cpuMs),
+      `${st.plans.made}/${st.plans.reused}`,
+      `${st.views.made}/${st.views.reused}`,
+      `${st.pages.made}`,
+      `${st.pdfs.made}/${st.pdfs.reused} (${st.pdfs.pdfPages})`,
+      mb(m.peakRssBytes),
+    ];
+  });
+  const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
+  const st = full.result.stats;
+  const fullOverFloor = full.wallMs / floor.wallMs;
+  const rebuildOverFull = rebuild.wallMs / full.wallMs;
+  const cpuRatios = `CPU time: full/floor ${(full.cpuMs / floor.cpuMs).toFixed(2)}, rebuild/full ${(rebuild.cpuMs / full.cpuMs).toFixed(3)}`;
+  const verdict = (value: number, target: number) => (value <= target ? 'met' : 'above target');
+  const { size } = report;
+  return [
+    '',
+    `stovecard bench: ${size.pots} pots × ${size.coffees} coffees × ${size.stoves} stoves = ` +
+      `${full.result.stationCards} station cards + ${report.inserts} inserts, ${report.sets} sets (${report.layout}); ` +
+      `${st.workers} worker threads`,
+    '',
+    row(head, widths),
+    row(head.map((h) => '-'.repeat(h.length)), widths),
+    ...rows.map((r) => row(r, widths)),
+    '',
+    'phases (wall):',
+    ...runs.map((m) => `  ${m.name}: ${phases(m.result.stats)}`),
+    '',
+    'full build, per item (thread time, summed over workers):',
+    `  plan   ${per(st.plans.ms, st.plans.made)} per card, ${(st.plans.simulations / Math.max(1, st.plans.made)).toFixed(1)} simulations per card, ${per(st.plans.ms, st.plans.simulations)} per simulation`,
+    `  views  ${per(st.views.ms, st.views.made)} per card (chart, cross-section, QR code, words)`,
+    `  HTML   ${per(st.pages.ms, st.pages.made)} per page (Eleventy, wall)`,
+    `  PDF    ${per(st.pdfs.ms, st.pdfs.made)} per file, ${per(st.pdfs.ms, st.pdfs.pdfPages)} per page (${st.pdfs.pdfPages} pages in ${st.pdfs.made} files)`,
+    `  peak RSS ${mb(Math.max(...runs.map((m) => m.peakRssBytes)))} sampled; process maxRSS ${mb(resourceUsage().maxRSS * 1024)}`,
+    '',
+    `full/floor    = ${fullOverFloor.toFixed(2)}  (target ≤ ${TARGETS.fullOverFloor}: ${verdict(fullOverFloor, TARGETS.fullOverFloor)})`,
+    `rebuild/full  = ${rebuildOverFull.toFixed(3)} (target ≤ ${TARGETS.rebuildOverFull}: ${verdict(rebuildOverFull, TARGETS.rebuildOverFull)})`,
+    `(${cpuRatios}; wall time is what the targets are about, CPU time moves less with the machine's load)`,
+    '',
+  ].join('\n');
+}

@@ -1,0 +1,121 @@
+/**
+ * `npm run bench [-- --cards N] [--sets by-stove|by-coffee] [--workers N] [--seed S] [--keep]`:
+ * the site build under a roaster's load, in one process, on a synthetic catalogue
+ * (bench/catalogue.ts; 1,000 station cards by default) in a temporary folder:
+ *
+ *   full      a cold cache: every plan, view, page and PDF made
+ *   floor     the same site again with every plan and view (chart, cross-section, QR code,
+ *             words) from the warm cache, and every HTML page and PDF (cards and sets)
+ *             rendered: the pages and PDFs with no simulation and no chart behind them
+ *   rebuild   one coffee's permeability changed by 10 %, everything else cached
+ *   no-op     nothing changed
+ *
+ * Each build is buildSite with the site PDF step (generator/build/pdf-step.ts), as
+ * `stovecard build` runs it. Prints a table and the ratios full/floor (target ≤ 1.5) and
+ * rebuild/full (target ≤ 0.05). Timings are only compared within one run (shared machine).
+ * For a CPU profile: `node --cpu-prof --cpu-prof-dir=prof --import tsx bench/run.ts
+ * --cards 200`, then `npx tsx bench/profile-summary.ts prof/<file>.cpuprofile`.
+ */
+import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { availableParallelism, tmpdir } from 'node:os';
+import path from 'node:path';
+import { parseArgs } from 'node:util';
+import { buildSite, type BuildResult } from '../generator/build/build-site.ts';
+import { expandCards } from '../generator/build/cards.ts';
+import { sitePdfStep } from '../generator/build/pdf-step.ts';
+import { loadCatalogue } from '../generator/content/index.ts';
+import { DEFAULT_SIZE, sizeForCards, stationCount, writeCatalogue } from './catalogue.ts';
+import { formatTable, memorySampler, type Measured } from './report.ts';
+
+const EPOCH = { SOURCE_DATE_EPOCH: '1714521600' };
+
+interface Run {
+  readonly root: string;
+  readonly contentDir: string;
+  readonly workers: number;
+}
+
+async function measured(name: string, run: Run): Promise<Measured> {
+  const memory = memorySampler();
+  const cpu = process.cpuUsage();
+  const started = performance.now();
+  let result: BuildResult;
+  try {
+    result = await buildSite({
+      contentDir: run.contentDir,
+      outDir: path.join(run.root, 'site'),
+      cacheDir: path.join(run.root, 'cache'),
+      env: EPOCH,
+      workers: run.workers,
+      extraSteps: [sitePdfStep],
+    });
+  } finally {
+    memory.stop();
+  }
+  const wallMs = performance.now() - started;
+  const used = process.cpuUsage(cpu);
+  const cpuMs = (used.user + used.system) / 1000;
+  process.stderr.write(`  ${name}: ${(wallMs / 1000).toFixed(1)} s\n`);
+  return { name, wallMs, cpuMs, result, peakRssBytes: memory.peakBytes() };
+}
+
+/** Changes one coffee's permeability by 10 %: a real edit, re-planning its cards. */
+async function editCoffee(contentDir: string, coffeeId: string): Promise<void> {
+  const file = path.join(contentDir, 'coffees', `${coffeeId}.yaml`);
+  const yaml = await readFile(file, 'utf8');
+  const edited = yaml.replace(/^permeability_m2: (.*)$/m, (_line, value: string) => {
+    return `permeability_m2: ${(Number(value) * 1.1).toPrecision(3)}`;
+  });
+  if (edited === yaml) throw new Error(`bench: ${file} has no permeability_m2 to edit`);
+  await writeFile(file, edited);
+}
+
+async function main(): Promise<void> {
+  const { values } = parseArgs({
+    options: {
+      cards: { type: 'string' },
+      workers: { type: 'string' },
+      seed: { type: 'string' },
+      sets: { type: 'string' },
+      keep: { type: 'boolean' },
+    },
+  });
+  const size = values.cards ? sizeForCards(Number(values.cards)) : DEFAULT_SIZE;
+  const workers = values.workers !== undefined ? Number(values.workers) : availableParallelism();
+  const seed = values.seed !== undefined ? Number(values.seed) : 1;
+  const layout = values.sets ?? 'by-stove';
+  if (layout !== 'by-stove' && layout !== 'by-coffee') {
+    throw new Error(`bench: --sets is by-stove or by-coffee, not "${layout}"`);
+  }
+  const root = await mkdtemp(path.join(tmpdir(), 'stovecard-bench-'));
+  const contentDir = path.join(root, 'content');
+  try {
+    const ids = await writeCatalogue(contentDir, size, seed, layout);
+    // The real loader validates every file (it throws with file:line on any problem).
+    const catalogue = await loadCatalogue(contentDir);
+    const jobs = expandCards(catalogue);
+    process.stderr.write(
+      `stovecard bench: ${size.pots} pots × ${size.coffees} coffees × ${size.stoves} stoves = ` +
+        `${stationCount(size)} station cards, ${jobs.inserts.length} inserts, ` +
+        `${jobs.sets.length} sets (${layout}); ${workers} workers; ${root}\n`,
+    );
+    const run: Run = { root, contentDir, workers };
+    const full = await measured('full', run);
+    // The floor: plans and views stay cached; pages and PDFs are rendered again.
+    await rm(path.join(root, 'cache', 'pdfs'), { recursive: true, force: true });
+    await rm(path.join(root, 'cache', 'pages'), { recursive: true, force: true });
+    const floor = await measured('floor', run);
+    const edited = ids.coffees[Math.min(6, ids.coffees.length - 1)]!;
+    await editCoffee(contentDir, edited);
+    const rebuild = await measured(`rebuild (${edited})`, run);
+    const noop = await measured('no-op rebuild', run);
+    process.stdout.write(
+      `${formatTable({ size, layout, inserts: jobs.inserts.length, sets: jobs.sets.length, full, floor, rebuild, noop })}\n`,
+    );
+  } finally {
+    if (values.keep) process.stderr.write(`kept ${root}\n`);
+    else await rm(root, { recursive: true, force: true });
+  }
+}
+
+await main();

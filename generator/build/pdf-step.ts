@@ -1,0 +1,141 @@
+/**
+ * The site's PDFs as a build step, incremental and on the worker pool: the same files and
+ * bytes as the PDF module's own step (render/pdf/site-pdfs.ts, writeSitePdfs), made with
+ * the same pure cores (cardPdf, setPdf, setCards, isTrainingSet), but
+ *
+ *   - each PDF is keyed by the hashes of the views it is drawn from (render-cache.ts); a
+ *     key already in the cache is copied from there instead of rendered;
+ *   - the rest are rendered on the build's workers, the sets first and the longest first
+ *     (a set is one task, so a long one started last would finish alone);
+ *   - the PDF dates follow the build's env (BuildOptions.env), like the pages.
+ *
+ *   views ─ key ─▶ cached? ── yes ─▶ copy <cacheDir>/pdfs/<key>.pdf into the site
+ *                          └─ no ──▶ cardPdf / setPdf (pool) ─▶ the site and the cache
+ */
+import { mkdir, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { cardPdf, type CardView } from '../render/pdf/card.ts';
+import { setPdf, type FrontMatter, type SetPdfInput } from '../render/pdf/binder.ts';
+import { isTrainingSet, setCards } from '../render/pdf/site-pdfs.ts';
+import type { BuildContext, ViewText } from './build-site.ts';
+import { renderCodeVersion } from './code-version.ts';
+import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
+import { cardPdfKey, RenderCache, setPdfKey, sha256 } from './render-cache.ts';
+import { toTaggedJson } from './plan-cache.ts';
+
+interface PdfJob {
+  readonly file: string;
+  readonly key: string;
+  /** Cards drawn (for the order of the renders). */
+  readonly cards: number;
+  render(): Promise<{ bytes: Uint8Array; pages: number; ms: number }>;
+}
+
+export async function sitePdfStep(context: BuildContext): Promise<void> {
+  const { data, siteDir, pool, stats } = context;
+  const cache = new RenderCache(context.cacheDir);
+  const renderVersion = await renderCodeVersion();
+  const author = data.site.businessName;
+  const env = context.env;
+  const epoch = env.SOURCE_DATE_EPOCH;
+  const textOf = (card: CardView): ViewText => {
+    const known = context.viewTexts.get(card.paths.pdfFile);
+    if (known) return known;
+    const text = toTaggedJson(card);
+    return { text, hash: sha256(text) };
+  };
+  const hashOf = (card: CardView) => textOf(card).hash;
+
+  const cards: CardView[] = [...data.stationCards, ...data.insertCards];
+  const cardJobs: PdfJob[] = cards.map((view) => ({
+    file: view.paths.pdfFile,
+    key: cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion }),
+    cards: 1,
+    async render() {
+      if (pool) {
+        const { result, ms } = await pool.run({
+          kind: 'card-pdf',
+          viewJson: textOf(view).text,
+          context: { author, env },
+        });
+        return { bytes: result.bytes, pages: 1, ms };
+      }
+      const started = performance.now();
+      const pdf = await cardPdf(view, { author, env });
+      return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started };
+    },
+  }));
+  const frontMatter: FrontMatter = { method: data.method, troubleshooting: data.troubleshooting };
+  const setJobs: PdfJob[] = data.sets.map((set) => {
+    const members = setCards(set, data);
+    const input: Omit<SetPdfInput, 'cards'> = {
+      set,
+      frontMatter: isTrainingSet(set) ? frontMatter : null,
+      page: data.site.page,
+      author,
+      builtOn: data.site.builtOn,
+      env,
+    };
+    return {
+      file: set.paths.pdfFile,
+      key: setPdfKey({
+        set,
+        cardHashes: members.map(hashOf),
+        frontMatter: input.frontMatter,
+        page: input.page,
+        author,
+        builtOn: input.builtOn,
+        sourceDateEpoch: epoch,
+        renderVersion,
+      }),
+      cards: members.length,
+      async render() {
+        if (pool) {
+          const cardsJson = members.map((card) => textOf(card).text);
+          const { result, ms } = await pool.run({ kind: 'set-pdf', input, cardsJson });
+          return { ...result, ms };
+        }
+        const started = performance.now();
+        const pdf = await setPdf({ ...input, cards: members });
+        return { bytes: pdf.bytes, pages: pdf.pages, ms: performance.now() - started };
+      },
+    };
+  });
+
+  const jobs = [...setJobs.sort((a, b) => b.cards - a.cards), ...cardJobs];
+  const total = jobs.length;
+  let done = 0;
+  context.onProgress({ phase: 'steps', done, total });
+  const folders = new Set(jobs.map((job) => path.dirname(path.join(siteDir, job.file))));
+  await Promise.all([...folders].map((folder) => mkdir(folder, { recursive: true })));
+
+  // Cache lookups first: every hit is copied, and the misses are queued at once, in order.
+  const copied = await mapConcurrent(jobs, IO_LIMIT, async (job) => {
+    const hit = await cache.pdfs.copyTo(job.key, path.join(siteDir, job.file));
+    if (hit) {
+      stats.pdfs.reused += 1;
+      context.onProgress({ phase: 'steps', done: ++done, total });
+    }
+    return hit;
+  });
+  const misses = jobs.filter((_, i) => !copied[i]);
+  const make = async (job: PdfJob) => {
+    let made;
+    try {
+      made = await job.render();
+    } catch (error) {
+      pool?.clearQueue();
+      throw error;
+    }
+    const { bytes, pages, ms } = made;
+    await writeFile(path.join(siteDir, job.file), bytes);
+    await cache.pdfs.put(job.key, bytes);
+    stats.pdfs.made += 1;
+    stats.pdfs.pdfPages += pages;
+    stats.pdfs.ms += ms;
+    context.onProgress({ phase: 'steps', done: ++done, total });
+  };
+  // On workers all at once (the pool queues them); in this thread one document at a time.
+  if (pool) await allSettledOrThrow(misses.map(make));
+  else for (const job of misses) await make(job);
+}

@@ -1,0 +1,147 @@
+/**
+ * A pool of worker threads for the build's heavy, independent items (plans, card views,
+ * PDFs): `os.availableParallelism()` workers running build-worker.ts, started on the first
+ * task, each taking the next task from one queue in the order they were submitted.
+ *
+ *   build ─ run(task) ─▶ queue ─▶ idle worker ─ runTask ─▶ { result, ms } ─▶ resolves
+ *
+ * Workers start from build-worker.mjs, which registers tsx and loads build-worker.ts (Node
+ * 20 ignores a loader given as a Worker's `execArgv: ['--import', 'tsx']`, nodejs/node
+ * #47747), so this works under the tsx CLI, bin/stovecard.js and vitest alike, from any
+ * working folder. Tasks and results are structured-cloned; plans and views
+ * travel as JSON text (plan-cache.ts), PDFs as bytes. A task that throws in a worker
+ * rejects with an Error of the same name and message; a worker that dies fails the tasks
+ * it held and is replaced on the next task.
+ */
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
+import { WORKER_ROLE, type TaskRequest, type TaskResult, type WorkerReply } from './build-worker.ts';
+
+export type { TaskRequest, TaskResult } from './build-worker.ts';
+
+const WORKER_URL = new URL('./build-worker.mjs', import.meta.url);
+
+/** Profiling flags of this process passed on, so `node --cpu-prof` also profiles workers. */
+function inheritedFlags(): string[] {
+  return process.execArgv.filter((flag) => /^--cpu-prof(-dir|-name|-interval)?(=|$)/.test(flag));
+}
+
+/** A task's result and how long the worker spent on it (thread time, ms). */
+export interface Timed<K extends TaskRequest['kind']> {
+  readonly result: TaskResult<K>;
+  readonly ms: number;
+}
+
+interface Pending {
+  readonly request: TaskRequest;
+  resolve(value: { result: unknown; ms: number }): void;
+  reject(error: Error): void;
+}
+
+interface Slot {
+  readonly worker: Worker;
+  task: (Pending & { id: number }) | null;
+  dead: boolean;
+}
+
+export interface PoolOptions {
+  /** Default os.availableParallelism(). */
+  readonly size?: number;
+}
+
+export class WorkerPool {
+  readonly size: number;
+  private readonly slots: Slot[] = [];
+  private readonly queue: Pending[] = [];
+  private nextId = 0;
+  private closed = false;
+  /** Tasks run and thread time spent, by kind. */
+  readonly ran = new Map<TaskRequest['kind'], { tasks: number; ms: number }>();
+
+  constructor(options: PoolOptions = {}) {
+    this.size = Math.max(1, options.size ?? availableParallelism());
+  }
+
+  /** Queues one task; resolves with its result once a worker has run it. */
+  run<K extends TaskRequest['kind']>(request: TaskRequest & { kind: K }): Promise<Timed<K>> {
+    if (this.closed) return Promise.reject(new Error('worker pool: closed'));
+    return new Promise((resolve, reject) => {
+      this.queue.push({
+        request,
+        resolve: resolve as Pending['resolve'],
+        reject,
+      });
+      this.dispatch();
+    });
+  }
+
+  /** Workers started so far (they start on demand, up to `size`, and when one died). */
+  spawned = 0;
+
+  /** Rejects every task not yet started (after a failure, so the rest is not rendered). */
+  clearQueue(reason: Error = new Error('worker pool: cancelled')): void {
+    for (const pending of this.queue.splice(0)) pending.reject(reason);
+  }
+
+  /** Stops every worker; queued tasks are rejected. */
+  async close(): Promise<void> {
+    this.closed = true;
+    for (const pending of this.queue.splice(0)) pending.reject(new Error('worker pool: closed'));
+    await Promise.all(this.slots.map((slot) => slot.worker.terminate()));
+    this.slots.length = 0;
+  }
+
+  private dispatch(): void {
+    while (this.queue.length > 0) {
+      let slot = this.slots.find((s) => !s.dead && s.task === null);
+      if (!slot) {
+        if (this.slots.filter((s) => !s.dead).length >= this.size) return;
+        slot = this.spawn();
+      }
+      const pending = this.queue.shift()!;
+      const id = this.nextId++;
+      slot.task = { ...pending, id };
+      slot.worker.postMessage({ id, request: pending.request });
+    }
+  }
+
+  private spawn(): Slot {
+    const worker = new Worker(WORKER_URL, {
+      execArgv: inheritedFlags(),
+      workerData: { role: WORKER_ROLE },
+    });
+    this.spawned += 1;
+    const slot: Slot = { worker, task: null, dead: false };
+    worker.on('message', (reply: WorkerReply) => {
+      const task = slot.task;
+      if (!task || task.id !== reply.id) return;
+      slot.task = null;
+      if (reply.ok) {
+        const kind = task.request.kind;
+        const ran = this.ran.get(kind) ?? { tasks: 0, ms: 0 };
+        this.ran.set(kind, { tasks: ran.tasks + 1, ms: ran.ms + reply.ms });
+        task.resolve({ result: reply.result, ms: reply.ms });
+      } else {
+        const error = new Error(reply.error.message);
+        error.name = reply.error.name;
+        if (reply.error.stack) error.stack = reply.error.stack;
+        task.reject(error);
+      }
+      this.dispatch();
+    });
+    const fail = (error: Error) => {
+      if (slot.dead) return;
+      slot.dead = true;
+      this.slots.splice(this.slots.indexOf(slot), 1);
+      slot.task?.reject(error);
+      slot.task = null;
+      if (!this.closed) this.dispatch();
+    };
+    worker.on('error', fail);
+    worker.on('exit', (code) => {
+      if (!this.closed) fail(new Error(`worker pool: a worker stopped (exit code ${code})`));
+    });
+    this.slots.push(slot);
+    return slot;
+  }
+}

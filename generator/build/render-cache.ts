@@ -1,0 +1,136 @@
+/**
+ * The render caches beside the plan cache, so a rebuild re-renders only what changed:
+ *
+ *   <cacheDir>/views/<key>.json   a station card's view (chart, cross-section, QR code and
+ *                                 words), keyed by its plan's key, the render code version,
+ *                                 the build date and the site's print settings
+ *   <cacheDir>/pages/<key>.html   a card's HTML page, keyed by its view's hash, the page
+ *                                 code version and the site data every page shows
+ *   <cacheDir>/pdfs/<key>.pdf     a card's or a set's PDF, keyed by the hashes of the
+ *                                 views it is drawn from and the render code version
+ *
+ * A view's hash is sha256 over its cache text, so equal views give equal page and PDF
+ * keys whatever made them. Nothing is ever evicted; deleting the folder is always safe.
+ */
+import { createHash } from 'node:crypto';
+import path from 'node:path';
+import type { SiteEntry } from '../content/types.ts';
+import { FileCache } from './file-cache.ts';
+import { fromTaggedJson, stableJson } from './plan-cache.ts';
+
+/** Bumped when a key's layout or a cached file's format changes. */
+const RENDER_CACHE_FORMAT = 1;
+
+export function sha256(...parts: readonly string[]): string {
+  const hash = createHash('sha256');
+  for (const part of parts) hash.update(part).update('\0');
+  return hash.digest('hex');
+}
+
+/** What of the site a station card's view prints (its entries are in the plan's key). */
+export type ViewSite = Pick<SiteEntry, 'units' | 'paper' | 'baseUrl' | 'business' | 'kettlePresetsK'>;
+
+export function viewSite(site: SiteEntry): ViewSite {
+  const { units, paper, baseUrl, business, kettlePresetsK } = site;
+  return { units, paper, baseUrl, business, kettlePresetsK };
+}
+
+export interface StationViewKeyInput {
+  readonly planKey: string;
+  readonly renderVersion: string;
+  readonly builtOn: string;
+  readonly site: ViewSite;
+}
+
+export function stationViewKey(input: StationViewKeyInput): string {
+  return sha256(
+    stableJson({
+      format: RENDER_CACHE_FORMAT,
+      kind: 'station-view',
+      plan: input.planKey,
+      code: input.renderVersion,
+      builtOn: input.builtOn,
+      site: input.site,
+    }),
+  );
+}
+
+/** A view as the cache holds it: the parsed view, its text's hash, and the text. */
+export interface CachedView<V> {
+  readonly view: V;
+  readonly hash: string;
+  readonly text: string;
+}
+
+export function viewFromText<V>(text: string): CachedView<V> {
+  return { view: fromTaggedJson<V>(text), hash: sha256(text), text };
+}
+
+export class RenderCache {
+  readonly views: FileCache;
+  readonly pages: FileCache;
+  readonly pdfs: FileCache;
+
+  constructor(cacheDir: string) {
+    this.views = new FileCache(path.join(cacheDir, 'views'), '.json');
+    this.pages = new FileCache(path.join(cacheDir, 'pages'), '.html');
+    this.pdfs = new FileCache(path.join(cacheDir, 'pdfs'), '.pdf');
+  }
+
+  /** The cached view, or null when absent or unreadable. */
+  async view<V>(key: string): Promise<CachedView<V> | null> {
+    const text = await this.views.getText(key);
+    if (text === null) return null;
+    try {
+      return viewFromText<V>(text);
+    } catch {
+      return null;
+    }
+  }
+}
+
+/** Key of a card's PDF: the view's hash, who prints it, the PDF date setting, the code. */
+export function cardPdfKey(input: {
+  readonly viewHash: string;
+  readonly author: string;
+  readonly sourceDateEpoch: string | undefined;
+  readonly renderVersion: string;
+}): string {
+  return sha256(
+    stableJson({
+      format: RENDER_CACHE_FORMAT,
+      kind: 'card-pdf',
+      view: input.viewHash,
+      author: input.author,
+      epoch: input.sourceDateEpoch ?? null,
+      code: input.renderVersion,
+    }),
+  );
+}
+
+/** Key of a set's PDF: everything setPdf reads, its cards by their views' hashes. */
+export function setPdfKey(input: {
+  readonly set: unknown;
+  readonly cardHashes: readonly string[];
+  readonly frontMatter: unknown;
+  readonly page: unknown;
+  readonly author: string;
+  readonly builtOn: string;
+  readonly sourceDateEpoch: string | undefined;
+  readonly renderVersion: string;
+}): string {
+  return sha256(
+    stableJson({
+      format: RENDER_CACHE_FORMAT,
+      kind: 'set-pdf',
+      set: input.set,
+      cards: input.cardHashes,
+      front: input.frontMatter,
+      page: input.page,
+      author: input.author,
+      builtOn: input.builtOn,
+      epoch: input.sourceDateEpoch ?? null,
+      code: input.renderVersion,
+    }),
+  );
+}

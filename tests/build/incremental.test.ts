@@ -1,0 +1,170 @@
+/**
+ * Incremental rebuilds of the demo with its PDFs (the site PDF step on the worker pool):
+ * after one coffee is edited, only that coffee's cards are planned and rendered again, and
+ * only the PDFs drawn from them; the site equals, byte for byte (HTML and PDF), a clean
+ * build in one thread with the PDF module's own step; a failed rebuild leaves the last
+ * good site as it was.
+ */
+import { createHash } from 'node:crypto';
+import { cp, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { buildSite, type BuildResult } from '../../generator/build/build-site.ts';
+import { writeSite } from '../../generator/build/eleventy.ts';
+import { CARD_PAGE_GLOBALS } from '../../generator/build/pages.ts';
+import { sitePdfStep } from '../../generator/build/pdf-step.ts';
+import { pdfBuildStep } from '../../generator/render/pdf/site-pdfs.ts';
+import type { SiteData } from '../../generator/render/site-view.ts';
+
+const EPOCH = { SOURCE_DATE_EPOCH: '1714521600' }; // 2024-05-01, midnight UTC
+const COFFEE = 'house-blend';
+
+let root: string;
+let content: string;
+let cacheDir: string;
+let first: BuildResult;
+let rebuilt: BuildResult;
+
+async function files(dir: string): Promise<string[]> {
+  const entries = await readdir(dir, { withFileTypes: true, recursive: true });
+  return entries
+    .filter((e) => e.isFile())
+    .map((e) => path.relative(dir, path.join(e.parentPath, e.name)))
+    .sort();
+}
+
+/** Each file's sha256, by site-relative path. */
+async function tree(dir: string): Promise<Record<string, string>> {
+  const out: Record<string, string> = {};
+  for (const file of await files(dir)) {
+    out[file] = createHash('sha256')
+      .update(await readFile(path.join(dir, file)))
+      .digest('hex');
+  }
+  return out;
+}
+
+const build = (outDir: string, extra: Partial<Parameters<typeof buildSite>[0]> = {}) =>
+  buildSite({
+    contentDir: content,
+    outDir,
+    cacheDir,
+    env: EPOCH,
+    extraSteps: [sitePdfStep],
+    ...extra,
+  });
+
+beforeAll(async () => {
+  root = await mkdtemp(path.join(tmpdir(), 'stovecard-incremental-'));
+  content = path.join(root, 'content');
+  cacheDir = path.join(root, 'cache');
+  await cp('content', content, { recursive: true });
+  first = await build(path.join(root, 'site'));
+  const file = path.join(content, 'coffees', `${COFFEE}.yaml`);
+  const yaml = await readFile(file, 'utf8');
+  await writeFile(file, yaml.replace(/^permeability_m2: .*$/m, 'permeability_m2: 0.9e-12'));
+  rebuilt = await build(path.join(root, 'site'));
+});
+
+afterAll(async () => {
+  if (root) await rm(root, { recursive: true, force: true });
+});
+
+describe('a rebuild after editing one coffee', () => {
+  it('plans and renders that coffee’s station cards only', () => {
+    const mine = rebuilt.data.stationCards.filter((c) => c.coffeeId === COFFEE).length;
+    expect(mine).toBeGreaterThan(0);
+    expect(first.stats.plans.made).toBe(first.stationCards);
+    expect(rebuilt.stats.plans).toMatchObject({ made: mine, reused: rebuilt.stationCards - mine });
+    expect(rebuilt.stats.views).toMatchObject({ made: mine, reused: rebuilt.stationCards - mine });
+  });
+
+  it('renders the PDFs and card pages drawn from them, and copies the rest', () => {
+    const data = rebuilt.data;
+    const mine = (card: { coffeeId: string }) => card.coffeeId === COFFEE;
+    const cards = [...data.stationCards, ...data.insertCards].filter(mine);
+    const touched = new Set(cards.map((c) => c.paths.pdfFile));
+    // A set is one PDF: it is drawn again when it holds one of the cards.
+    const sets = data.sets.filter((set) => set.cards.some((link) => touched.has(link.pdfFile)));
+    const pdfs = data.stationCards.length + data.insertCards.length + data.sets.length;
+    expect(rebuilt.stats.pdfs).toMatchObject({
+      made: cards.length + sets.length,
+      reused: pdfs - cards.length - sets.length,
+    });
+    const otherPages = 3 + data.sets.length; // index, method, troubleshooting and the sets
+    expect(rebuilt.stats.pages).toMatchObject({
+      made: cards.length + otherPages,
+      reused: data.stationCards.length + data.insertCards.length - cards.length,
+    });
+  });
+
+  it('writes the same bytes, HTML and PDF, as a clean one-thread build with the PDF module’s step', async () => {
+    const clean = await buildSite({
+      contentDir: content,
+      outDir: path.join(root, 'site-clean'),
+      cacheDir: path.join(root, 'cache-clean'),
+      env: EPOCH,
+      workers: 0,
+      extraSteps: [pdfBuildStep],
+    });
+    expect(clean.stats.workers).toBe(0);
+    expect(rebuilt.stats.workers).toBeGreaterThan(0);
+    const expected = await tree(path.join(root, 'site-clean'));
+    expect(Object.keys(expected).some((f) => f.endsWith('.pdf'))).toBe(true);
+    expect(await tree(path.join(root, 'site'))).toEqual(expected);
+  });
+
+  it('a rebuild with nothing changed makes nothing and keeps every byte', async () => {
+    const before = await tree(path.join(root, 'site'));
+    const again = await build(path.join(root, 'site'));
+    expect(again.stats.plans.made + again.stats.views.made + again.stats.pdfs.made).toBe(0);
+    expect(again.stats.pages.made).toBe(3 + again.data.sets.length);
+    expect(again.stats.workers).toBe(0); // no work, no worker started
+    expect(await tree(path.join(root, 'site'))).toEqual(before);
+  });
+});
+
+describe('a failed rebuild', () => {
+  it('after its PDFs were rendered, leaves the previous site and no temporary folder', async () => {
+    const site = path.join(root, 'site');
+    const before = await tree(site);
+    const file = path.join(content, 'coffees', `${COFFEE}.yaml`);
+    const yaml = await readFile(file, 'utf8');
+    await writeFile(file, yaml.replace(/^permeability_m2: .*$/m, 'permeability_m2: 1.0e-12'));
+    const failing = build(site, {
+      extraSteps: [
+        sitePdfStep,
+        async () => {
+          throw new Error('a later step failed');
+        },
+      ],
+    });
+    await expect(failing).rejects.toThrow('a later step failed');
+    expect(await tree(site)).toEqual(before);
+    expect((await readdir(root)).filter((name) => name.includes('.tmp-'))).toEqual([]);
+    await writeFile(file, yaml);
+  });
+});
+
+describe('a card page', () => {
+  it(`reads nothing of the site data but its card and ${CARD_PAGE_GLOBALS.join(', ')}`, async () => {
+    const data = rebuilt.data;
+    const changed: SiteData = {
+      ...data,
+      sets: data.sets.map((set) => ({ ...set, title: `${set.title} (changed)`, cards: [] })),
+      method: { ...data.method, title: 'Changed', example: 'changed' },
+      troubleshooting: { ...data.troubleshooting, title: 'Changed', moves: null },
+    };
+    const a = path.join(root, 'pages-a');
+    const b = path.join(root, 'pages-b');
+    await writeSite({ outDir: a, data });
+    await writeSite({ outDir: b, data: { ...changed, stationCards: data.stationCards.slice(0, 2) } });
+    for (const card of [...data.stationCards.slice(0, 2), ...data.insertCards]) {
+      const page = card.paths.pageFile;
+      expect(await readFile(path.join(b, page), 'utf8'), page).toBe(
+        await readFile(path.join(a, page), 'utf8'),
+      );
+    }
+  });
+});
