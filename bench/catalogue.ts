@@ -116,8 +116,7 @@ const NOTES = ['Cocoa, hazelnut', 'Bergamot, apricot', 'Molasses, cedar', 'Brown
 export function coffeeYaml(index: number, random: Random): string {
   const permeability = between(random, 0.5e-12, 2e-12);
   const roast = pick(random, ROASTS);
-  const band =
-    index % 4 === 1 ? '[88, 94]' : index % 4 === 3 ? '[91, 97]' : null; // others: the default
+  const band = index % 4 === 1 ? '[88, 94]' : index % 4 === 3 ? '[91, 97]' : null; // others: the default
   return [
     '# yaml-language-server: $schema=../../generator/content/schemas/coffee.schema.json',
     '# Synthetic benchmark coffee (bench/catalogue.ts).',
@@ -136,8 +135,14 @@ export function coffeeYaml(index: number, random: Random): string {
 /** Levels of each kind, gentlest first, as the demo's stoves (scaled ±10 % per stove). */
 const LEVELS: Record<string, { labels: readonly string[]; powersW: readonly number[] }> = {
   gas: { labels: ['simmer', 'low', 'medium', 'high'], powersW: [250, 600, 1000, 1500] },
-  'electric-coil': { labels: ['1', '2', '3', '4', '5', '6'], powersW: [150, 300, 500, 800, 1200, 1600] },
-  radiant: { labels: ['1', '2', '3', '4', '5', '6', '7'], powersW: [120, 180, 350, 550, 800, 1100, 1450] },
+  'electric-coil': {
+    labels: ['1', '2', '3', '4', '5', '6'],
+    powersW: [150, 300, 500, 800, 1200, 1600],
+  },
+  radiant: {
+    labels: ['1', '2', '3', '4', '5', '6', '7'],
+    powersW: [120, 180, 350, 550, 800, 1100, 1450],
+  },
   induction: {
     labels: ['1', '2', '3', '4', '5', '6', '7', '8', '9'],
     powersW: [100, 200, 350, 500, 750, 1000, 1300, 1600, 2000],
@@ -155,7 +160,9 @@ export function stoveYaml(index: number, random: Random): string {
     `name: Bench ${kind} stove ${pad(index + 1)}`,
     `kind: ${kind}`,
     'levels: # gentlest first',
-    ...labels.map((label, i) => `  - { label: '${label}', power_w: ${round(powersW[i]! * scale, 10)} }`),
+    ...labels.map(
+      (label, i) => `  - { label: '${label}', power_w: ${round(powersW[i]! * scale, 10)} }`,
+    ),
     '',
   ].join('\n');
 }
@@ -191,7 +198,9 @@ export interface CatalogueIds {
 }
 
 export function siteYaml(ids: CatalogueIds, layout: SetLayout = 'by-stove'): string {
-  const insertPots = [...new Set([ids.pots[0]!, ids.pots[Math.floor(ids.pots.length / 2)]!, ids.pots.at(-1)!])];
+  const insertPots = [
+    ...new Set([ids.pots[0]!, ids.pots[Math.floor(ids.pots.length / 2)]!, ids.pots.at(-1)!]),
+  ];
   const training = ids.coffees
     .slice(0, 4)
     .map((coffee) => `      - { pot: ${ids.pots[0]}, coffee: ${coffee}, stove: ${ids.stoves[0]} }`);

@@ -1,11 +1,14 @@
 /**
- * The top of a V8 CPU profile (`node --cpu-prof --import tsx …` writes *.cpuprofile):
- * self time by function and by where the code lives (generator/<folder>, a package in
- * node_modules, node internals), as shares of the sampled time.
+ * The top of V8 CPU profiles (`node --cpu-prof --import tsx …` writes one *.cpuprofile
+ * per thread, workers included): self time by function and by where the code lives (a
+ * generator/ file, a package in node_modules, node internals), as shares of the sampled
+ * time, summed over every profile given (files, or folders of them). Idle time is left
+ * out of the shares.
  *
- *   npx tsx bench/profile-summary.ts <file.cpuprofile> [--top N]
+ *   npx tsx bench/profile-summary.ts <file.cpuprofile | folder>... [--top N]
  */
-import { readFile } from 'node:fs/promises';
+import { readdir, readFile, stat } from 'node:fs/promises';
+import path from 'node:path';
 
 interface ProfileNode {
   readonly id: number;
@@ -40,22 +43,26 @@ export function placeOf(url: string, functionName: string): string {
   return url;
 }
 
-/** Self time per function and per place, largest first. */
-export function summarise(profile: CpuProfile): { byFunction: ProfileRow[]; byPlace: ProfileRow[] } {
-  const nodes = new Map(profile.nodes.map((node) => [node.id, node]));
-  const selfUs = new Map<number, number>();
-  profile.samples.forEach((id, i) => {
-    selfUs.set(id, (selfUs.get(id) ?? 0) + (profile.timeDeltas[i] ?? 0));
-  });
-  const total = [...selfUs.values()].reduce((a, b) => a + b, 0);
+/** Self time per function and per place, largest first, over all the profiles. */
+export function summarise(profiles: readonly CpuProfile[]): {
+  byFunction: ProfileRow[];
+  byPlace: ProfileRow[];
+} {
   const byFunction = new Map<string, number>();
   const byPlace = new Map<string, number>();
-  for (const [id, us] of selfUs) {
-    const frame = nodes.get(id)!.callFrame;
-    const place = placeOf(frame.url, frame.functionName);
-    const name = `${frame.functionName || '(anonymous)'} ${place}:${frame.lineNumber + 1}`;
-    byFunction.set(name, (byFunction.get(name) ?? 0) + us);
-    byPlace.set(place, (byPlace.get(place) ?? 0) + us);
+  let total = 0;
+  for (const profile of profiles) {
+    const nodes = new Map(profile.nodes.map((node) => [node.id, node]));
+    profile.samples.forEach((id, i) => {
+      const us = profile.timeDeltas[i] ?? 0;
+      const frame = nodes.get(id)!.callFrame;
+      if (frame.functionName === '(idle)') return;
+      const place = placeOf(frame.url, frame.functionName);
+      const name = `${frame.functionName || '(anonymous)'} ${place}:${frame.lineNumber + 1}`;
+      byFunction.set(name, (byFunction.get(name) ?? 0) + us);
+      byPlace.set(place, (byPlace.get(place) ?? 0) + us);
+      total += us;
+    });
   }
   const rows = (map: Map<string, number>): ProfileRow[] =>
     [...map.entries()]
@@ -67,17 +74,32 @@ export function summarise(profile: CpuProfile): { byFunction: ProfileRow[]; byPl
 function table(title: string, rows: readonly ProfileRow[], top: number): string {
   const lines = rows
     .slice(0, top)
-    .map((r) => `  ${(r.share * 100).toFixed(1).padStart(5)} %  ${r.ms.toFixed(0).padStart(7)} ms  ${r.name}`);
+    .map(
+      (r) =>
+        `  ${(r.share * 100).toFixed(1).padStart(5)} %  ${r.ms.toFixed(0).padStart(7)} ms  ${r.name}`,
+    );
   return [title, ...lines].join('\n');
 }
 
+async function profileFiles(target: string): Promise<string[]> {
+  if (!(await stat(target)).isDirectory()) return [target];
+  const names = (await readdir(target)).filter((name) => name.endsWith('.cpuprofile'));
+  return names.sort().map((name) => path.join(target, name));
+}
+
 async function main(argv: readonly string[]): Promise<void> {
-  const file = argv.find((a) => !a.startsWith('--'));
-  if (!file) throw new Error('usage: profile-summary <file.cpuprofile> [--top N]');
   const topAt = argv.indexOf('--top');
   const top = topAt >= 0 ? Number(argv[topAt + 1]) : 25;
-  const profile = JSON.parse(await readFile(file, 'utf8')) as CpuProfile;
-  const { byFunction, byPlace } = summarise(profile);
+  const targets = argv.filter((a, i) => !a.startsWith('--') && i !== topAt + 1);
+  if (targets.length === 0) {
+    throw new Error('usage: profile-summary <file.cpuprofile | folder>... [--top N]');
+  }
+  const files = (await Promise.all(targets.map(profileFiles))).flat();
+  const profiles = await Promise.all(
+    files.map(async (file) => JSON.parse(await readFile(file, 'utf8')) as CpuProfile),
+  );
+  const { byFunction, byPlace } = summarise(profiles);
+  process.stdout.write(`${files.length} profiles\n`);
   process.stdout.write(`${table('self time by place', byPlace, top)}\n\n`);
   process.stdout.write(`${table('self time by function', byFunction, top)}\n`);
 }

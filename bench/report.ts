@@ -39,7 +39,9 @@ const s = (ms: number): string => `${(ms / 1000).toFixed(1)} s`;
 const per = (ms: number, n: number): string => (n > 0 ? `${(ms / n).toFixed(1)} ms` : '—');
 
 function row(cells: readonly string[], widths: readonly number[]): string {
-  return cells.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]!) : cell.padStart(widths[i]!))).join('  ');
+  return cells
+    .map((cell, i) => (i === 0 ? cell.padEnd(widths[i]!) : cell.padStart(widths[i]!)))
+    .join('  ');
 }
 
 function phases(stats: BuildStats): string {
@@ -52,6 +54,7 @@ function phases(stats: BuildStats): string {
 export interface Report {
   readonly size: CatalogueSize;
   readonly layout: string;
+  readonly pdfStep: string;
   readonly inserts: number;
   readonly sets: number;
   readonly full: Measured;
@@ -63,7 +66,16 @@ export interface Report {
 export function formatTable(report: Report): string {
   const { full, floor, rebuild, noop } = report;
   const runs = [full, floor, rebuild, noop];
-  const head = ['build', 'wall', 'CPU', 'plans made/cached', 'views made/cached', 'pages', 'PDFs made/copied (pages)', 'peak RSS'];
+  const head = [
+    'build',
+    'wall',
+    'CPU',
+    'plans made/cached',
+    'views made/cached',
+    'pages',
+    'PDFs made/copied (pages)',
+    'peak RSS',
+  ];
   const rows = runs.map((m) => {
     const st = m.result.stats;
     return [
@@ -88,10 +100,13 @@ export function formatTable(report: Report): string {
     '',
     `stovecard bench: ${size.pots} pots × ${size.coffees} coffees × ${size.stoves} stoves = ` +
       `${full.result.stationCards} station cards + ${report.inserts} inserts, ${report.sets} sets (${report.layout}); ` +
-      `${st.workers} worker threads`,
+      `${st.workers} worker threads; PDF step ${report.pdfStep}`,
     '',
     row(head, widths),
-    row(head.map((h) => '-'.repeat(h.length)), widths),
+    row(
+      head.map((h) => '-'.repeat(h.length)),
+      widths,
+    ),
     ...rows.map((r) => row(r, widths)),
     '',
     'phases (wall):',

@@ -1,7 +1,8 @@
 /**
- * `npm run bench [-- --cards N] [--sets by-stove|by-coffee] [--workers N] [--seed S] [--keep]`:
- * the site build under a roaster's load, in one process, on a synthetic catalogue
- * (bench/catalogue.ts; 1,000 station cards by default) in a temporary folder:
+ * `npm run bench [-- --cards N] [--sets by-stove|by-coffee] [--workers N] [--pdf-step site|module]
+ * [--seed S] [--keep]`: the site build under a roaster's load, in one process, on a
+ * synthetic catalogue (bench/catalogue.ts; 1,000 station cards by default) in a temporary
+ * folder:
  *
  *   full      a cold cache: every plan, view, page and PDF made
  *   floor     the same site again with every plan and view (chart, cross-section, QR code,
@@ -10,9 +11,12 @@
  *   rebuild   one coffee's permeability changed by 10 %, everything else cached
  *   no-op     nothing changed
  *
- * Each build is buildSite with the site PDF step (generator/build/pdf-step.ts), as
- * `stovecard build` runs it. Prints a table and the ratios full/floor (target ≤ 1.5) and
- * rebuild/full (target ≤ 0.05). Timings are only compared within one run (shared machine).
+ * Each build is buildSite with a PDF step as its extra step, as `stovecard build` runs it:
+ * `site` (default), the build's incremental step on the workers (generator/build/pdf-step.ts),
+ * or `module`, the PDF module's own step (render/pdf/site-pdfs.ts pdfBuildStep: every PDF,
+ * in one thread; its PDFs are not counted in the table). Prints a table and the ratios
+ * full/floor (target ≤ 1.5) and rebuild/full (target ≤ 0.05). Timings are only compared
+ * within one run (shared machine).
  * For a CPU profile: `node --cpu-prof --cpu-prof-dir=prof --import tsx bench/run.ts
  * --cards 200`, then `npx tsx bench/profile-summary.ts prof/<file>.cpuprofile`.
  */
@@ -20,10 +24,11 @@ import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { availableParallelism, tmpdir } from 'node:os';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
-import { buildSite, type BuildResult } from '../generator/build/build-site.ts';
+import { buildSite, type BuildResult, type BuildStep } from '../generator/build/build-site.ts';
 import { expandCards } from '../generator/build/cards.ts';
 import { sitePdfStep } from '../generator/build/pdf-step.ts';
 import { loadCatalogue } from '../generator/content/index.ts';
+import { pdfBuildStep } from '../generator/render/pdf/site-pdfs.ts';
 import { DEFAULT_SIZE, sizeForCards, stationCount, writeCatalogue } from './catalogue.ts';
 import { formatTable, memorySampler, type Measured } from './report.ts';
 
@@ -33,6 +38,7 @@ interface Run {
   readonly root: string;
   readonly contentDir: string;
   readonly workers: number;
+  readonly pdfStep: BuildStep;
 }
 
 async function measured(name: string, run: Run): Promise<Measured> {
@@ -47,7 +53,7 @@ async function measured(name: string, run: Run): Promise<Measured> {
       cacheDir: path.join(run.root, 'cache'),
       env: EPOCH,
       workers: run.workers,
-      extraSteps: [sitePdfStep],
+      extraSteps: [run.pdfStep],
     });
   } finally {
     memory.stop();
@@ -77,6 +83,7 @@ async function main(): Promise<void> {
       workers: { type: 'string' },
       seed: { type: 'string' },
       sets: { type: 'string' },
+      'pdf-step': { type: 'string' },
       keep: { type: 'boolean' },
     },
   });
@@ -87,6 +94,10 @@ async function main(): Promise<void> {
   if (layout !== 'by-stove' && layout !== 'by-coffee') {
     throw new Error(`bench: --sets is by-stove or by-coffee, not "${layout}"`);
   }
+  const stepName = values['pdf-step'] ?? 'site';
+  const steps: Record<string, BuildStep> = { site: sitePdfStep, module: pdfBuildStep };
+  const pdfStep = steps[stepName];
+  if (!pdfStep) throw new Error(`bench: --pdf-step is site or module, not "${stepName}"`);
   const root = await mkdtemp(path.join(tmpdir(), 'stovecard-bench-'));
   const contentDir = path.join(root, 'content');
   try {
@@ -97,9 +108,9 @@ async function main(): Promise<void> {
     process.stderr.write(
       `stovecard bench: ${size.pots} pots × ${size.coffees} coffees × ${size.stoves} stoves = ` +
         `${stationCount(size)} station cards, ${jobs.inserts.length} inserts, ` +
-        `${jobs.sets.length} sets (${layout}); ${workers} workers; ${root}\n`,
+        `${jobs.sets.length} sets (${layout}); ${workers} workers; PDF step ${stepName}; ${root}\n`,
     );
-    const run: Run = { root, contentDir, workers };
+    const run: Run = { root, contentDir, workers, pdfStep };
     const full = await measured('full', run);
     // The floor: plans and views stay cached; pages and PDFs are rendered again.
     await rm(path.join(root, 'cache', 'pdfs'), { recursive: true, force: true });
@@ -110,7 +121,7 @@ async function main(): Promise<void> {
     const rebuild = await measured(`rebuild (${edited})`, run);
     const noop = await measured('no-op rebuild', run);
     process.stdout.write(
-      `${formatTable({ size, layout, inserts: jobs.inserts.length, sets: jobs.sets.length, full, floor, rebuild, noop })}\n`,
+      `${formatTable({ size, layout, pdfStep: stepName, inserts: jobs.inserts.length, sets: jobs.sets.length, full, floor, rebuild, noop })}\n`,
     );
   } finally {
     if (values.keep) process.stderr.write(`kept ${root}\n`);

@@ -5,8 +5,9 @@
  *   plan     the simulation, physics, numerics, the planner and the planner's words (which
  *            are copied into refusals and warnings); loader, renderer or template edits
  *            keep every plan
- *   render   the renderers (views, charts, drawings, PDFs) and every word they print, and
- *            the installed packages (package-lock.json: vega, qrcode, pdfkit, the fonts)
+ *   render   the renderers (views, charts, drawings, PDFs), every word they print, the
+ *            build code that hands them their input, and the installed packages
+ *            (package-lock.json: vega, qrcode, pdfkit, the fonts)
  *   page     the templates and the Eleventy wiring, and the installed packages
  *
  * A view or PDF is keyed by its plan's key as well, so it also follows the plan code.
@@ -25,12 +26,16 @@ export const PLAN_SOURCES: readonly string[] = [
   'generator/numerics',
   'generator/planning',
   'generator/words/plan.ts',
+  'generator/build/plan-all.ts', // what of the catalogue a plan request carries
 ];
 
 /** … of the render code version (views, charts, drawings, PDFs). */
 export const RENDER_SOURCES: readonly string[] = [
   'generator/render',
   'generator/words',
+  'generator/build/site-data.ts', // what a view is given (its catalogue, its fingerprint)
+  'generator/build/render-cache.ts',
+  'generator/build/pdf-step.ts', // what a set's PDF is given
   'package-lock.json',
 ];
 
@@ -39,6 +44,8 @@ export const PAGE_SOURCES: readonly string[] = [
   'templates',
   '.eleventy.js',
   'generator/render/eleventy-setup.ts',
+  'generator/build/eleventy.ts',
+  'generator/build/pages.ts',
   'package-lock.json',
 ];
 

@@ -38,7 +38,11 @@ export interface PageRun {
 type CardView = StationCardView | InsertCardView;
 
 /** The parts of SiteData a card's page reads besides its card. */
-export const CARD_PAGE_GLOBALS = ['site', 'nav', 'index'] as const satisfies readonly (keyof SiteData)[];
+export const CARD_PAGE_GLOBALS = [
+  'site',
+  'nav',
+  'index',
+] as const satisfies readonly (keyof SiteData)[];
 
 /** Writes every page into run.siteDir; returns the number of pages. */
 export async function writePages(run: PageRun): Promise<number> {
@@ -52,7 +56,9 @@ export async function writePages(run: PageRun): Promise<number> {
   };
   const cards = [...stationCards, ...insertCards];
   const keys = cards.map(keyOf);
-  const folders = new Set(cards.map((card) => path.dirname(path.join(siteDir, card.paths.pageFile))));
+  const folders = new Set(
+    cards.map((card) => path.dirname(path.join(siteDir, card.paths.pageFile))),
+  );
   await Promise.all([...folders].map((folder) => mkdir(folder, { recursive: true })));
   const copied = await mapConcurrent(cards, IO_LIMIT, async (card, i) => {
     const key = keys[i] ?? null;

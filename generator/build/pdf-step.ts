@@ -36,8 +36,9 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const cache = new RenderCache(context.cacheDir);
   const renderVersion = await renderCodeVersion();
   const author = data.site.businessName;
-  const env = context.env;
-  const epoch = env.SOURCE_DATE_EPOCH;
+  // Of the environment, a PDF reads only the date setting (render/pdf/document.ts pdfDate).
+  const epoch = context.env.SOURCE_DATE_EPOCH;
+  const env: NodeJS.ProcessEnv = epoch === undefined ? {} : { SOURCE_DATE_EPOCH: epoch };
   const textOf = (card: CardView): ViewText => {
     const known = context.viewTexts.get(card.paths.pdfFile);
     if (known) return known;

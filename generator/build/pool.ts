@@ -10,12 +10,18 @@
  * #47747), so this works under the tsx CLI, bin/stovecard.js and vitest alike, from any
  * working folder. Tasks and results are structured-cloned; plans and views
  * travel as JSON text (plan-cache.ts), PDFs as bytes. A task that throws in a worker
- * rejects with an Error of the same name and message; a worker that dies fails the tasks
- * it held and is replaced on the next task.
+ * rejects with an Error of the same name and message. A worker that dies fails the task it
+ * held and is replaced on the next one; one that dies before finishing any task (it could
+ * not start) fails every queued task with its error, and the pool takes no more.
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import { WORKER_ROLE, type TaskRequest, type TaskResult, type WorkerReply } from './build-worker.ts';
+import {
+  WORKER_ROLE,
+  type TaskRequest,
+  type TaskResult,
+  type WorkerReply,
+} from './build-worker.ts';
 
 export type { TaskRequest, TaskResult } from './build-worker.ts';
 
@@ -26,7 +32,7 @@ function inheritedFlags(): string[] {
   return process.execArgv.filter((flag) => /^--cpu-prof(-dir|-name|-interval)?(=|$)/.test(flag));
 }
 
-/** A task's result and how long the worker spent on it (thread time, ms). */
+/** A task's result and how long the worker spent on it (ms, timed in the worker). */
 export interface Timed<K extends TaskRequest['kind']> {
   readonly result: TaskResult<K>;
   readonly ms: number;
@@ -41,6 +47,7 @@ interface Pending {
 interface Slot {
   readonly worker: Worker;
   task: (Pending & { id: number }) | null;
+  finished: number;
   dead: boolean;
 }
 
@@ -55,8 +62,10 @@ export class WorkerPool {
   private readonly queue: Pending[] = [];
   private nextId = 0;
   private closed = false;
-  /** Tasks run and thread time spent, by kind. */
-  readonly ran = new Map<TaskRequest['kind'], { tasks: number; ms: number }>();
+  /** Why no worker could start, once one could not. */
+  private broken: Error | null = null;
+  /** Workers started so far (on demand, up to `size`, and in place of one that died). */
+  spawned = 0;
 
   constructor(options: PoolOptions = {}) {
     this.size = Math.max(1, options.size ?? availableParallelism());
@@ -65,6 +74,7 @@ export class WorkerPool {
   /** Queues one task; resolves with its result once a worker has run it. */
   run<K extends TaskRequest['kind']>(request: TaskRequest & { kind: K }): Promise<Timed<K>> {
     if (this.closed) return Promise.reject(new Error('worker pool: closed'));
+    if (this.broken) return Promise.reject(this.broken);
     return new Promise((resolve, reject) => {
       this.queue.push({
         request,
@@ -74,9 +84,6 @@ export class WorkerPool {
       this.dispatch();
     });
   }
-
-  /** Workers started so far (they start on demand, up to `size`, and when one died). */
-  spawned = 0;
 
   /** Rejects every task not yet started (after a failure, so the rest is not rendered). */
   clearQueue(reason: Error = new Error('worker pool: cancelled')): void {
@@ -111,15 +118,13 @@ export class WorkerPool {
       workerData: { role: WORKER_ROLE },
     });
     this.spawned += 1;
-    const slot: Slot = { worker, task: null, dead: false };
+    const slot: Slot = { worker, task: null, finished: 0, dead: false };
     worker.on('message', (reply: WorkerReply) => {
       const task = slot.task;
       if (!task || task.id !== reply.id) return;
       slot.task = null;
+      slot.finished += 1;
       if (reply.ok) {
-        const kind = task.request.kind;
-        const ran = this.ran.get(kind) ?? { tasks: 0, ms: 0 };
-        this.ran.set(kind, { tasks: ran.tasks + 1, ms: ran.ms + reply.ms });
         task.resolve({ result: reply.result, ms: reply.ms });
       } else {
         const error = new Error(reply.error.message);
@@ -135,6 +140,10 @@ export class WorkerPool {
       this.slots.splice(this.slots.indexOf(slot), 1);
       slot.task?.reject(error);
       slot.task = null;
+      if (slot.finished === 0) {
+        this.broken = error;
+        this.clearQueue(error);
+      }
       if (!this.closed) this.dispatch();
     };
     worker.on('error', fail);

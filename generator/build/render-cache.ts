@@ -28,7 +28,10 @@ export function sha256(...parts: readonly string[]): string {
 }
 
 /** What of the site a station card's view prints (its entries are in the plan's key). */
-export type ViewSite = Pick<SiteEntry, 'units' | 'paper' | 'baseUrl' | 'business' | 'kettlePresetsK'>;
+export type ViewSite = Pick<
+  SiteEntry,
+  'units' | 'paper' | 'baseUrl' | 'business' | 'kettlePresetsK'
+>;
 
 export function viewSite(site: SiteEntry): ViewSite {
   const { units, paper, baseUrl, business, kettlePresetsK } = site;

@@ -92,9 +92,15 @@ export function cardCatalogue(
   return {
     contentDir: catalogue.contentDir,
     site: { ...catalogue.site, sets: [] },
-    pots: pick(catalogue.pots, requests.map((r) => r.potId)),
+    pots: pick(
+      catalogue.pots,
+      requests.map((r) => r.potId),
+    ),
     coffees: pick(catalogue.coffees, [...requests.map((r) => r.coffeeId), ...coffeeIds]),
-    stoves: pick(catalogue.stoves, requests.map((r) => r.stoveId)),
+    stoves: pick(
+      catalogue.stoves,
+      requests.map((r) => r.stoveId),
+    ),
     logs: new Map(),
   };
 }

@@ -2,7 +2,7 @@
 import { buildSite, type BuildResult } from '../build/build-site.ts';
 import { terminalProgress } from '../build/progress.ts';
 import { serveSite } from '../build/serve.ts';
-import { pdfBuildStep } from '../render/pdf/site-pdfs.ts';
+import { sitePdfStep } from '../build/pdf-step.ts';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
 import { UsageError } from './errors.ts';
@@ -63,7 +63,7 @@ export async function run(argv: string[]): Promise<number> {
       contentDir,
       outDir,
       onProgress: progress,
-      extraSteps: [pdfBuildStep],
+      extraSteps: [sitePdfStep],
     });
   } catch (error) {
     progress.finish();
@@ -83,6 +83,7 @@ export async function run(argv: string[]): Promise<number> {
       contentDir,
       outDir,
       port,
+      extraSteps: [sitePdfStep],
       describe: summaryLine,
       log: (line) => process.stderr.write(`${line}\n`),
     });

@@ -159,7 +159,10 @@ describe('a card page', () => {
     const a = path.join(root, 'pages-a');
     const b = path.join(root, 'pages-b');
     await writeSite({ outDir: a, data });
-    await writeSite({ outDir: b, data: { ...changed, stationCards: data.stationCards.slice(0, 2) } });
+    await writeSite({
+      outDir: b,
+      data: { ...changed, stationCards: data.stationCards.slice(0, 2) },
+    });
     for (const card of [...data.stationCards.slice(0, 2), ...data.insertCards]) {
       const page = card.paths.pageFile;
       expect(await readFile(path.join(b, page), 'utf8'), page).toBe(

@@ -33,14 +33,14 @@ afterAll(async () => {
 describe('WorkerPool', () => {
   it('pool.run({ kind: "plan" }) gives planCard’s plan for every demo card, byte for byte', async () => {
     const requests = jobs.stations.map((job) => planRequestOf(catalogue, job.request));
-    const pooled = await Promise.all(requests.map((request) => pool.run({ kind: 'plan', request })));
+    const pooled = await Promise.all(
+      requests.map((request) => pool.run({ kind: 'plan', request })),
+    );
     expect(pool.spawned).toBe(2);
     requests.forEach((request, i) => {
       const inline = planCard(request);
       expect(pooled[i]!.result.json, jobs.stations[i]!.slug).toBe(planToJson(inline));
-      expect(pooled[i]!.result.simulations).toBe(
-        'simulations' in inline ? inline.simulations : 0,
-      );
+      expect(pooled[i]!.result.simulations).toBe('simulations' in inline ? inline.simulations : 0);
     });
   });
 
