@@ -9,7 +9,7 @@
  *   z = bedTop       baseHeight + basket depth
  *   z = spout        outlet of the upper column into the upper chamber
  */
-import type { BedModel, PotModel } from './types.ts';
+import type { PotModel } from './types.ts';
 
 export interface PotGeometry {
   readonly baseAreaM2: number;
@@ -46,11 +46,6 @@ export function potGeometry(pot: PotModel): PotGeometry {
     volumeAtValveM3: baseAreaM2 * pot.valveHeightM,
     volumeAtTubeEndM3: baseAreaM2 * pot.tubeGapM,
   };
-}
-
-/** Dose of a level, untamped basket, kg. */
-export function levelBasketDoseKg(pot: PotModel, bed: BedModel): number {
-  return potGeometry(pot).basketVolumeM3 * bed.bulkDensityKgM3;
 }
 
 function circleArea(diameterM: number): number {

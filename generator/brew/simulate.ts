@@ -46,13 +46,7 @@ import { darcyBedResistance, poiseuilleTubeResistance } from '../physics/flow-re
 import { potGeometry, type PotGeometry } from './geometry.ts';
 import { BrewSetupError, BrewDidNotFinishError } from './errors.ts';
 import { summariseExtraction } from './extraction.ts';
-import type {
-  BrewEvent,
-  BrewEventKind,
-  BrewResult,
-  BrewSetup,
-  SeriesPoint,
-} from './types.ts';
+import type { BrewEvent, BrewEventKind, BrewResult, BrewSetup, SeriesPoint } from './types.ts';
 
 /**
  * Specific heat of roasted, ground coffee (dry), J/(kg·K). From memory: published values
@@ -64,7 +58,14 @@ export const GROUND_COFFEE_SPECIFIC_HEAT_J_PER_KG_K = 1700;
 /** After the heat is off, the brew counts as finished when the flow falls below this, m³/s. */
 export const TAIL_END_FLOW_M3_PER_S = 0.005e-6;
 
-const T = 0, ML = 1, MD = 2, TBED = 3, EIN = 4, ELOSS = 5, HOUT = 6, VCUP = 7;
+const T = 0,
+  ML = 1,
+  MD = 2,
+  TBED = 3,
+  EIN = 4,
+  ELOSS = 5,
+  HOUT = 6,
+  VCUP = 7;
 const STATE_SIZE = 8;
 const RTOL = 1e-6;
 const ATOL = Float64Array.from([1e-5, 1e-9, 1e-9, 1e-5, 1e-2, 1e-2, 1e-2, 1e-12]);
@@ -130,7 +131,6 @@ export function simulateBrew(setup: BrewSetup): BrewResult {
   let steps = 0;
   let evaluations = 0;
   const sample = new Float64Array(STATE_SIZE);
-  const dydt = new Float64Array(STATE_SIZE);
 
   const record = (y: Float64Array): void => {
     algebraic(c, y, alg);
@@ -262,8 +262,8 @@ export function simulateBrew(setup: BrewSetup): BrewResult {
   if (collectSeries && (series.length === 0 || series[series.length - 1]!.tS < t)) pushSeries(t, y);
 
   algebraic(c, y, alg);
-  derivatives(c, mode, y, dydt, alg);
-  const at = (kind: BrewEventKind): number | null => events.find((e) => e.kind === kind)?.tS ?? null;
+  const at = (kind: BrewEventKind): number | null =>
+    events.find((e) => e.kind === kind)?.tS ?? null;
   const cupKg = Math.max(0, y[MD]! - c.firstCoffeeKg);
   const heldUpKg = Math.min(y[MD]!, c.firstCoffeeKg);
 
@@ -322,8 +322,16 @@ function prepare(setup: BrewSetup): Constants {
   const boilingNow = saturationPressurePa(Math.min(setup.startK, 647)) >= room.ambientPa;
   check(!boilingNow, 'startK', 'the water would already boil at the room pressure');
   check(setup.startK >= 274.15, 'startK', 'the water would freeze');
-  check(setup.fillVolumeM3 > geometry.volumeAtTubeEndM3, 'fillVolumeM3', 'the water does not reach the funnel tube');
-  check(setup.fillVolumeM3 < 0.98 * pot.sealedVolumeM3, 'fillVolumeM3', 'no air space is left in the base');
+  check(
+    setup.fillVolumeM3 > geometry.volumeAtTubeEndM3,
+    'fillVolumeM3',
+    'the water does not reach the funnel tube',
+  );
+  check(
+    setup.fillVolumeM3 < 0.98 * pot.sealedVolumeM3,
+    'fillVolumeM3',
+    'no air space is left in the base',
+  );
   check(setup.heatInputW >= 0, 'heatInputW', 'heat input must not be negative');
   check(bed.permeabilityM2 > 0, 'permeabilityM2', 'permeability must be positive');
 
@@ -387,7 +395,13 @@ function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<type
   const { setup, geometry } = c;
   const temperature = y[T]!;
   const key = a.key;
-  if (a.liquid && key[0] === temperature && key[1] === y[ML] && key[2] === y[MD] && key[3] === y[TBED]) {
+  if (
+    a.liquid &&
+    key[0] === temperature &&
+    key[1] === y[ML] &&
+    key[2] === y[MD] &&
+    key[3] === y[TBED]
+  ) {
     return a.liquid;
   }
   const pSat = saturationPressurePa(temperature);
@@ -405,11 +419,23 @@ function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<type
   const muTube = waterViscosityPaS(temperature, rho);
   const bedK = y[TBED]!;
   const muBed = waterViscosityPaS(bedK, saturatedLiquidDensityKgM3(bedK));
-  const columnFilled = Math.min(1, Math.max(0, (y[MD]! - c.bedWetKg) / (c.firstCoffeeKg - c.bedWetKg || 1)));
+  const columnFilled = Math.min(
+    1,
+    Math.max(0, (y[MD]! - c.bedWetKg) / (c.firstCoffeeKg - c.bedWetKg || 1)),
+  );
   const resistance =
     poiseuilleTubeResistance(muTube, geometry.tubeLengthM, setup.pot.tubeInnerDiameterM) +
-    darcyBedResistance(muBed, setup.pot.basketDepthM, setup.bed.permeabilityM2, geometry.bedAreaM2) +
-    poiseuilleTubeResistance(muBed, geometry.columnLengthM * columnFilled, setup.pot.tubeInnerDiameterM);
+    darcyBedResistance(
+      muBed,
+      setup.pot.basketDepthM,
+      setup.bed.permeabilityM2,
+      geometry.bedAreaM2,
+    ) +
+    poiseuilleTubeResistance(
+      muBed,
+      geometry.columnLengthM * columnFilled,
+      setup.pot.tubeInnerDiameterM,
+    );
   a.waterDensity = rho;
   a.liquidVolume = liquidVolume;
   a.gasVolume = gasVolume;
@@ -418,7 +444,8 @@ function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<type
   a.drivingPa = pressure - setup.room.ambientPa - head;
   a.resistance = resistance;
   a.enthalpy = liquid.enthalpyJPerKg;
-  a.vapourKg = (pSat * gasVolume * WATER_MOLAR_MASS_KG_PER_MOL) / (MOLAR_GAS_CONSTANT * temperature);
+  a.vapourKg =
+    (pSat * gasVolume * WATER_MOLAR_MASS_KG_PER_MOL) / (MOLAR_GAS_CONSTANT * temperature);
   a.liquid = liquid;
   key[0] = temperature;
   key[1] = y[ML]!;
@@ -437,7 +464,13 @@ function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<type
  *   Ṫ = (P − L − h_fg·ε·ρQ/(1−ε)) / (C + h_fg·(a − bκ)/(1−ε)),
  *   ṁ_v = (ε·ρQ + (a − bκ)·Ṫ)/(1−ε).
  */
-function derivatives(c: Constants, mode: Mode, y: Float64Array, out: Float64Array, a: Algebraic): void {
+function derivatives(
+  c: Constants,
+  mode: Mode,
+  y: Float64Array,
+  out: Float64Array,
+  a: Algebraic,
+): void {
   const { setup } = c;
   const liquid = algebraic(c, y, a);
   const temperature = y[T]!;
@@ -446,7 +479,9 @@ function derivatives(c: Constants, mode: Mode, y: Float64Array, out: Float64Arra
   const pSatSlope = saturationPressureSlopePaPerK(temperature);
   const massPerMoleOverR = WATER_MOLAR_MASS_KG_PER_MOL / MOLAR_GAS_CONSTANT;
   const dVapourDT =
-    a.gasVolume * massPerMoleOverR * (pSatSlope / temperature - a.saturationPa / (temperature * temperature));
+    a.gasVolume *
+    massPerMoleOverR *
+    (pSatSlope / temperature - a.saturationPa / (temperature * temperature));
   const vapourDensity = (a.saturationPa * massPerMoleOverR) / temperature;
   const kappa = (y[ML]! * liquid.expansivityPerK) / rho;
   const eps = vapourDensity / rho;
@@ -460,7 +495,8 @@ function derivatives(c: Constants, mode: Mode, y: Float64Array, out: Float64Arra
   const massFlow = rho * q;
   const coupling = dVapourDT - vapourDensity * kappa;
   const dT =
-    (power - loss - (hfg * eps * massFlow) / (1 - eps)) / (heatCapacity + (hfg * coupling) / (1 - eps));
+    (power - loss - (hfg * eps * massFlow) / (1 - eps)) /
+    (heatCapacity + (hfg * coupling) / (1 - eps));
   const dVapour = (eps * massFlow + coupling * dT) / (1 - eps);
 
   out[T] = dT;
@@ -470,8 +506,10 @@ function derivatives(c: Constants, mode: Mode, y: Float64Array, out: Float64Arra
   if (displaced > c.tubeFullKg && massFlow > 0) {
     const wettedKg = Math.min(displaced - c.tubeFullKg, c.retainedKg);
     const bedCapacity =
-      c.doseKg * GROUND_COFFEE_SPECIFIC_HEAT_J_PER_KG_K + wettedKg * liquid.isobaricHeatCapacityJPerKgK;
-    out[TBED] = (massFlow * liquid.isobaricHeatCapacityJPerKgK * (temperature - y[TBED]!)) / bedCapacity;
+      c.doseKg * GROUND_COFFEE_SPECIFIC_HEAT_J_PER_KG_K +
+      wettedKg * liquid.isobaricHeatCapacityJPerKgK;
+    out[TBED] =
+      (massFlow * liquid.isobaricHeatCapacityJPerKgK * (temperature - y[TBED]!)) / bedCapacity;
   } else {
     out[TBED] = 0;
   }

@@ -29,12 +29,10 @@ import {
   toMl,
   toMm,
   toOunces,
+  toPsi,
+  toFeet,
 } from '../units.ts';
 
-/** Pa per pound-force per square inch (NIST SP 811, B.8; exact to the digits given). */
-export const PA_PER_PSI = 6894.757293168;
-/** Metres per international foot (NIST SP 811, B.8; exact). */
-export const M_PER_FT = 0.3048;
 /** Time ranges are printed to this step, s. */
 export const TIME_STEP_S = 5;
 
@@ -130,11 +128,11 @@ export function length(m: number, units: UnitSystem): Quantity {
 }
 
 export function pressure(pa: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(pa / PA_PER_PSI, 1, 'psi') : quantity(toBar(pa), 2, 'bar');
+  return units === 'us' ? quantity(toPsi(pa), 1, 'psi') : quantity(toBar(pa), 2, 'bar');
 }
 
 export function altitude(m: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(m / M_PER_FT, 0, 'ft') : quantity(m, 0, 'm');
+  return units === 'us' ? quantity(toFeet(m), 0, 'ft') : quantity(m, 0, 'm');
 }
 
 /** A share 0–1 as "78 %". */
