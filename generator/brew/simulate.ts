@@ -27,7 +27,7 @@
  * extraction temperature of each millilitre is the water's as it reaches the grounds (the
  * SCA's band is defined at the point of contact), recorded in `cupCurve`.
  *
- * Tolerances: rtol 1e-6 on every state, atol per state (ATOL below); event times to 1e-9 s.
+ * Tolerances: rtol 1e-6 (setup.relativeTolerance) on every state, atol per state (ATOL below); event times to 1e-9 s.
  */
 import { integrate, type EventFunction, type DenseStep } from '../numerics/dormand-prince.ts';
 import {
@@ -67,7 +67,7 @@ const T = 0,
   HOUT = 6,
   VCUP = 7;
 const STATE_SIZE = 8;
-const RTOL = 1e-6;
+export const DEFAULT_RTOL = 1e-6;
 const ATOL = Float64Array.from([1e-5, 1e-9, 1e-9, 1e-5, 1e-2, 1e-2, 1e-2, 1e-12]);
 const SERIES_INTERVAL_S = 1;
 /** Where in each step the cup curve and peak pressure are sampled. */
@@ -109,9 +109,93 @@ interface Mode {
 
 /** Run one brew. Throws BrewSetupError for impossible setups; never returns NaN. */
 export function simulateBrew(setup: BrewSetup): BrewResult {
+  return runBrew(setup, prepare(setup), null, null);
+}
+
+/**
+ * A brew with the heat left on, kept so that the same brew with the heat taken off later
+ * can branch off it: the planner tries many off-heat moments per candidate, and every one
+ * of those runs has the heat-on run's past.
+ */
+export interface HeatOnBrew {
+  readonly result: BrewResult;
+  /**
+   * The brew with the heat taken off at `offS` (before the heat-on run ended): exactly
+   * simulateBrew({ ...setup, heatOffAtS: offS }), bit for bit, but only the steps from the
+   * one containing `offS` on are integrated (and `stats` counts only those).
+   */
+  heatOffAt(offS: number): BrewResult;
+}
+
+export function simulateHeatOn(setup: BrewSetup): HeatOnBrew {
+  if (setup.heatOffAtS !== undefined) {
+    throw new BrewSetupError('heatOffAtS', 'a heat-on run leaves the heat on: leave heatOffAtS out');
+  }
   const c = prepare(setup);
+  const log: RunLog = { checkpoints: [], events: [], series: [], cupCurve: [] };
+  const result = runBrew(setup, c, log, null);
+  return {
+    result,
+    heatOffAt(offS) {
+      const branched = { ...setup, heatOffAtS: offS };
+      const points = log.checkpoints;
+      // The last step boundary strictly before offS: the full run's step that reaches offS
+      // starts there (a boundary at offS itself would not see the event's sign change).
+      let lo = 0;
+      let hi = points.length - 1;
+      if (points.length === 0 || !(points[0]!.t < offS) || !(offS < result.endS)) {
+        return runBrew(branched, c, null, null);
+      }
+      while (lo < hi) {
+        const mid = (lo + hi + 1) >> 1;
+        if (points[mid]!.t < offS) lo = mid;
+        else hi = mid - 1;
+      }
+      return runBrew(branched, c, null, { log, at: points[lo]! });
+    },
+  };
+}
+
+/** Where a run can be taken up again: a step boundary and everything recorded up to it. */
+interface Checkpoint {
+  readonly t: number;
+  readonly y: Float64Array;
+  /** The integrator's next step (undefined: its own starting step) and controller memory. */
+  readonly h: number | undefined;
+  readonly errPrev: number | undefined;
+  readonly flowing: boolean;
+  readonly events: number;
+  readonly series: number;
+  readonly cupCurve: number;
+  readonly peakGaugePa: number;
+  readonly nextSeriesT: number;
+  readonly firstCoffeeK: number | null;
+  /** The integration call's maxStep (its default, tEnd − t0, from where the call began). */
+  readonly maxStep: number;
+}
+
+/** A heat-on run's checkpoints and records (append-only, so a checkpoint's prefix stays valid). */
+interface RunLog {
+  readonly checkpoints: Checkpoint[];
+  readonly events: BrewEvent[];
+  readonly series: SeriesPoint[];
+  readonly cupCurve: { cupM3: number; extractionK: number }[];
+}
+
+function runBrew(
+  setup: BrewSetup,
+  prepared: Constants,
+  log: RunLog | null,
+  resume: { readonly log: RunLog; readonly at: Checkpoint } | null,
+): BrewResult {
+  // Only the heat-off time differs between a heat-on run's constants and a branch's.
+  const c: Constants = prepared.setup === setup ? prepared : { ...prepared, setup };
   const alg = newAlgebraic();
-  const mode: Mode = { heatOn: (setup.heatOffAtS ?? Infinity) > 0, flowing: true };
+  const from = resume?.at ?? null;
+  const mode: Mode = {
+    heatOn: (setup.heatOffAtS ?? Infinity) > (from?.t ?? 0),
+    flowing: from?.flowing ?? true,
+  };
   const timeLimitS = setup.timeLimitS ?? 1800;
   const collectSeries = setup.collectSeries ?? true;
 
@@ -123,11 +207,11 @@ export function simulateBrew(setup: BrewSetup): BrewResult {
   const initialVapourKg = alg.vapourKg;
   const initialEnthalpy = storedEnergy(c, y0, alg);
 
-  const events: BrewEvent[] = [];
-  const series: SeriesPoint[] = [];
-  const cupCurve: { cupM3: number; extractionK: number }[] = [];
-  let peakGaugePa = 0;
-  let nextSeriesT = 0;
+  const events: BrewEvent[] = log?.events ?? resume?.log.events.slice(0, from!.events) ?? [];
+  const series: SeriesPoint[] = log?.series ?? resume?.log.series.slice(0, from!.series) ?? [];
+  const cupCurve = log?.cupCurve ?? resume?.log.cupCurve.slice(0, from!.cupCurve) ?? [];
+  let peakGaugePa = from?.peakGaugePa ?? 0;
+  let nextSeriesT = from?.nextSeriesT ?? 0;
   let steps = 0;
   let evaluations = 0;
   const sample = new Float64Array(STATE_SIZE);
@@ -190,29 +274,58 @@ export function simulateBrew(setup: BrewSetup): BrewResult {
     }
   };
 
-  let t = 0;
-  let y = y0;
-  let h: number | undefined;
+  let t = from?.t ?? 0;
+  let y = from ? from.y.slice() : y0;
+  let h: number | undefined = from ? from.h : undefined;
+  let errPrev: number | undefined = from?.errPrev;
   let endReason: BrewResult['endReason'] | null = null;
-  let firstCoffeeK: number | null = null;
-  record(y);
+  let firstCoffeeK: number | null = from ? from.firstCoffeeK : null;
+  if (!from) record(y);
+
+  let maxStep = from?.maxStep ?? timeLimitS;
+  const checkpoint = (
+    at: number,
+    state: Float64Array,
+    next: number | undefined,
+    memory: number | undefined,
+  ): void => {
+    log?.checkpoints.push({
+      t: at,
+      y: state.slice(),
+      h: next,
+      errPrev: memory,
+      flowing: mode.flowing,
+      events: events.length,
+      series: series.length,
+      cupCurve: cupCurve.length,
+      peakGaugePa,
+      nextSeriesT,
+      firstCoffeeK,
+      maxStep,
+    });
+  };
 
   while (endReason === null) {
     const active = activeEvents(c, mode, y, alg);
+    if (log) checkpoint(t, y, h, errPrev);
     const outcome = integrate(f, t, y, timeLimitS, {
-      rtol: RTOL,
+      rtol: setup.relativeTolerance ?? DEFAULT_RTOL,
       atol: ATOL,
       events: active,
       onStep,
+      ...(maxStep > 0 ? { maxStep } : {}),
       ...(h !== undefined ? { initialStep: h } : {}),
+      ...(errPrev !== undefined ? { errPrev } : {}),
+      ...(log ? { onContinue: checkpoint } : {}),
       maxSteps: 200_000,
     });
     steps += outcome.steps;
     evaluations += outcome.evaluations;
+    errPrev = undefined;
     t = outcome.t;
     y = Float64Array.from(outcome.y);
     h = outcome.lastStep > 0 ? outcome.lastStep : undefined;
-
+    maxStep = timeLimitS - t;
     if (outcome.kind === 'finished') {
       note('time-limit', t, y);
       endReason = 'time-limit';
@@ -256,6 +369,20 @@ export function simulateBrew(setup: BrewSetup): BrewResult {
         note('valve-opens', t, y);
         endReason = 'valve-opens';
         break;
+    }
+    // Two events in one bracket (the heat taken off at the sputter, say): the run restarts
+    // after the first where the other's value is already zero or past it, and a restart
+    // never fires at its own start (the integrator's rule), so an end already reached is
+    // taken here.
+    if (endReason === null) {
+      algebraic(c, y, alg);
+      if (alg.liquidVolume <= c.geometry.volumeAtTubeEndM3) {
+        note('sputter', t, y);
+        endReason = 'sputter';
+      } else if (alg.pressurePa - setup.room.ambientPa >= setup.pot.valveOpeningGaugePa) {
+        note('valve-opens', t, y);
+        endReason = 'valve-opens';
+      }
     }
   }
   record(y);

@@ -67,6 +67,11 @@ export interface BrewSetup {
   readonly timeLimitS?: number;
   /** Collect the time series (costs time; the planner turns it off). Default true. */
   readonly collectSeries?: boolean;
+  /**
+   * Relative tolerance of the integration (default 1e-6, the accuracy every check of the
+   * model is made at). The planner searches at a looser one and re-runs its choice at 1e-6.
+   */
+  readonly relativeTolerance?: number;
 }
 
 export type BrewEventKind =

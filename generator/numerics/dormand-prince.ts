@@ -132,6 +132,19 @@ export interface IntegrateOptions {
   readonly eventTimeTolerance?: number;
   /** Called once per accepted step, in order; the last one ends at the event time if any. */
   readonly onStep?: (step: DenseStep) => void;
+  /**
+   * The step controller's memory (the previous accepted step's error norm) when resuming
+   * at a point `onContinue` reported; default: a fresh start.
+   */
+  readonly errPrev?: number;
+  /**
+   * Called after each accepted step that does not end the call, with the state there, the
+   * next step's size and the controller's memory. A new call from (t, y) with
+   * initialStep = nextStep, errPrev = errPrev and the same tEnd, maxStep, tolerances and
+   * events takes exactly the steps this call goes on to take: the way to branch off a run
+   * at a step boundary without integrating its past again. y is only valid during the call.
+   */
+  readonly onContinue?: (t: number, y: Float64Array, nextStep: number, errPrev: number) => void;
 }
 
 interface OutcomeBase {
@@ -207,8 +220,9 @@ export function integrate(
   }
   h = Math.min(h, maxStep);
 
-  let errPrev = ERR_PREV_FLOOR;
+  let errPrev = options.errPrev ?? ERR_PREV_FLOOR;
   let previousRejected = false;
+  const onContinue = options.onContinue;
   for (;;) {
     if (counts.steps + counts.rejected >= maxSteps) {
       return { kind: 'step-limit', ...snapshot(t, ws.y, counts) };
@@ -262,6 +276,7 @@ export function integrate(
     if (previousRejected) hNew = Math.min(hNew, h);
     previousRejected = false;
     h = hNew;
+    if (onContinue !== undefined) onContinue(t, ws.y, h, errPrev);
   }
 }
 
@@ -617,6 +632,9 @@ function validate(t0: number, y0: Float64Array, tEnd: number, o: IntegrateOption
   }
   if (o.initialStep !== undefined && !(o.initialStep >= 0 && Number.isFinite(o.initialStep))) {
     fail(`initialStep must be finite and ≥ 0, 0 meaning "choose" (got ${o.initialStep})`);
+  }
+  if (o.errPrev !== undefined && !(o.errPrev > 0 && Number.isFinite(o.errPrev))) {
+    fail(`errPrev must be finite and > 0 (got ${o.errPrev})`);
   }
   if (o.maxStep !== undefined && !(o.maxStep > 0)) {
     fail(`maxStep must be > 0 (got ${o.maxStep})`);

@@ -13,7 +13,7 @@
  * after the heat is off is not offered (the sputter's steam-driven last drops are what
  * the trade takes the pot off the heat to avoid: common practice, no source).
  */
-import { simulateBrew } from '../brew/simulate.ts';
+import { simulateBrew, simulateHeatOn, type HeatOnBrew } from '../brew/simulate.ts';
 import { BrewSetupError } from '../brew/errors.ts';
 import type { BrewResult } from '../brew/types.ts';
 import type { CoffeeEntry, PotEntry, StoveEntry } from '../content/types.ts';
@@ -35,12 +35,19 @@ const START_STEP_K = 5;
 const SPUTTER_LEAD_S = 5;
 /** Candidates refined with an off-heat search, best first by the heat-on score. */
 const REFINE_COUNT = 4;
+/** The coarse pass takes every 4th start (20 K apart, with the presets between); see planCard. */
+const DEFAULT_SEARCH: PlanSearch = { coarseStride: 4 };
 /** Below this share in band the card warns that the cup will miss the band. */
 const LOW_SHARE = 0.1;
 /** Shares of the cup closer than this are equal for the off-heat search. */
 const SHARE_RESOLUTION = 0.005;
 /** The off-heat time is searched to this, s (a card prints whole seconds in ranges). */
 const OFF_HEAT_RESOLUTION_S = 4;
+/**
+ * Relative tolerance of the search's runs; the chosen plan is simulated again at the
+ * model's own 1e-6 (DEFAULT_RTOL), and only those runs are printed.
+ */
+const SEARCH_RTOL = 1e-5;
 
 export interface PlanRequest {
   readonly pot: PotEntry;
@@ -57,6 +64,8 @@ interface Candidate {
   readonly startK: number;
   readonly levelIndex: number;
   readonly heatOn: BrewResult;
+  /** The heat-on run, kept so the off-heat search branches off it. */
+  readonly run: HeatOnBrew;
 }
 
 interface Scored {
@@ -67,7 +76,13 @@ interface Scored {
   readonly share: number;
 }
 
-export function planCard(request: PlanRequest): CardPlan {
+/** How the planner searches the start temperatures (tests compare strides). */
+export interface PlanSearch {
+  /** The coarse pass takes every coarseStride-th start (a power of two; 1: every start). */
+  readonly coarseStride: number;
+}
+
+export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEARCH): CardPlan {
   const { pot, coffee, stove } = request;
   const room = roomModel(request.room);
   const context: PlanContext = {
@@ -99,43 +114,71 @@ export function planCard(request: PlanRequest): CardPlan {
   const presets = new Set(request.kettlePresetsK ?? []);
 
   let simulations = 0;
-  const run = (startK: number, levelIndex: number, offS?: number, series = false, scale = NOMINAL) => {
-    simulations++;
+  const setupOf = (
+    startK: number,
+    levelIndex: number,
+    { offS, series = false, scale = NOMINAL, search = false }: RunChoice = {},
+  ) => {
     const fill = request.fillM3 ?? maxSafeFill(pot.model, startK, room.ambientPa).maxFillM3;
     const bed = { ...coffee.bed, permeabilityM2: coffee.bed.permeabilityM2 * scale.permeability };
-    return simulateBrew(
-      brewSetup(pot.model, bed, room, {
-        fillVolumeM3: fill,
-        startK,
-        heatInputW: stove.levels[levelIndex]!.heatToPotW * scale.heat,
-        ...(offS !== undefined ? { heatOffAtS: offS } : {}),
-        collectSeries: series,
-      }),
-    );
+    return brewSetup(pot.model, bed, room, {
+      fillVolumeM3: fill,
+      startK,
+      heatInputW: stove.levels[levelIndex]!.heatToPotW * scale.heat,
+      ...(offS !== undefined ? { heatOffAtS: offS } : {}),
+      collectSeries: series,
+      ...(search ? { relativeTolerance: SEARCH_RTOL } : {}),
+    });
+  };
+  const run = (startK: number, levelIndex: number, choice: RunChoice = {}) => {
+    simulations++;
+    return simulateBrew(setupOf(startK, levelIndex, choice));
   };
 
   const limitPa = PRESSURE_LIMIT_SHARE_OF_VALVE * pot.model.valveOpeningGaugePa;
   const candidates: Candidate[] = [];
   let lowestPeak = Infinity;
-  // More heat only brews faster and pushes harder, so along each start's levels (gentlest
-  // first) the search stops at the first level over the pressure limit or too fast for
-  // the delivery window.
   const [windowLow, windowHigh] = coffee.deliveryWindowS;
-  for (const startK of starts) {
+  /** One heat-on run; 'stop' when this start can take no more heat (or no such brew). */
+  const scan = (startK: number, levelIndex: number): 'stop' | 'on' => {
+    let heatOnRun: HeatOnBrew;
+    try {
+      simulations++;
+      heatOnRun = simulateHeatOn(setupOf(startK, levelIndex, { search: true }));
+    } catch (error) {
+      if (error instanceof BrewSetupError) return 'stop';
+      throw error;
+    }
+    const heatOn = heatOnRun.result;
+    lowestPeak = Math.min(lowestPeak, heatOn.peakGaugePa);
+    if (heatOn.peakGaugePa > limitPa) return 'stop';
+    if (heatOn.firstCoffeeS === null) return 'on';
+    candidates.push({ startK, levelIndex, heatOn, run: heatOnRun });
+    const delivery = (heatOn.sputterS ?? Infinity) - heatOn.firstCoffeeS;
+    return delivery < windowLow + SPUTTER_LEAD_S ? 'stop' : 'on';
+  };
+  // Coarse to fine: every level of every coarseStride-th start first. More heat only
+  // brews faster and pushes harder, so along each start's levels (gentlest first) the
+  // search stops at the first level over the pressure limit or too fast for the delivery
+  // window. Then, at half the stride each time, the starts beside the best candidates, at
+  // their level.
+  const coarse = coarseStarts(starts, presets, search.coarseStride);
+  for (const startK of coarse) {
     for (let levelIndex = 0; levelIndex < stove.levels.length; levelIndex++) {
-      let heatOn: BrewResult;
-      try {
-        heatOn = run(startK, levelIndex);
-      } catch (error) {
-        if (error instanceof BrewSetupError) break;
-        throw error;
+      if (scan(startK, levelIndex) === 'stop') break;
+    }
+  }
+  const tried = new Set(candidates.map((c) => `${c.startK}/${c.levelIndex}`));
+  for (let stride = search.coarseStride / 2; stride >= 1; stride /= 2) {
+    const leaders = [...candidates].sort((a, b) => heatOnScore(b) - heatOnScore(a));
+    for (const leader of leaders.slice(0, REFINE_COUNT)) {
+      const at = starts.indexOf(leader.startK);
+      for (const startK of [starts[at - stride], starts[at + stride]]) {
+        const id = `${startK}/${leader.levelIndex}`;
+        if (startK === undefined || tried.has(id)) continue;
+        tried.add(id);
+        scan(startK, leader.levelIndex);
       }
-      lowestPeak = Math.min(lowestPeak, heatOn.peakGaugePa);
-      if (heatOn.peakGaugePa > limitPa) break;
-      if (heatOn.firstCoffeeS === null) continue;
-      candidates.push({ startK, levelIndex, heatOn });
-      const delivery = (heatOn.sputterS ?? Infinity) - heatOn.firstCoffeeS;
-      if (delivery < windowLow + SPUTTER_LEAD_S) break;
     }
   }
   if (candidates.length === 0) {
@@ -161,7 +204,10 @@ export function planCard(request: PlanRequest): CardPlan {
   const byHeatOnScore = [...feasible].sort((a, b) => heatOnScore(b) - heatOnScore(a));
   for (const candidate of byHeatOnScore.slice(0, REFINE_COUNT)) {
     const [earliest, latest] = offHeatWindow(candidate);
-    const best = bestOffHeat(earliest, latest, (offS) => run(candidate.startK, candidate.levelIndex, offS));
+    const best = bestOffHeat(earliest, latest, (offS) => {
+      simulations++;
+      return candidate.run.heatOffAt(offS);
+    });
     if (best.share >= 0 && best.result.peakGaugePa <= limitPa && best.result.extraction) {
       refined.push({ startK: candidate.startK, levelIndex: candidate.levelIndex, ...best });
     }
@@ -171,15 +217,25 @@ export function planCard(request: PlanRequest): CardPlan {
   }
 
   const chosen = refined.reduce((best, next) => (better(next, best, presets) ? next : best));
-  const brew = run(chosen.startK, chosen.levelIndex, chosen.offS, true);
-  const coldBrew = run(room.ambientK, chosen.levelIndex, undefined, true);
+  const brew = run(chosen.startK, chosen.levelIndex, { offS: chosen.offS, series: true });
+  const coldBrew = run(room.ambientK, chosen.levelIndex, { series: true });
   const offCupM3 = cupAt(brew, chosen.offS);
-  const corners = SENSITIVITY.map((scale) => run(chosen.startK, chosen.levelIndex, undefined, true, scale));
+  // The corners only spread the timings into ranges: search accuracy is plenty.
+  const corners = SENSITIVITY.map((scale) =>
+    run(chosen.startK, chosen.levelIndex, { series: true, scale, search: true }),
+  );
   const firstTimes = [brew.firstCoffeeS!, ...corners.map((r) => r.firstCoffeeS ?? brew.firstCoffeeS!)];
   const offTimes = [chosen.offS, ...corners.map((r) => timeAtCup(r, offCupM3) ?? chosen.offS)];
   const fill = request.fillM3 ?? maxSafeFill(pot.model, chosen.startK, room.ambientPa).maxFillM3;
   const heights = fillHeights(pot.model, fill);
-  const extraction = brew.extraction!;
+  // The search ran at SEARCH_RTOL: the printed run must itself keep the hard limits.
+  if (brew.peakGaugePa > limitPa) {
+    return refuse(planWords.pressureNearValve(brew.peakGaugePa, pot.model.valveOpeningGaugePa, coffee.grind));
+  }
+  if (brew.endReason === 'sputter' || !brew.extraction) {
+    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+  }
+  const extraction = brew.extraction;
   const plan: AcceptedPlan = {
     ...context,
     warnings: [
@@ -222,6 +278,15 @@ export function planCard(request: PlanRequest): CardPlan {
   return plan;
 }
 
+interface RunChoice {
+  readonly offS?: number;
+  readonly series?: boolean;
+  /** Scales of the coffee's permeability and the level's heat (the sensitivity corners). */
+  readonly scale?: { readonly permeability: number; readonly heat: number };
+  /** A search run: integrated at SEARCH_RTOL. */
+  readonly search?: boolean;
+}
+
 const NOMINAL = { permeability: 1, heat: 1 };
 /** The model's sensitivity corners: permeability ±30 %, heat ±10 %. */
 const SENSITIVITY = [
@@ -245,6 +310,20 @@ export function startCandidates(request: PlanRequest, boilingK: number): number[
   }
   const hotter = steps.filter((k) => k > ambient + 0.5 && k <= ceiling + 1e-9);
   return [ambient, ...new Set(hotter.map((k) => Math.round(k * 1e6) / 1e6))].sort((a, b) => a - b);
+}
+
+/**
+ * The coarse search's starts: room temperature, the kettle presets, the hottest start and
+ * every `stride`-th one between.
+ */
+export function coarseStarts(
+  starts: readonly number[],
+  presets: ReadonlySet<number>,
+  stride: number,
+): number[] {
+  return starts.filter(
+    (startK, i) => i % stride === 0 || i === starts.length - 1 || presets.has(startK),
+  );
 }
 
 function heatOnScore(c: Candidate): number {

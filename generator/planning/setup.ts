@@ -20,6 +20,7 @@ export interface BrewChoice {
   readonly heatInputW: number;
   readonly heatOffAtS?: number;
   readonly collectSeries?: boolean;
+  readonly relativeTolerance?: number;
 }
 
 export function brewSetup(pot: PotModel, bed: BedModel, room: RoomModel, choice: BrewChoice): BrewSetup {
@@ -32,5 +33,8 @@ export function brewSetup(pot: PotModel, bed: BedModel, room: RoomModel, choice:
     heatInputW: choice.heatInputW,
     ...(choice.heatOffAtS !== undefined ? { heatOffAtS: choice.heatOffAtS } : {}),
     collectSeries: choice.collectSeries ?? false,
+    ...(choice.relativeTolerance !== undefined
+      ? { relativeTolerance: choice.relativeTolerance }
+      : {}),
   };
 }

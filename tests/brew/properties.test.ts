@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { simulateBrew } from '../../generator/brew/simulate.ts';
+import { simulateBrew, simulateHeatOn } from '../../generator/brew/simulate.ts';
 import { potGeometry } from '../../generator/brew/geometry.ts';
 import { maxSafeFill } from '../../generator/planning/fill.ts';
 import { ambientPressurePa } from '../../generator/physics/atmosphere.ts';
@@ -137,5 +137,34 @@ describe('simulateBrew over random valid setups (fast-check, seeded)', () => {
       }),
       { numRuns: 250, seed: 20261201, endOnFailure: true },
     );
+  });
+});
+
+describe('simulateHeatOn: branching off a heat-on run (fast-check, seeded)', () => {
+  // The planner's off-heat search relies on it: a branched run must be the run itself.
+  it('gives exactly the full run with the heat taken off at that moment, stats aside', () => {
+    fc.assert(
+      fc.property(setupArb, fc.double({ min: 0, max: 1, noNaN: true }), (drawn, when) => {
+        const { heatOffAtS: _ignored, ...setup } = drawn;
+        const heatOn = simulateHeatOn(setup);
+        const offS = when * heatOn.result.endS;
+        const branched = heatOn.heatOffAt(offS);
+        const full = simulateBrew({ ...setup, heatOffAtS: offS });
+        expect({ ...branched, stats: null }).toStrictEqual({ ...full, stats: null });
+        expect(branched.stats.rhsEvaluations).toBeLessThanOrEqual(full.stats.rhsEvaluations + 1);
+      }),
+      { numRuns: 150, seed: 20261202, endOnFailure: true },
+    );
+  });
+
+  it('branches after the heat-on run ended, or at its start, as a full run', () => {
+    const { heatOffAtS: _ignored, ...setup } = fc.sample(setupArb, { numRuns: 1, seed: 7 })[0]!;
+    const heatOn = simulateHeatOn(setup);
+    for (const offS of [0, heatOn.result.endS, heatOn.result.endS + 50]) {
+      const full = simulateBrew({ ...setup, heatOffAtS: offS });
+      expect({ ...heatOn.heatOffAt(offS), stats: null }).toStrictEqual({ ...full, stats: null });
+      // Heat off at the very moment of the sputter once ran on with a negative base.
+      expect(full.balance.finalBaseLiquidKg).toBeGreaterThanOrEqual(0);
+    }
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { planCard, startCandidates } from '../../generator/planning/plan.ts';
+import { planCard, startCandidates, TIE_SHARE } from '../../generator/planning/plan.ts';
 import { maxSafeFill } from '../../generator/planning/fill.ts';
 import { simulateBrew } from '../../generator/brew/simulate.ts';
 import { brewSetup, roomModel } from '../../generator/planning/setup.ts';
@@ -131,5 +131,41 @@ describe('planCard refusals (a reason and a fix, never a recipe)', () => {
       room: seaLevel,
     });
     expect(plated.refused).toBeNull();
+  });
+});
+
+describe('planCard’s coarse-to-fine start search', () => {
+  // The search is checked against the planner's own exhaustive search (every start at
+  // every level): a consistency check of the shortcut, not of the physics.
+  const pots = [
+    potEntry(),
+    potEntry({ sealedVolumeM3: 160e-6, baseInnerDiameterM: 0.07, valveHeightM: 0.026 }),
+    potEntry({ sealedVolumeM3: 420e-6, baseInnerDiameterM: 0.1, valveHeightM: 0.036 }),
+  ];
+  const stoves = [gasRing, stoveEntry([150, 300, 500, 800, 1200], 'radiant')];
+  const cases = pots.flatMap((pot) =>
+    [0.6e-12, 1e-12, 1.8e-12].flatMap((k) =>
+      stoves.map((stove) => ({ pot, coffee: coffeeEntry({ permeabilityM2: k }), stove })),
+    ),
+  );
+
+  it('never chooses a plan worse than a tie with the exhaustive search’s, and mostly the same', () => {
+    let same = 0;
+    let accepted = 0;
+    for (const c of cases) {
+      const request = { ...c, room: seaLevel, kettlePresetsK: [70 + C, 80 + C, 90 + C] };
+      const quick = planCard(request);
+      const every = planCard(request, { coarseStride: 1 });
+      expect(quick.refused?.code ?? null).toBe(every.refused?.code ?? null);
+      if (quick.refused || every.refused) continue;
+      accepted++;
+      expect(quick.extraction.inBandShare).toBeGreaterThanOrEqual(
+        every.extraction.inBandShare - TIE_SHARE - 0.005,
+      );
+      expect(quick.simulations).toBeLessThan(every.simulations);
+      if (quick.startK === every.startK && quick.levelIndex === every.levelIndex) same++;
+    }
+    expect(accepted).toBeGreaterThanOrEqual(12);
+    expect(same / accepted).toBeGreaterThanOrEqual(0.9);
   });
 });
