@@ -27,6 +27,10 @@
  * extraction temperature of each millilitre is the water's as it reaches the grounds (the
  * SCA's band is defined at the point of contact), recorded in `cupCurve`.
  *
+ * Properties: the liquid's ρ, h, c_p, α_v and μ, the bed water's μ and h_fg come from
+ * ../physics/water-table.ts (tables of IF97 Region 1, R12-08 and SR1-86, within 1e-8 of
+ * them); the stored-energy bookkeeping and the initial state use the correlations directly.
+ *
  * Tolerances: rtol 1e-6 (setup.relativeTolerance) on every state, atol per state (ATOL below); event times to 1e-9 s.
  */
 import { integrate, type EventFunction, type DenseStep } from '../numerics/dormand-prince.ts';
@@ -37,8 +41,14 @@ import {
 } from '../physics/constants.ts';
 import { saturationPressurePa, saturationPressureSlopePaPerK } from '../physics/if97-region4.ts';
 import { region1 } from '../physics/if97-region1.ts';
-import { saturatedLiquidDensityKgM3, vaporisationEnthalpyJPerKg } from '../physics/saturation.ts';
-import { waterViscosityPaS } from '../physics/viscosity.ts';
+import { vaporisationEnthalpyJPerKg } from '../physics/saturation.ts';
+import {
+  liquidAt,
+  newLiquidSample,
+  saturatedLiquidViscosityPaS,
+  tabulatedVaporisationEnthalpyJPerKg,
+  type LiquidSample,
+} from '../physics/water-table.ts';
 import { airIsochoricMolarHeatCapacity } from '../physics/air.ts';
 import { metalSpecificHeatJPerKgK } from '../physics/metals.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
@@ -97,7 +107,9 @@ interface Algebraic {
   resistance: number;
   enthalpy: number;
   vapourKg: number;
-  liquid: ReturnType<typeof region1> | null;
+  /** The liquid's properties at the state (water-table.ts), valid when `key` matches. */
+  liquid: LiquidSample;
+  valid: boolean;
   /** The state these values belong to (events and outputs re-ask for the same state). */
   key: [number, number, number, number];
 }
@@ -497,7 +509,8 @@ function newAlgebraic(): Algebraic {
     resistance: 0,
     enthalpy: 0,
     vapourKg: 0,
-    liquid: null,
+    liquid: newLiquidSample(),
+    valid: false,
     key: [NaN, NaN, NaN, NaN],
   };
 }
@@ -518,12 +531,12 @@ function frontHeightM(c: Constants, displacedKg: number, density: number): numbe
 }
 
 /** Fills `a` with what the state implies (pressure, driving pressure, resistance, ...). */
-function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<typeof region1> {
+function algebraic(c: Constants, y: Float64Array, a: Algebraic): LiquidSample {
   const { setup, geometry } = c;
   const temperature = y[T]!;
   const key = a.key;
   if (
-    a.liquid &&
+    a.valid &&
     key[0] === temperature &&
     key[1] === y[ML] &&
     key[2] === y[MD] &&
@@ -536,16 +549,15 @@ function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<type
   // enough to pick the liquid state, and keeps the state → properties map a pure function.
   const roughGas = setup.pot.sealedVolumeM3 - y[ML]! / 958;
   const roughP = pSat + (c.airMoles * MOLAR_GAS_CONSTANT * temperature) / roughGas;
-  const liquid = region1(temperature, roughP);
+  const liquid = liquidAt(temperature, roughP, pSat, a.liquid);
   const rho = liquid.densityKgM3;
   const liquidVolume = y[ML]! / rho;
   const gasVolume = setup.pot.sealedVolumeM3 - liquidVolume;
   const pressure = pSat + (c.airMoles * MOLAR_GAS_CONSTANT * temperature) / gasVolume;
   const level = liquidVolume / geometry.baseAreaM2;
   const head = rho * STANDARD_GRAVITY * (frontHeightM(c, y[MD]!, rho) - level);
-  const muTube = waterViscosityPaS(temperature, rho);
-  const bedK = y[TBED]!;
-  const muBed = waterViscosityPaS(bedK, saturatedLiquidDensityKgM3(bedK));
+  const muTube = liquid.viscosityPaS;
+  const muBed = saturatedLiquidViscosityPaS(y[TBED]!);
   const columnFilled = Math.min(
     1,
     Math.max(0, (y[MD]! - c.bedWetKg) / (c.firstCoffeeKg - c.bedWetKg || 1)),
@@ -573,7 +585,7 @@ function algebraic(c: Constants, y: Float64Array, a: Algebraic): ReturnType<type
   a.enthalpy = liquid.enthalpyJPerKg;
   a.vapourKg =
     (pSat * gasVolume * WATER_MOLAR_MASS_KG_PER_MOL) / (MOLAR_GAS_CONSTANT * temperature);
-  a.liquid = liquid;
+  a.valid = true;
   key[0] = temperature;
   key[1] = y[ML]!;
   key[2] = y[MD]!;
@@ -612,7 +624,7 @@ function derivatives(
   const vapourDensity = (a.saturationPa * massPerMoleOverR) / temperature;
   const kappa = (y[ML]! * liquid.expansivityPerK) / rho;
   const eps = vapourDensity / rho;
-  const hfg = vaporisationEnthalpyJPerKg(temperature);
+  const hfg = tabulatedVaporisationEnthalpyJPerKg(temperature);
   const heatCapacity =
     y[ML]! * liquid.isobaricHeatCapacityJPerKgK +
     setup.pot.baseMassKg * metalSpecificHeatJPerKgK(setup.pot.baseMaterial, temperature) +

@@ -43,6 +43,8 @@ const LOW_SHARE = 0.1;
 const SHARE_RESOLUTION = 0.005;
 /** The off-heat time is searched to this, s (a card prints whole seconds in ranges). */
 const OFF_HEAT_RESOLUTION_S = 4;
+/** Earlier off-heat times tried when the printed run of a choice reaches the sputter. */
+const EDGE_RETRIES = 2;
 /**
  * Relative tolerance of the search's runs; the chosen plan is simulated again at the
  * model's own 1e-6 (DEFAULT_RTOL), and only those runs are printed.
@@ -216,8 +218,26 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
 
-  const chosen = refined.reduce((best, next) => (better(next, best, presets) ? next : best));
-  const brew = run(chosen.startK, chosen.levelIndex, { offS: chosen.offS, series: true });
+  // The search ran at SEARCH_RTOL: the run to be printed must itself keep the hard limits
+  // and end before the sputter. When it does not (an off-heat time on the sputter's edge),
+  // the heat goes off a little earlier, and failing that the next best candidate is taken.
+  let chosen: Scored | null = null;
+  let brew: BrewResult | null = null;
+  for (const left = [...refined]; left.length > 0 && brew === null; ) {
+    const next = left.reduce((best, other) => (better(other, best, presets) ? other : best));
+    left.splice(left.indexOf(next), 1);
+    for (let retry = 0; retry <= EDGE_RETRIES && brew === null; retry++) {
+      const offS = next.offS - retry * OFF_HEAT_RESOLUTION_S;
+      const printed = run(next.startK, next.levelIndex, { offS, series: true });
+      if (printed.peakGaugePa <= limitPa && printed.endReason !== 'sputter' && printed.extraction) {
+        chosen = { ...next, offS };
+        brew = printed;
+      }
+    }
+  }
+  if (chosen === null || brew === null) {
+    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+  }
   const coldBrew = run(room.ambientK, chosen.levelIndex, { series: true });
   const offCupM3 = cupAt(brew, chosen.offS);
   // The corners only spread the timings into ranges: search accuracy is plenty.
@@ -228,14 +248,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   const offTimes = [chosen.offS, ...corners.map((r) => timeAtCup(r, offCupM3) ?? chosen.offS)];
   const fill = request.fillM3 ?? maxSafeFill(pot.model, chosen.startK, room.ambientPa).maxFillM3;
   const heights = fillHeights(pot.model, fill);
-  // The search ran at SEARCH_RTOL: the printed run must itself keep the hard limits.
-  if (brew.peakGaugePa > limitPa) {
-    return refuse(planWords.pressureNearValve(brew.peakGaugePa, pot.model.valveOpeningGaugePa, coffee.grind));
-  }
-  if (brew.endReason === 'sputter' || !brew.extraction) {
-    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
-  }
-  const extraction = brew.extraction;
+  const extraction = brew.extraction!;
   const plan: AcceptedPlan = {
     ...context,
     warnings: [
