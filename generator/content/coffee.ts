@@ -13,9 +13,6 @@ import { issueAt, refAt, type YamlSource } from './yaml-source.ts';
 /** Extraction band when the file gives none, °C: the SCA Golden Cup range as the design notes give it (93 ± 3 °C). */
 export const DEFAULT_TARGET_C: readonly [number, number] = [90, 96];
 
-/** Delivery phase when the file gives none, s: common practice, no published source. */
-export const DEFAULT_DELIVERY_WINDOW_S: readonly [number, number] = [60, 150];
-
 /** The coffee file as written, once it matches schemas/coffee.schema.json. */
 export interface CoffeeYaml {
   readonly name: string;
@@ -47,7 +44,6 @@ export function buildCoffee(file: ValidFile<CoffeeYaml>): Checked<CoffeeEntry> {
   ];
   if (issues.length > 0) return { issues };
   const [lowC, highC] = data.target_c ?? DEFAULT_TARGET_C;
-  const [shortestS, longestS] = data.delivery_window_s ?? DEFAULT_DELIVERY_WINDOW_S;
   const entry: CoffeeEntry = {
     kind: 'coffee',
     id: file.id,
@@ -64,7 +60,9 @@ export function buildCoffee(file: ValidFile<CoffeeYaml>): Checked<CoffeeEntry> {
       targetBandK: [celsiusToK(lowC), celsiusToK(highC)],
     },
     permeabilityAssumed: data.permeability_m2 === undefined,
-    deliveryWindowS: [shortestS, longestS],
+    deliveryWindowS: data.delivery_window_s
+      ? [data.delivery_window_s[0], data.delivery_window_s[1]]
+      : null,
   };
   return { value: entry, issues: [] };
 }

@@ -41,8 +41,11 @@ export interface CoffeeEntry extends EntryBase {
   readonly bed: BedModel;
   /** True when permeability_m2 was not given and the grind-class default was used. */
   readonly permeabilityAssumed: boolean;
-  /** Delivery phase (first coffee to off-heat) the plan must fit in, s. */
-  readonly deliveryWindowS: readonly [number, number];
+  /**
+   * Delivery phase (first coffee to off-heat) a three-cup pot's plan must fit in, s; null
+   * when the file gives none. Smaller pots scale it (planning/delivery.ts).
+   */
+  readonly deliveryWindowS: readonly [number, number] | null;
 }
 
 export type StoveKind = 'gas' | 'electric-coil' | 'radiant' | 'induction';

@@ -4,7 +4,8 @@
  * simulation.
  *
  * Objective: the largest share of the cup extracted inside the coffee's target band, with
- * the delivery phase (first coffee → off the heat) inside the coffee's delivery window.
+ * the delivery phase (first coffee → off the heat) inside the coffee's delivery window
+ * (its own, or the default for the pot's size: delivery.ts).
  * Shares within TIE_SHARE of each other are a tie, won by the gentler level and then the
  * cooler start (easier and safer to handle).
  * Hard limits (a refusal, never a recipe): the fill stays below the valve after expansion;
@@ -22,6 +23,7 @@ import { CELSIUS_OFFSET_K } from '../physics/constants.ts';
 import { maxSafeFill, fillHeights, VALVE_MARGIN_M } from './fill.ts';
 import { brewSetup, roomModel, type Room } from './setup.ts';
 import { modelRangeWarnings } from './model-range.ts';
+import { deliveryWindowS } from './delivery.ts';
 import { planWords } from '../words/plan.ts';
 import type { AcceptedPlan, CardPlan, PlanContext, Refusal, TimeRange } from './types.ts';
 
@@ -140,7 +142,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   const limitPa = PRESSURE_LIMIT_SHARE_OF_VALVE * pot.model.valveOpeningGaugePa;
   const candidates: Candidate[] = [];
   let lowestPeak = Infinity;
-  const [windowLow, windowHigh] = coffee.deliveryWindowS;
+  const [windowLow, windowHigh] = deliveryWindowS(coffee, pot);
   /** One heat-on run; 'stop' when this start can take no more heat (or no such brew). */
   const scan = (startK: number, levelIndex: number): 'stop' | 'on' => {
     let heatOnRun: HeatOnBrew;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_DELIVERY_WINDOW_S, DEFAULT_TARGET_C } from '../../generator/content/coffee.ts';
+import { DEFAULT_TARGET_C } from '../../generator/content/coffee.ts';
 import { GRIND_PERMEABILITY_M2 } from '../../generator/content/grind-permeability.ts';
 import { loadCoffeeFile } from '../../generator/content/index.ts';
 import { contentWords } from '../../generator/words/content.ts';
@@ -40,7 +40,7 @@ describe('loadCoffeeFile', () => {
     expect(DEFAULT_TARGET_C).toEqual([90, 96]);
     expect(coffee.bed.targetBandK[0]).toBeCloseTo(363.15, 9);
     expect(coffee.bed.targetBandK[1]).toBeCloseTo(369.15, 9);
-    expect(coffee.deliveryWindowS).toEqual(DEFAULT_DELIVERY_WINDOW_S);
+    expect(coffee.deliveryWindowS).toBeNull(); // the planner's default for the pot applies
     expect(coffee.notes).toBeUndefined();
   });
 
