@@ -23,6 +23,7 @@ import { buildDate } from './build-date.ts';
 import { expandCards, type CardJobs } from './cards.ts';
 import { writePages } from './pages.ts';
 import { planAll, type PlannedCard } from './plan-all.ts';
+import { sweepCacheFolders } from './file-cache.ts';
 import { PlanCache } from './plan-cache.ts';
 import { WorkerPool } from './pool.ts';
 import type { ProgressListener } from './progress.ts';
@@ -148,6 +149,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
       await discard(siteDir);
       throw error;
     }
+    // The site is in place: what this build did not use and is old leaves the cache. A
+    // sweep that fails costs only disk space, never the build.
+    const swept = await sweepCacheFolders(
+      ['plans', 'views', 'pages', 'pdfs'].map((folder) => path.join(cacheDir, folder)),
+    ).catch(() => ({ deleted: 0 }));
+    stats.cacheFilesDeleted = swept.deleted;
     const all = [...plans.values()];
     stats.workers = pool?.spawned ?? 0;
     return {

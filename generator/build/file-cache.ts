@@ -3,26 +3,62 @@
  * The plan, view, page and PDF caches are each one of these. Writes go to a temporary
  * name and are renamed, so a crash never leaves half a file; a file that cannot be read
  * is a miss, so a damaged cache only costs a re-render.
+ *
+ * Eviction (sweepCacheFolders, after each successful build): a file no cache of its folder
+ * has read or written in this process since the folder's last sweep, and not written for
+ * CACHE_GRACE_DAYS, is deleted. What the site uses stays; what an edit replaced stays a
+ * week (an undo rebuilds from the cache), then goes; so the cache holds the site plus a
+ * week of edits, not every version ever built.
  */
 import { constants, readFileSync } from 'node:fs';
-import { access, copyFile, mkdir, readFile, rename, writeFile } from 'node:fs/promises';
+import {
+  access,
+  copyFile,
+  mkdir,
+  readdir,
+  readFile,
+  rename,
+  stat,
+  unlink,
+  writeFile,
+} from 'node:fs/promises';
 import path from 'node:path';
 
 let writes = 0;
+
+export const CACHE_GRACE_DAYS = 7;
+
+/** File names read or written since the last sweep, by folder (shared by its caches). */
+const usedNames = new Map<string, Set<string>>();
+
+function usedIn(dir: string): Set<string> {
+  let names = usedNames.get(dir);
+  if (!names) {
+    names = new Set();
+    usedNames.set(dir, names);
+  }
+  return names;
+}
 
 export class FileCache {
   readonly dir: string;
   private made: Promise<unknown> | null = null;
 
+  private readonly used: Set<string>;
+
   constructor(
     dir: string,
     private readonly ext: string,
   ) {
-    this.dir = dir;
+    this.dir = path.resolve(dir);
+    this.used = usedIn(this.dir);
   }
 
+  /** The key's file, counted as used (a sweep keeps it). */
   file(key: string): string {
-    return path.join(this.dir, `${key}${this.ext}`);
+    const name = `${key}${this.ext}`;
+    this.used.add(name);
+    return path.join(this.dir, name);
   }
 
   async getText(key: string): Promise<string | null> {
@@ -73,4 +109,50 @@ export class FileCache {
       throw error;
     }
   }
+}
+
+export interface SweepReport {
+  readonly kept: number;
+  readonly deleted: number;
+}
+
+/**
+ * Deletes the files of `dirs` that no FileCache used since the folder's last sweep and
+ * that were last written more than `graceDays` ago (leftover temporary files included),
+ * then starts the folders' next round of use. A folder that does not exist is empty.
+ */
+export async function sweepCacheFolders(
+  dirs: readonly string[],
+  graceDays: number = CACHE_GRACE_DAYS,
+  now: number = Date.now(),
+): Promise<SweepReport> {
+  const oldest = now - graceDays * 24 * 3600 * 1000;
+  let kept = 0;
+  let deleted = 0;
+  for (const dir of dirs.map((d) => path.resolve(d))) {
+    const used = usedIn(dir);
+    let names: string[];
+    try {
+      names = await readdir(dir);
+    } catch {
+      continue;
+    }
+    for (const name of names) {
+      if (used.has(name)) {
+        kept++;
+        continue;
+      }
+      const file = path.join(dir, name);
+      try {
+        if ((await stat(file)).mtimeMs < oldest) {
+          await unlink(file);
+          deleted++;
+        } else kept++;
+      } catch {
+        // Gone already (another build's sweep): nothing to do.
+      }
+    }
+    used.clear();
+  }
+  return { kept, deleted };
 }

@@ -28,6 +28,8 @@ export interface BuildStats {
   readonly wallMs: Partial<Record<BuildPhase, number>>;
   /** Worker threads started (0: everything ran in the build's own thread). */
   workers: number;
+  /** Cache files deleted by the build's sweep (file-cache.ts sweepCacheFolders). */
+  cacheFilesDeleted: number;
 }
 
 export function emptyStats(): BuildStats {
@@ -39,6 +41,7 @@ export function emptyStats(): BuildStats {
     pdfs: { ...count(), pdfPages: 0 },
     wallMs: {},
     workers: 0,
+    cacheFilesDeleted: 0,
   };
 }
 

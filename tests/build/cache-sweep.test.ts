@@ -1,0 +1,54 @@
+import { mkdtemp, readdir, rm, utimes, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterEach, describe, expect, it } from 'vitest';
+import { CACHE_GRACE_DAYS, FileCache, sweepCacheFolders } from '../../generator/build/file-cache.ts';
+
+const DAY_MS = 24 * 3600 * 1000;
+const folders: string[] = [];
+afterEach(async () => {
+  await Promise.all(folders.splice(0).map((dir) => rm(dir, { recursive: true, force: true })));
+});
+
+async function folder(): Promise<string> {
+  const dir = await mkdtemp(path.join(tmpdir(), 'stovecard-sweep-'));
+  folders.push(dir);
+  return dir;
+}
+
+async function age(file: string, days: number): Promise<void> {
+  const when = new Date(Date.now() - days * DAY_MS);
+  await utimes(file, when, when);
+}
+
+describe('sweepCacheFolders', () => {
+  it('deletes what no cache used since the last sweep and is older than the grace', async () => {
+    const dir = await folder();
+    const cache = new FileCache(dir, '.json');
+    await cache.put('used-old', '{}');
+    await cache.put('unused-old', '{}');
+    await cache.put('unused-new', '{}');
+    await writeFile(path.join(dir, 'stray.json.tmp-1-1'), 'half');
+    for (const key of ['used-old', 'unused-old']) await age(cache.file(key), CACHE_GRACE_DAYS + 3);
+    await age(path.join(dir, 'stray.json.tmp-1-1'), CACHE_GRACE_DAYS + 3);
+    // Everything was used by this "build" but the stray temporary file.
+    expect(await sweepCacheFolders([dir])).toEqual({ kept: 3, deleted: 1 });
+    // A new build's caches: only what it reads or writes counts as used.
+    const next = new FileCache(dir, '.json');
+    expect(await next.getText('used-old')).toBe('{}');
+
+    expect(await sweepCacheFolders([dir])).toEqual({ kept: 2, deleted: 1 });
+    expect((await readdir(dir)).sort()).toEqual(['unused-new.json', 'used-old.json']);
+  });
+
+  it('counts a copy out of the cache as a use, and a missing folder as empty', async () => {
+    const dir = await folder();
+    const cache = new FileCache(dir, '.pdf');
+    await cache.put('card', 'pdf');
+    await age(cache.file('card'), 30);
+    await sweepCacheFolders([dir]);
+    expect(await new FileCache(dir, '.pdf').copyTo('card', path.join(dir, '..', 'out.pdf'))).toBe(true);
+    folders.push(path.join(dir, '..', 'out.pdf'));
+    expect(await sweepCacheFolders([dir, path.join(dir, 'missing')])).toEqual({ kept: 1, deleted: 0 });
+  });
+});
