@@ -3,16 +3,18 @@
  * (x), for this card's brew and for the same pot, coffee and setting started from cold
  * water, over the coffee's target band (shaded).
  *
- *   ChartInput (SI curves) ─ cupChartSpec ─▶ vega-lite spec ─ compile ─▶ vega spec
+ *   ChartInput (SI curves) ─ cupChartSpec ─▶ vega-lite spec ─ chartRuntime (compile and
+ *     vega.parse once per shape of spec, chart-runtime.ts) ─▶ vega runtime
  *     ─ View(renderer: 'none').toSVG() ─▶ SVG string (inline on the page, drawn into PDFs)
  *
  * Rendered at build time with no canvas: text widths come from DejaVu Sans through
  * text-measure.ts, so the layout leaves room for every label.
  */
 import * as vega from 'vega';
-import { compile, type TopLevelSpec } from 'vega-lite';
+import type { TopLevelSpec } from 'vega-lite';
 import type { UnitSystem } from '../content/types.ts';
 import { cardWords } from '../words/card.ts';
+import { chartRuntime } from './chart-runtime.ts';
 import { FONT_FAMILY } from './fonts.ts';
 import { chartUnits, temperatureBand } from './format.ts';
 import { useFontMetricsInVega } from './text-measure.ts';
@@ -161,11 +163,13 @@ export function cupChartSpec(input: ChartInput): TopLevelSpec {
   };
 }
 
-/** Compile a vega-lite spec and render it to an SVG string, without a browser or canvas. */
+/**
+ * Render a vega-lite spec to an SVG string, without a browser or canvas: the same SVG as
+ * compiling it afresh, with the compile done once per shape of spec (chart-runtime.ts).
+ */
 export async function renderChartSvg(spec: TopLevelSpec): Promise<string> {
   useFontMetricsInVega();
-  const compiled = compile(spec).spec;
-  const view = new vega.View(vega.parse(compiled), { renderer: 'none' });
+  const view = new vega.View(chartRuntime(spec), { renderer: 'none' });
   try {
     // Same input, same bytes: vega numbers clip paths and gradients from a global counter.
     vega.resetSVGDefIds();

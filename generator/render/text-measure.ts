@@ -7,6 +7,7 @@
  */
 import PDFDocument from 'pdfkit';
 import * as vega from 'vega';
+import { BoundedCache } from './bounded-cache.ts';
 import { fontPath, type FontFace } from './fonts.ts';
 
 export interface TextStyle {
@@ -17,7 +18,8 @@ export interface TextStyle {
 }
 
 let doc: PDFKit.PDFDocument | null = null;
-const cache = new Map<string, number>();
+/** Widths of the labels seen (chart ticks, titles, legends, drawing labels: a few hundred). */
+const cache = new BoundedCache<string, number>(8192);
 
 function measurer(): PDFKit.PDFDocument {
   doc ??= new PDFDocument({ autoFirstPage: false });
