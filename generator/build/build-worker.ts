@@ -7,11 +7,12 @@
  *   plan          planCard(request)                  → planToJson text, simulations run
  *   station-view  stationCardView(plan, catalogue)   → toTaggedJson text of the view
  *   card-pdf      cardPdf(view)                      → the PDF's bytes
- *   set-pdf       setPdf(input)                      → the PDF's bytes and page count
+ *   set-pdf       setPdf(input, the card PDF files)  → the PDF's bytes and page count
  *
  * The renderers are imported on first use, so a worker that only plans never loads
  * vega or pdfkit.
  */
+import { readFile } from 'node:fs/promises';
 import { parentPort, workerData } from 'node:worker_threads';
 import type { Catalogue } from '../content/types.ts';
 import type { PlanRequest } from '../planning/plan.ts';
@@ -32,9 +33,9 @@ export type TaskRequest =
   | { readonly kind: 'card-pdf'; readonly viewJson: string; readonly context: PdfContext }
   | {
       readonly kind: 'set-pdf';
-      readonly input: Omit<SetPdfInput, 'cards'>;
-      /** The set's cards, in order, as view texts. */
-      readonly cardsJson: readonly string[];
+      readonly input: Omit<SetPdfInput, 'cardPdfs'>;
+      /** The set's cards' PDF files, in order (read here rather than sent over). */
+      readonly cardFiles: readonly string[];
     };
 
 interface Results {
@@ -77,8 +78,8 @@ export async function runTask(task: TaskRequest): Promise<TaskResult<TaskRequest
     }
     case 'set-pdf': {
       const { setPdf } = await import('../render/pdf/binder.ts');
-      const cards = task.cardsJson.map((text) => fromTaggedJson<CardView>(text));
-      const pdf = await setPdf({ ...task.input, cards });
+      const cardPdfs = await Promise.all(task.cardFiles.map((file) => readFile(file)));
+      const pdf = await setPdf({ ...task.input, cardPdfs });
       return { bytes: pdf.bytes, pages: pdf.pages };
     }
   }

@@ -4,18 +4,22 @@
  * the same pure cores (cardPdf, setPdf, setCards, isTrainingSet), but
  *
  *   - each PDF is keyed by the hashes of the views it is drawn from (render-cache.ts); a
- *     key already in the cache is copied from there instead of rendered;
- *   - the rest are rendered on the build's workers, the sets first and the longest first
- *     (a set is one task, so a long one started last would finish alone);
+ *     key already in the cache is copied from there instead of made;
+ *   - the cards come first, then the sets: a set is assembled from its cards' PDFs as the
+ *     site now has them (binder.ts, merge.ts), so a rebuild after one coffee's edit draws
+ *     only that coffee's cards and re-assembles the sets that hold them;
+ *   - the rest are made on the build's workers (a set's worker reads its cards' files);
  *   - the PDF dates follow the build's env (BuildOptions.env), like the pages.
  *
- *   views ─ key ─▶ cached? ── yes ─▶ copy <cacheDir>/pdfs/<key>.pdf into the site
- *                          └─ no ──▶ cardPdf / setPdf (pool) ─▶ the site and the cache
+ *   card views ─ key ─▶ cached? ── yes ─▶ copy <cacheDir>/pdfs/<key>.pdf into the site
+ *                                └─ no ──▶ cardPdf (pool) ─▶ the site and the cache
+ *   then sets  ─ key ─▶ cached? ── yes ─▶ copy
+ *                                └─ no ──▶ setPdf of the site's card PDFs (pool) ─▶ site, cache
  */
-import { mkdir, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cardPdf, type CardView } from '../render/pdf/card.ts';
-import { setPdf, type FrontMatter, type SetPdfInput } from '../render/pdf/binder.ts';
+import { setCard, setPdf, type FrontMatter, type SetPdfInput } from '../render/pdf/binder.ts';
 import { isTrainingSet, setCards } from '../render/pdf/site-pdfs.ts';
 import type { BuildContext, ViewText } from './build-site.ts';
 import { renderCodeVersion } from './code-version.ts';
@@ -26,8 +30,6 @@ import { toTaggedJson } from './plan-cache.ts';
 interface PdfJob {
   readonly file: string;
   readonly key: string;
-  /** Cards drawn (for the order of the renders). */
-  readonly cards: number;
   render(): Promise<{ bytes: Uint8Array; pages: number; ms: number }>;
 }
 
@@ -51,7 +53,6 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const cardJobs: PdfJob[] = cards.map((view) => ({
     file: view.paths.pdfFile,
     key: cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion }),
-    cards: 1,
     async render() {
       if (pool) {
         const { result, ms } = await pool.run({
@@ -69,14 +70,16 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const frontMatter: FrontMatter = { method: data.method, troubleshooting: data.troubleshooting };
   const setJobs: PdfJob[] = data.sets.map((set) => {
     const members = setCards(set, data);
-    const input: Omit<SetPdfInput, 'cards'> = {
+    const input: Omit<SetPdfInput, 'cardPdfs'> = {
       set,
+      cards: members.map(setCard),
       frontMatter: isTrainingSet(set) ? frontMatter : null,
       page: data.site.page,
       author,
       builtOn: data.site.builtOn,
       env,
     };
+    const cardFiles = members.map((card) => path.join(siteDir, card.paths.pdfFile));
     return {
       file: set.paths.pdfFile,
       key: setPdfKey({
@@ -89,54 +92,59 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
         sourceDateEpoch: epoch,
         renderVersion,
       }),
-      cards: members.length,
       async render() {
         if (pool) {
-          const cardsJson = members.map((card) => textOf(card).text);
-          const { result, ms } = await pool.run({ kind: 'set-pdf', input, cardsJson });
+          const { result, ms } = await pool.run({ kind: 'set-pdf', input, cardFiles });
           return { ...result, ms };
         }
         const started = performance.now();
-        const pdf = await setPdf({ ...input, cards: members });
+        const cardPdfs = await Promise.all(cardFiles.map((file) => readFile(file)));
+        const pdf = await setPdf({ ...input, cardPdfs });
         return { bytes: pdf.bytes, pages: pdf.pages, ms: performance.now() - started };
       },
     };
   });
 
-  const jobs = [...setJobs.sort((a, b) => b.cards - a.cards), ...cardJobs];
-  const total = jobs.length;
+  const total = cardJobs.length + setJobs.length;
   let done = 0;
   context.onProgress({ phase: 'steps', done, total });
-  const folders = new Set(jobs.map((job) => path.dirname(path.join(siteDir, job.file))));
+  const folders = new Set(
+    [...cardJobs, ...setJobs].map((job) => path.dirname(path.join(siteDir, job.file))),
+  );
   await Promise.all([...folders].map((folder) => mkdir(folder, { recursive: true })));
 
-  // Cache lookups first: every hit is copied, and the misses are queued at once, in order.
-  const copied = await mapConcurrent(jobs, IO_LIMIT, async (job) => {
-    const hit = await cache.pdfs.copyTo(job.key, path.join(siteDir, job.file));
-    if (hit) {
-      stats.pdfs.reused += 1;
+  /** Copies the cached jobs into the site and makes the others. */
+  const run = async (jobs: readonly PdfJob[]) => {
+    // Cache lookups first: every hit is copied, and the misses are queued at once, in order.
+    const copied = await mapConcurrent(jobs, IO_LIMIT, async (job) => {
+      const hit = await cache.pdfs.copyTo(job.key, path.join(siteDir, job.file));
+      if (hit) {
+        stats.pdfs.reused += 1;
+        context.onProgress({ phase: 'steps', done: ++done, total });
+      }
+      return hit;
+    });
+    const misses = jobs.filter((_, i) => !copied[i]);
+    const make = async (job: PdfJob) => {
+      let made;
+      try {
+        made = await job.render();
+      } catch (error) {
+        pool?.clearQueue();
+        throw error;
+      }
+      const { bytes, pages, ms } = made;
+      await writeFile(path.join(siteDir, job.file), bytes);
+      await cache.pdfs.put(job.key, bytes);
+      stats.pdfs.made += 1;
+      stats.pdfs.pdfPages += pages;
+      stats.pdfs.ms += ms;
       context.onProgress({ phase: 'steps', done: ++done, total });
-    }
-    return hit;
-  });
-  const misses = jobs.filter((_, i) => !copied[i]);
-  const make = async (job: PdfJob) => {
-    let made;
-    try {
-      made = await job.render();
-    } catch (error) {
-      pool?.clearQueue();
-      throw error;
-    }
-    const { bytes, pages, ms } = made;
-    await writeFile(path.join(siteDir, job.file), bytes);
-    await cache.pdfs.put(job.key, bytes);
-    stats.pdfs.made += 1;
-    stats.pdfs.pdfPages += pages;
-    stats.pdfs.ms += ms;
-    context.onProgress({ phase: 'steps', done: ++done, total });
+    };
+    // On workers all at once (the pool queues them); in this thread one document at a time.
+    if (pool) await allSettledOrThrow(misses.map(make));
+    else for (const job of misses) await make(job);
   };
-  // On workers all at once (the pool queues them); in this thread one document at a time.
-  if (pool) await allSettledOrThrow(misses.map(make));
-  else for (const job of misses) await make(job);
+  await run(cardJobs);
+  await run(setJobs);
 }

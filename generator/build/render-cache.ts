@@ -111,7 +111,11 @@ export function cardPdfKey(input: {
   );
 }
 
-/** Key of a set's PDF: everything setPdf reads, its cards by their views' hashes. */
+/**
+ * Key of a set's PDF: everything setPdf reads, its cards by their views' hashes (which,
+ * with the author, the date setting and the code, are the keys of the card PDFs it is
+ * assembled from).
+ */
 export function setPdfKey(input: {
   readonly set: unknown;
   readonly cardHashes: readonly string[];

@@ -1,9 +1,11 @@
 /**
  * setPdf(set): a set's cards in one PDF, and the training binder with its contents,
- * method and troubleshooting pages in front.
+ * method and troubleshooting pages in front. How its card pages compare with the cards'
+ * own PDFs is set-pages.test.ts.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { setPdf, type SetPdf } from '../../generator/render/pdf/binder.ts';
+import { cardPdf } from '../../generator/render/pdf/card.ts';
 import { isTrainingSet, setCards } from '../../generator/render/pdf/site-pdfs.ts';
 import type { SetView } from '../../generator/render/site-view.ts';
 import { pdfWords } from '../../generator/words/pdf.ts';
@@ -15,15 +17,20 @@ const built = new Map<string, { set: SetView; pdf: SetPdf; read: ReadPdf }>();
 
 beforeAll(async () => {
   demo = await demoSite();
+  const author = demo.data.site.businessName;
   for (const set of demo.data.sets) {
+    const cards = setCards(set, demo.data);
+    const cardPdfs = [];
+    for (const card of cards) cardPdfs.push((await cardPdf(card, { author, env: NO_EPOCH })).bytes);
     const pdf = await setPdf({
       set,
-      cards: setCards(set, demo.data),
+      cards,
+      cardPdfs,
       frontMatter: isTrainingSet(set)
         ? { method: demo.data.method, troubleshooting: demo.data.troubleshooting }
         : null,
       page: demo.data.site.page,
-      author: demo.data.site.businessName,
+      author,
       builtOn: BUILT_ON,
       env: NO_EPOCH,
     });

@@ -1,7 +1,7 @@
 /**
  * Reading PDFs back in tests with pdfjs-dist's legacy build (runs in Node without a
- * canvas or poppler): page count and sizes, text per page, the XMP packet, MarkInfo and
- * the structure tree.
+ * canvas or poppler): page count and sizes, text per page, the XMP packet, MarkInfo, the
+ * structure tree, link annotations and the outline.
  */
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 
@@ -23,6 +23,16 @@ export interface ReadPdf {
   readonly marked: boolean;
   /** Structure tree of each page (pdfjs's view of it). */
   readonly structure: readonly (StructNode | null)[];
+  /** The URIs of each page's link annotations. */
+  readonly links: readonly (readonly string[])[];
+  /** The outline, depth first: each entry's title and the page (0-based) it opens. */
+  readonly outline: readonly { readonly title: string; readonly page: number | null }[];
+}
+
+interface OutlineItem {
+  readonly title: string;
+  readonly dest: string | unknown[] | null;
+  readonly items: readonly OutlineItem[];
 }
 
 export async function readPdf(bytes: Uint8Array): Promise<ReadPdf> {
@@ -36,6 +46,7 @@ export async function readPdf(bytes: Uint8Array): Promise<ReadPdf> {
     const sizes: [number, number][] = [];
     const text: string[] = [];
     const structure: (StructNode | null)[] = [];
+    const links: string[][] = [];
     for (let i = 1; i <= doc.numPages; i++) {
       const page = await doc.getPage(i);
       const [x0, y0, x1, y1] = page.view as [number, number, number, number];
@@ -47,7 +58,20 @@ export async function readPdf(bytes: Uint8Array): Promise<ReadPdf> {
           .join(' '),
       );
       structure.push((await page.getStructTree()) as StructNode | null);
+      const annotations = (await page.getAnnotations()) as { subtype: string; url?: string }[];
+      links.push(annotations.filter((a) => a.subtype === 'Link').map((a) => a.url ?? ''));
     }
+    const outline: { title: string; page: number | null }[] = [];
+    const walk = async (items: readonly OutlineItem[]) => {
+      for (const item of items) {
+        const dest =
+          typeof item.dest === 'string' ? await doc.getDestination(item.dest) : item.dest;
+        const target = dest?.[0] as { num: number; gen: number } | undefined;
+        outline.push({ title: item.title, page: target ? await doc.getPageIndex(target) : null });
+        await walk(item.items);
+      }
+    };
+    await walk(((await doc.getOutline()) ?? []) as OutlineItem[]);
     const meta = await doc.getMetadata();
     const markInfo = (await doc.getMarkInfo()) as { Marked?: boolean } | null;
     return {
@@ -58,6 +82,8 @@ export async function readPdf(bytes: Uint8Array): Promise<ReadPdf> {
       info: meta.info as Record<string, unknown>,
       marked: markInfo?.Marked === true,
       structure,
+      links,
+      outline,
     };
   } finally {
     await doc.destroy();

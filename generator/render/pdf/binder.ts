@@ -5,28 +5,51 @@
  * (MethodView, TroubleshootingView in ../site-view.ts, the same data the HTML pages show).
  *
  *   front matter (measured, so the contents can print page numbers) ─▶ contents pages
- *     ─▶ method pages ─▶ troubleshooting pages ─▶ one page per card (card.ts)
+ *     ─▶ method pages ─▶ troubleshooting pages ─▶ one placeholder page per card ─▶ shell
+ *   shell + each card's own PDF (card.ts cardPdf) ─ merge.ts ─▶ the set's PDF
+ *
+ * The cards are not drawn again: the build has made their one-page PDFs already, and a
+ * card page copied at the object level costs a fraction of a millisecond against ~30 ms
+ * to draw. pdfkit draws only what is the set's own: the front matter, and on each card's
+ * placeholder page its page number (an artifact) and its bookmark.
  */
-import type { PageSetup } from '../card-view.ts';
+import type { PageSetup, StationCardView } from '../card-view.ts';
 import type { MethodView, SetView, TroubleshootingView } from '../site-view.ts';
 import { cardWords } from '../../words/card.ts';
 import { pdfWords } from '../../words/pdf.ts';
-import { addCardPage, cardTitle, type CardPage, type CardView } from './card.ts';
+import { cardTitle, pageBox, type CardView } from './card.ts';
 import { openPdf, pageSizePt, pdfDate } from './document.ts';
 import type { Block, PageBox } from './layout.ts';
+import { mergeCardPages } from './merge.ts';
 import { drawPageNumber, flowPages, type FlowFrame, type FlowItem } from './pages.ts';
 import { Pen } from './pen.ts';
-import { INK, RULE_SOFT, textPageStyle, type TextPageStyle } from './style.ts';
+import { cardMarginPt, INK, RULE_SOFT, textPageStyle, type TextPageStyle } from './style.ts';
 
 export interface FrontMatter {
   readonly method: MethodView;
   readonly troubleshooting: TroubleshootingView;
 }
 
+/**
+ * What a set prints of a card beside its page: its titles, whether it refuses, its paper.
+ * A whole CardView is one; `setCard` picks these out for a worker thread.
+ */
+export type SetCard = Pick<CardView, 'kind' | 'title' | 'subtitle' | 'page'> &
+  Partial<Pick<StationCardView, 'refusal'>>;
+
+export function setCard(view: CardView): SetCard {
+  const { kind, title, subtitle, page } = view;
+  return view.kind === 'station'
+    ? { kind, title, subtitle, page, refusal: view.refusal }
+    : { kind, title, subtitle, page };
+}
+
 export interface SetPdfInput {
   readonly set: SetView;
   /** The set's cards, in the set's order. */
-  readonly cards: readonly CardView[];
+  readonly cards: readonly SetCard[];
+  /** The cards' own PDFs (card.ts cardPdf's bytes), in the same order. */
+  readonly cardPdfs: readonly Uint8Array[];
   /** Present for a training binder. */
   readonly frontMatter: FrontMatter | null;
   /** Paper of the text pages (the site's). */
@@ -41,7 +64,6 @@ export interface SetPdf {
   readonly pages: number;
   /** Contents, method and troubleshooting pages (0 without front matter). */
   readonly frontMatterPages: number;
-  readonly cards: readonly CardPage[];
 }
 
 /** A heading or paragraph as a flow block. */
@@ -244,7 +266,7 @@ function contentsItems(
   ];
 }
 
-function contentsText(card: CardView): string {
+function contentsText(card: SetCard): string {
   const words = pdfWords.contents;
   if (card.kind === 'insert') return card.title;
   const line = words.station(card.title, card.subtitle);
@@ -261,7 +283,8 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
     title: pdfWords.setTitle(input.set.title),
     author: input.author,
     date: pdfDate(input.builtOn, input.env),
-    idSeed: JSON.stringify({ set: input.set, cards: input.cards, front: input.frontMatter }),
+    // The shell's /ID is not kept: mergeCardPages hashes the set's from all its objects.
+    idSeed: JSON.stringify({ set: input.set.id }),
   });
   const { doc } = open;
   const measure = new Pen(doc, false);
@@ -319,21 +342,18 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
       doc.outline.addItem(part.title, { pageNumber: first } as never);
     }
   }
-  const cards: CardPage[] = [];
   for (const card of input.cards) {
-    const result = addCardPage(open, card);
+    const page = pageBox(card);
+    doc.addPage({ size: [page.widthPt, page.heightPt], margin: 0 });
     pageNo += 1;
-    const box = { widthPt: doc.page.width, heightPt: doc.page.height };
-    drawPageNumber(
-      pen,
-      box,
-      result.fit.style.marginPt,
-      pdfWords.pageNumber(pageNo, total),
-      st.pageNumber,
-    );
+    const number = pdfWords.pageNumber(pageNo, total);
+    drawPageNumber(pen, page, cardMarginPt(card.page.paper), number, st.pageNumber);
     doc.outline.addItem(cardTitle(card));
-    cards.push(result);
   }
-  const bytes = await open.finish();
-  return { bytes, pages: pageNo, frontMatterPages, cards };
+  const shell = await open.finish();
+  const { cardPdfs } = input;
+  if (cardPdfs.length !== input.cards.length)
+    throw new Error(`PDF: ${input.cards.length} cards in the set and ${cardPdfs.length} card PDFs`);
+  const grafts = cardPdfs.map((pdf, i) => ({ page: frontMatterPages + i, pdf }));
+  return { bytes: mergeCardPages(shell, grafts), pages: pageNo, frontMatterPages };
 }

@@ -4,8 +4,8 @@
  *   card view ─ fitCard (measure at font steps) ─▶ CardFit ─ drawCard (same blocks, drawing
  *   pen) ─▶ a page of the card's paper size in an open document
  *
- * `cardPdf` makes the one-page PDF twin of a card; sets and binders add card pages to a
- * longer document with `addCardPage`.
+ * `cardPdf` makes the one-page PDF twin of a card; sets and binders copy those pages
+ * (binder.ts, merge.ts) instead of drawing them again.
  */
 import type { InsertCardView, StationCardView } from '../card-view.ts';
 import { pdfWords } from '../../words/pdf.ts';
@@ -29,7 +29,7 @@ export class PdfLayoutError extends Error {
   }
 }
 
-export function pageBox(view: CardView): PageBox {
+export function pageBox(view: Pick<CardView, 'page'>): PageBox {
   const [widthPt, heightPt] = pageSizePt(view.page.widthMm, view.page.heightMm);
   return { widthPt, heightPt };
 }
@@ -38,7 +38,7 @@ export function cardFrame(view: CardView, style: CardStyle): CardFrame {
   return view.kind === 'station' ? stationFrame(view, style) : insertFrame(view, style);
 }
 
-export function cardTitle(view: CardView): string {
+export function cardTitle(view: Pick<CardView, 'kind' | 'title' | 'subtitle'>): string {
   return view.kind === 'station'
     ? pdfWords.stationTitle(view.title, view.subtitle)
     : pdfWords.insertTitle(view.title);
@@ -58,7 +58,7 @@ export interface CardPage {
 }
 
 /** Adds a page of the card's size to `open` and draws the card on it, tagged as an article. */
-export function addCardPage(open: OpenPdf, view: CardView): CardPage {
+function addCardPage(open: OpenPdf, view: CardView): CardPage {
   const page = pageBox(view);
   open.doc.addPage({ size: [page.widthPt, page.heightPt], margin: 0 });
   const fit = layoutCard(open.doc, view);

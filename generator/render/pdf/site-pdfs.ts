@@ -8,6 +8,8 @@
  *                                        contains "training") opens with the binder's
  *                                        contents, method and troubleshooting pages
  *
+ * The cards first: a set is assembled from its cards' PDFs (binder.ts), not drawn again.
+ *
  * The file names are the views' `paths.pdfFile` (../paths.ts), the same the pages link.
  */
 import { mkdir, writeFile } from 'node:fs/promises';
@@ -72,10 +74,12 @@ export async function writeSitePdfs(
   const cards: CardView[] = [...data.stationCards, ...data.insertCards];
   const total = cards.length + data.sets.length;
   const files: PdfFile[] = [];
+  const cardPdfs = new Map<string, Uint8Array>();
   onProgress({ phase: 'steps', done: 0, total });
   for (const card of cards) {
     const t = performance.now();
     const pdf = await cardPdf(card, { author, env });
+    cardPdfs.set(card.paths.pdfFile, pdf.bytes);
     await write(siteDir, card.paths.pdfFile, pdf.bytes);
     files.push({
       file: card.paths.pdfFile,
@@ -88,9 +92,11 @@ export async function writeSitePdfs(
   const frontMatter: FrontMatter = { method: data.method, troubleshooting: data.troubleshooting };
   for (const set of data.sets) {
     const t = performance.now();
+    const members = setCards(set, data);
     const pdf = await setPdf({
       set,
-      cards: setCards(set, data),
+      cards: members,
+      cardPdfs: members.map((card) => cardPdfs.get(card.paths.pdfFile)!),
       frontMatter: isTrainingSet(set) ? frontMatter : null,
       page: data.site.page,
       author,

@@ -105,12 +105,17 @@ export interface CardStyle {
 
 const MM = 72 / 25.4;
 
+/** A card's margin on its paper, pt (the same at every font step). */
+export function cardMarginPt(paper: PaperSize): number {
+  return PAPER_STYLE[paper].marginMm * MM;
+}
+
 export function cardStyle(
   paper: PaperSize,
   step: number,
   arrangement: Arrangement = ARRANGEMENTS[0]!,
 ): CardStyle {
-  const { k, marginMm } = PAPER_STYLE[paper];
+  const { k } = PAPER_STYLE[paper];
   const s = k * step;
   const f = (size: number, bold = false, color = INK): TextFont => ({
     size: Math.max(MIN_BODY_PT, size * s),
@@ -123,7 +128,7 @@ export function cardStyle(
     bodyColumns: arrangement.bodyColumns,
     listColumns: arrangement.listColumns,
     compact: paper === 'A6',
-    marginPt: marginMm * MM,
+    marginPt: cardMarginPt(paper),
     gap: 1.6 * MM * s,
     gutter: 3 * MM * s,
     h1: f(16, true),
