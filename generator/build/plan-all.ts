@@ -3,7 +3,7 @@
  * key is there, else planned (in the worker pool when there is one; in this thread
  * otherwise) and written to the cache.
  *
- * A plan with its time series is ~130 kB of JSON, so plans stay text until something reads
+ * A plan is ~15 kB of JSON (two runs with their cup curves), so plans stay text until something reads
  * them: a cached plan is not even read unless its view has to be rendered, and workers are
  * sent the text (a string is copied to a thread far faster than the object it encodes).
  */

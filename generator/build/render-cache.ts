@@ -10,7 +10,8 @@
  *                                 views it is drawn from and the render code version
  *
  * A view's hash is sha256 over its cache text, so equal views give equal page and PDF
- * keys whatever made them. Nothing is ever evicted; deleting the folder is always safe.
+ * keys whatever made them. What a build did not use is swept after a week (file-cache.ts);
+ * deleting the folder is always safe.
  */
 import { createHash } from 'node:crypto';
 import path from 'node:path';

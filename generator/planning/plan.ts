@@ -25,7 +25,14 @@ import { brewSetup, roomModel, type Room } from './setup.ts';
 import { modelRangeWarnings } from './model-range.ts';
 import { deliveryWindowS } from './delivery.ts';
 import { planWords } from '../words/plan.ts';
-import type { AcceptedPlan, CardPlan, PlanContext, Refusal, TimeRange } from './types.ts';
+import type {
+  AcceptedPlan,
+  CardPlan,
+  PlanContext,
+  PlannedBrew,
+  Refusal,
+  TimeRange,
+} from './types.ts';
 
 export const PRESSURE_LIMIT_SHARE_OF_VALVE = 0.5;
 export const TIE_SHARE = 0.02;
@@ -230,7 +237,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     left.splice(left.indexOf(next), 1);
     for (let retry = 0; retry <= EDGE_RETRIES && brew === null; retry++) {
       const offS = next.offS - retry * OFF_HEAT_RESOLUTION_S;
-      const printed = run(next.startK, next.levelIndex, { offS, series: true });
+      const printed = run(next.startK, next.levelIndex, { offS });
       if (printed.peakGaugePa <= limitPa && printed.endReason !== 'sputter' && printed.extraction) {
         chosen = { ...next, offS };
         brew = printed;
@@ -240,8 +247,8 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   if (chosen === null || brew === null) {
     return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
-  const coldBrew = run(room.ambientK, chosen.levelIndex, { series: true });
-  const offCupM3 = cupAt(brew, chosen.offS);
+  const coldBrew = run(room.ambientK, chosen.levelIndex);
+  const offCupM3 = brew.events.find((e) => e.kind === 'heat-off')?.cupM3 ?? brew.yieldM3;
   // The corners only spread the timings into ranges: search accuracy is plenty.
   const corners = SENSITIVITY.map((scale) =>
     run(chosen.startK, chosen.levelIndex, { series: true, scale, search: true }),
@@ -286,8 +293,8 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
       firstCoffeeS: coldBrew.firstCoffeeS,
     },
     peakGaugePa: Math.max(brew.peakGaugePa, ...corners.map((r) => r.peakGaugePa)),
-    brew,
-    coldBrew,
+    brew: withoutSeries(brew),
+    coldBrew: withoutSeries(coldBrew),
     simulations,
   };
   return plan;
@@ -408,16 +415,9 @@ function range(mid: number, values: readonly number[]): TimeRange {
   return { lowS: Math.min(...values), midS: mid, highS: Math.max(...values) };
 }
 
-/** Cup volume at time t, from the run's 1 s series. */
-function cupAt(result: BrewResult, tS: number): number {
-  const s = result.series;
-  for (let i = 1; i < s.length; i++) {
-    if (s[i]!.tS >= tS) {
-      const a = s[i - 1]!, b = s[i]!;
-      return a.cupM3 + ((b.cupM3 - a.cupM3) * (tS - a.tS)) / (b.tS - a.tS || 1);
-    }
-  }
-  return s[s.length - 1]?.cupM3 ?? 0;
+function withoutSeries(result: BrewResult): PlannedBrew {
+  const { series: _series, ...kept } = result;
+  return kept;
 }
 
 /** First time the run's cup holds `cupM3`, or null when it never does. */

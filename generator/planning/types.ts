@@ -81,12 +81,18 @@ export interface AcceptedPlan extends PlanContext {
   readonly targetBandK: readonly [number, number];
   readonly coldStart: StartComparison;
   readonly peakGaugePa: number;
-  /** The chosen brew re-simulated with its time series, for charts. */
-  readonly brew: BrewResult;
+  /** The chosen brew re-simulated (the charts draw its cup curve). */
+  readonly brew: PlannedBrew;
   /** The same pot, coffee and level started with room-temperature water. */
-  readonly coldBrew: BrewResult;
+  readonly coldBrew: PlannedBrew;
   /** Simulations the search ran, for the benchmark. */
   readonly simulations: number;
 }
 
 export type CardPlan = AcceptedPlan | RefusedPlan;
+
+/**
+ * A run as a plan keeps it: without the 1 s time series, which nothing drawn from a plan
+ * reads and which was nine tenths of a plan's cached text (~200 kB a card).
+ */
+export type PlannedBrew = Omit<BrewResult, 'series'>;
