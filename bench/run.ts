@@ -8,8 +8,11 @@
  *   floor     the same site again with every plan and view (chart, cross-section, QR code,
  *             words) from the warm cache, and every HTML page and PDF (cards and sets)
  *             rendered: the pages and PDFs with no simulation and no chart behind them
- *   rebuild   one coffee's permeability changed by 10 %, everything else cached
+ *   rebuild   one coffee's permeability changed by 10 %, everything else cached, in a new
+ *             pool of workers (as `stovecard build` after an edit)
  *   no-op     nothing changed
+ *   session   three more one-coffee edits, each rebuilt on one pool kept across them (as
+ *             `stovecard build --serve` does); the table shows the last
  *
  * Each build is buildSite with a PDF step as its extra step, as `stovecard build` runs it:
  * `site` (default), the build's incremental step on the workers (generator/build/pdf-step.ts),
@@ -27,6 +30,7 @@ import { parseArgs } from 'node:util';
 import { buildSite, type BuildResult, type BuildStep } from '../generator/build/build-site.ts';
 import { expandCards } from '../generator/build/cards.ts';
 import { sitePdfStep } from '../generator/build/pdf-step.ts';
+import { WorkerPool } from '../generator/build/pool.ts';
 import { loadCatalogue } from '../generator/content/index.ts';
 import { pdfBuildStep } from '../generator/render/pdf/site-pdfs.ts';
 import { DEFAULT_SIZE, sizeForCards, stationCount, writeCatalogue } from './catalogue.ts';
@@ -39,6 +43,8 @@ interface Run {
   readonly contentDir: string;
   readonly workers: number;
   readonly pdfStep: BuildStep;
+  /** A pool kept across builds (the session); default a new one per build. */
+  readonly pool?: WorkerPool;
 }
 
 async function measured(name: string, run: Run): Promise<Measured> {
@@ -53,6 +59,7 @@ async function measured(name: string, run: Run): Promise<Measured> {
       cacheDir: path.join(run.root, 'cache'),
       env: EPOCH,
       workers: run.workers,
+      ...(run.pool ? { pool: run.pool } : {}),
       extraSteps: [run.pdfStep],
     });
   } finally {
@@ -120,8 +127,20 @@ async function main(): Promise<void> {
     await editCoffee(contentDir, edited);
     const rebuild = await measured(`rebuild (${edited})`, run);
     const noop = await measured('no-op rebuild', run);
+    // A --serve session: one pool for three edits; the first starts the workers.
+    const pool = new WorkerPool({ size: workers });
+    let session: Measured | null = null;
+    try {
+      for (const index of [8, 9, 10]) {
+        const coffee = ids.coffees[Math.min(index, ids.coffees.length - 1)]!;
+        await editCoffee(contentDir, coffee);
+        session = await measured(`session rebuild (${coffee})`, { ...run, pool });
+      }
+    } finally {
+      await pool.close();
+    }
     process.stdout.write(
-      `${formatTable({ size, layout, pdfStep: stepName, inserts: jobs.inserts.length, sets: jobs.sets.length, full, floor, rebuild, noop })}\n`,
+      `${formatTable({ size, layout, pdfStep: stepName, inserts: jobs.inserts.length, sets: jobs.sets.length, full, floor, rebuild, noop, session: session! })}\n`,
     );
   } finally {
     if (values.keep) process.stderr.write(`kept ${root}\n`);

@@ -28,11 +28,12 @@ export function summariseExtraction(
   const cdf = (x: number): number => volumeAtOrBelow(curve, x) / total;
   const [low, high] = bandK;
   const below = cdf(low);
+  const temperatures = curve.map((p) => p.extractionK).sort((a, b) => a - b);
   return {
     meanK: weighted / total,
-    p10K: quantile(curve, cdf, 0.1),
-    p50K: quantile(curve, cdf, 0.5),
-    p90K: quantile(curve, cdf, 0.9),
+    p10K: quantile(temperatures, cdf, 0.1),
+    p50K: quantile(temperatures, cdf, 0.5),
+    p90K: quantile(temperatures, cdf, 0.9),
     inBandShare: Math.max(0, cdf(high) - below),
     belowBandShare: below,
   };
@@ -52,17 +53,22 @@ function volumeAtOrBelow(curve: readonly CupPoint[], x: number): number {
   return v;
 }
 
-/** Smallest x with F(x) ≥ q, by bisection on the monotone F (to 1e-6 K). */
-function quantile(curve: readonly CupPoint[], cdf: (x: number) => number, q: number): number {
-  let lo = Infinity, hi = -Infinity;
-  for (const p of curve) {
-    lo = Math.min(lo, p.extractionK);
-    hi = Math.max(hi, p.extractionK);
-  }
-  while (hi - lo > 1e-6) {
-    const mid = (lo + hi) / 2;
-    if (cdf(mid) >= q) hi = mid;
+/**
+ * Smallest x with F(x) ≥ q, from the curve's temperatures in ascending order `xs`. F is
+ * linear between consecutive ones, so a binary search finds the piece and the piece gives
+ * x exactly.
+ */
+function quantile(xs: readonly number[], cdf: (x: number) => number, q: number): number {
+  let lo = 0;
+  let hi = xs.length - 1;
+  if (cdf(xs[0]!) >= q) return xs[0]!;
+  // Invariant: F(xs[lo]) < q ≤ F(xs[hi]) (F(max) = 1 ≥ q).
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (cdf(xs[mid]!) >= q) hi = mid;
     else lo = mid;
   }
-  return hi;
+  const a = xs[lo]!, b = xs[hi]!;
+  const fa = cdf(a), fb = cdf(b);
+  return fb > fa ? a + ((q - fa) / (fb - fa)) * (b - a) : b;
 }

@@ -74,6 +74,11 @@ export interface BuildOptions {
    * default os.availableParallelism(); 0 runs everything in this thread.
    */
   readonly workers?: number;
+  /**
+   * Workers the caller keeps between builds (the `--serve` loop: a rebuild then finds them
+   * started and warm); used instead of `workers`, and neither started nor closed here.
+   */
+  readonly pool?: WorkerPool;
 }
 
 export interface BuildResult {
@@ -102,7 +107,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
   const env = options.env ?? process.env;
   const stats = emptyStats();
   const workers = options.workers ?? availableParallelism();
-  const pool = workers > 0 ? new WorkerPool({ size: workers }) : null;
+  const ownPool = options.pool === undefined && workers > 0;
+  const pool = options.pool ?? (ownPool ? new WorkerPool({ size: workers }) : null);
   try {
     onProgress({ phase: 'load', done: 0, total: 0 });
     const { catalogue, jobs } = await timedPhase(stats, 'load', async () => {
@@ -171,6 +177,6 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
       stats,
     };
   } finally {
-    await pool?.close();
+    if (ownPool) await pool?.close();
   }
 }

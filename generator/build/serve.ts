@@ -12,7 +12,8 @@ import path from 'node:path';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
 import { buildSite, type BuildResult, type BuildStep } from './build-site.ts';
-import { forgetCodeVersions } from './code-version.ts';
+import { forgetCodeVersions, pageCodeVersion, planCodeVersion, renderCodeVersion } from './code-version.ts';
+import { WorkerPool } from './pool.ts';
 import { TEMPLATES_DIR } from './eleventy.ts';
 
 export interface ServeOptions {
@@ -94,6 +95,17 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
   let timer: NodeJS.Timeout | null = null;
   let running: Promise<void> | null = null;
   let again = false;
+  // One pool for the session, so a rebuild's few cards go to started, warm workers. The
+  // workers run the code they loaded: when the sources change, a new pool is started.
+  let pool: { readonly workers: WorkerPool; readonly code: string } | null = null;
+  const sessionPool = async (): Promise<WorkerPool> => {
+    const code = (await Promise.all([planCodeVersion(), renderCodeVersion(), pageCodeVersion()])).join();
+    if (pool?.code !== code) {
+      await pool?.workers.close();
+      pool = { workers: new WorkerPool(), code };
+    }
+    return pool.workers;
+  };
   const rebuild = async (): Promise<void> => {
     if (running) {
       again = true;
@@ -107,6 +119,7 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
           const result = await buildSite({
             contentDir: options.contentDir,
             outDir: options.outDir,
+            pool: await sessionPool(),
             ...(options.cacheDir ? { cacheDir: options.cacheDir } : {}),
             ...(options.extraSteps ? { extraSteps: options.extraSteps } : {}),
           });
@@ -148,6 +161,8 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
       if (timer) clearTimeout(timer);
       for (const w of watchers) w.close();
       for (const client of clients) client.end();
+      await running?.catch(() => {});
+      await pool?.workers.close();
       await new Promise<void>((resolve) => server.close(() => resolve()));
     },
   };
