@@ -16,8 +16,7 @@ import { createHash } from 'node:crypto';
 import PDFDocument from 'pdfkit';
 import { PDF_LANG, pdfWords } from '../../words/pdf.ts';
 import { escapeXml } from '../svg.ts';
-import { fontPath } from '../fonts.ts';
-import { registerPdfFonts } from './fonts.ts';
+import { registerPdfFonts, startingFont } from './fonts.ts';
 
 export interface PdfMeta {
   /** Document title (shown by viewers instead of the file name: displayTitle). */
@@ -113,8 +112,8 @@ export function openPdf(meta: PdfMeta): OpenPdf {
     autoFirstPage: false,
     margin: 0,
     // DejaVu as the starting font, so pdfkit does not load Helvetica (never embedded, as
-    // PDF/A would need, because no text is ever set in it).
-    font: fontPath('regular'),
+    // PDF/A would need, because no text is ever set in it); the shared parse of it.
+    font: startingFont(),
     pdfVersion: '1.7',
     subset: 'PDF/A-2b',
     tagged: true,

@@ -120,6 +120,15 @@ export function registerPdfFonts(doc: PDFKit.PDFDocument): void {
   }
 }
 
+/**
+ * The font a document starts with (document.ts): the shared parse of the regular face, so
+ * opening a document does not read and parse the 700 kB TTF again (pdfkit takes a fontkit
+ * font wherever it takes a file).
+ */
+export function startingFont(): string {
+  return parsedFaces().get('regular') as string;
+}
+
 export function faceOf(bold: boolean, italic: boolean): FontFace {
   if (bold) return italic ? 'bold-oblique' : 'bold';
   return italic ? 'oblique' : 'regular';
