@@ -4,12 +4,12 @@
  * own PDFs is set-pages.test.ts.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { setPdf, type SetPdf } from '../../generator/render/pdf/binder.ts';
+import type { SetPdf } from '../../generator/render/pdf/binder.ts';
 import { cardPdf } from '../../generator/render/pdf/card.ts';
 import { isTrainingSet, setCards } from '../../generator/render/pdf/site-pdfs.ts';
 import type { SetView } from '../../generator/render/site-view.ts';
 import { pdfWords } from '../../generator/words/pdf.ts';
-import { BUILT_ON, NO_EPOCH, demoSite, type DemoSite } from './demo-site.ts';
+import { NO_EPOCH, demoSetPdf, demoSite, type DemoSite } from './demo-site.ts';
 import { readPdf, squash, structNodes, type ReadPdf } from './read-pdf.ts';
 
 let demo: DemoSite;
@@ -22,18 +22,7 @@ beforeAll(async () => {
     const cards = setCards(set, demo.data);
     const cardPdfs = [];
     for (const card of cards) cardPdfs.push((await cardPdf(card, { author, env: NO_EPOCH })).bytes);
-    const pdf = await setPdf({
-      set,
-      cards,
-      cardPdfs,
-      frontMatter: isTrainingSet(set)
-        ? { method: demo.data.method, troubleshooting: demo.data.troubleshooting }
-        : null,
-      page: demo.data.site.page,
-      author,
-      builtOn: BUILT_ON,
-      env: NO_EPOCH,
-    });
+    const pdf = await demoSetPdf(demo, set, cardPdfs, author);
     built.set(set.id, { set, pdf, read: await readPdf(pdf.bytes) });
   }
 });

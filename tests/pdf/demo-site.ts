@@ -10,7 +10,9 @@ import { expandCards, type CardJobs } from '../../generator/build/cards.ts';
 import { PlanCache } from '../../generator/build/plan-cache.ts';
 import { loadCatalogue } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
-import type { SiteData } from '../../generator/render/site-view.ts';
+import { setPdf, type SetPdf } from '../../generator/render/pdf/binder.ts';
+import { isTrainingSet, setCards } from '../../generator/render/pdf/site-pdfs.ts';
+import type { SetView, SiteData } from '../../generator/render/site-view.ts';
 
 export const BUILT_ON = '2024-05-01';
 /** The PDFs' environment: no SOURCE_DATE_EPOCH, so the dates come from the views. */
@@ -42,4 +44,25 @@ export async function demoSite(cacheDir?: string): Promise<DemoSite> {
     cacheDir: dir,
     dispose: async () => (own ? rm(dir, { recursive: true, force: true }) : undefined),
   };
+}
+
+/** A demo set's PDF as the site build makes it, from its cards' own PDF bytes (in order). */
+export function demoSetPdf(
+  demo: DemoSite,
+  set: SetView,
+  cardPdfs: readonly Uint8Array[],
+  author: string,
+): Promise<SetPdf> {
+  return setPdf({
+    set,
+    cards: setCards(set, demo.data),
+    cardPdfs,
+    frontMatter: isTrainingSet(set)
+      ? { method: demo.data.method, troubleshooting: demo.data.troubleshooting }
+      : null,
+    page: demo.data.site.page,
+    author,
+    builtOn: BUILT_ON,
+    env: NO_EPOCH,
+  });
 }

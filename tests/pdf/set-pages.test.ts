@@ -8,14 +8,14 @@ import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { setPdf, type SetPdf } from '../../generator/render/pdf/binder.ts';
+import type { SetPdf } from '../../generator/render/pdf/binder.ts';
 import { cardPdf, cardTitle, type CardView } from '../../generator/render/pdf/card.ts';
 import { pageSizePt } from '../../generator/render/pdf/document.ts';
-import { isTrainingSet, setCards } from '../../generator/render/pdf/site-pdfs.ts';
+import { setCards } from '../../generator/render/pdf/site-pdfs.ts';
 import { cardMarginPt } from '../../generator/render/pdf/style.ts';
 import type { SetView } from '../../generator/render/site-view.ts';
 import { pdfWords } from '../../generator/words/pdf.ts';
-import { BUILT_ON, NO_EPOCH, demoSite, type DemoSite } from './demo-site.ts';
+import { NO_EPOCH, demoSetPdf, demoSite, type DemoSite } from './demo-site.ts';
 import { onPath, pageLines, pdfinfoSizes, renderGray, runTool, type GrayImage } from './poppler.ts';
 import { readPdf, squash, type ReadPdf, type StructNode } from './read-pdf.ts';
 
@@ -46,18 +46,12 @@ beforeAll(async () => {
   }
   for (const set of demo.data.sets) {
     const cards = setCards(set, demo.data);
-    const pdf = await setPdf({
+    const pdf = await demoSetPdf(
+      demo,
       set,
-      cards,
-      cardPdfs: cards.map((card) => pdfs.get(card.paths.pdfFile)!),
-      frontMatter: isTrainingSet(set)
-        ? { method: demo.data.method, troubleshooting: demo.data.troubleshooting }
-        : null,
-      page: demo.data.site.page,
+      cards.map((card) => pdfs.get(card.paths.pdfFile)!),
       author,
-      builtOn: BUILT_ON,
-      env: NO_EPOCH,
-    });
+    );
     const file = path.join(dir, `set-${set.id}.pdf`);
     await writeFile(file, pdf.bytes);
     sets.push({ set, cards, pdf, file, read: await readPdf(pdf.bytes) });
