@@ -12,7 +12,12 @@ import path from 'node:path';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
 import { buildSite, type BuildResult, type BuildStep } from './build-site.ts';
-import { forgetCodeVersions, pageCodeVersion, planCodeVersion, renderCodeVersion } from './code-version.ts';
+import {
+  forgetCodeVersions,
+  pageCodeVersion,
+  planCodeVersion,
+  renderCodeVersion,
+} from './code-version.ts';
 import { WorkerPool } from './pool.ts';
 import { TEMPLATES_DIR } from './eleventy.ts';
 
@@ -99,7 +104,9 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
   // workers run the code they loaded: when the sources change, a new pool is started.
   let pool: { readonly workers: WorkerPool; readonly code: string } | null = null;
   const sessionPool = async (): Promise<WorkerPool> => {
-    const code = (await Promise.all([planCodeVersion(), renderCodeVersion(), pageCodeVersion()])).join();
+    const code = (
+      await Promise.all([planCodeVersion(), renderCodeVersion(), pageCodeVersion()])
+    ).join();
     if (pool?.code !== code) {
       await pool?.workers.close();
       pool = { workers: new WorkerPool(), code };

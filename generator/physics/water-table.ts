@@ -114,7 +114,8 @@ export function liquidAt(
   out: LiquidSample,
 ): LiquidSample {
   const q = (pressurePa - saturationPa) / P_STEP;
-  if (!inTable(temperatureK) || !(q >= 0 && q <= MAX_Q)) return exactLiquid(temperatureK, pressurePa, out);
+  if (!inTable(temperatureK) || !(q >= 0 && q <= MAX_Q))
+    return exactLiquid(temperatureK, pressurePa, out);
   const table = (liquidTable ??= buildLiquidTable());
   const first = cubicWeights(temperatureK);
   // Quadratic Lagrange weights of the pressure nodes q = 0, 1, 2.
@@ -147,7 +148,11 @@ export function liquidAt(
 }
 
 /** The same quantities from the correlations themselves (outside the table; and for tests). */
-export function exactLiquid(temperatureK: number, pressurePa: number, out: LiquidSample): LiquidSample {
+export function exactLiquid(
+  temperatureK: number,
+  pressurePa: number,
+  out: LiquidSample,
+): LiquidSample {
   const state = region1(temperatureK, pressurePa);
   out.densityKgM3 = state.densityKgM3;
   out.enthalpyJPerKg = state.enthalpyJPerKg;

@@ -2,7 +2,11 @@ import { mkdtemp, readdir, rm, utimes, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { CACHE_GRACE_DAYS, FileCache, sweepCacheFolders } from '../../generator/build/file-cache.ts';
+import {
+  CACHE_GRACE_DAYS,
+  FileCache,
+  sweepCacheFolders,
+} from '../../generator/build/file-cache.ts';
 
 const DAY_MS = 24 * 3600 * 1000;
 const folders: string[] = [];
@@ -47,8 +51,13 @@ describe('sweepCacheFolders', () => {
     await cache.put('card', 'pdf');
     await age(cache.file('card'), 30);
     await sweepCacheFolders([dir]);
-    expect(await new FileCache(dir, '.pdf').copyTo('card', path.join(dir, '..', 'out.pdf'))).toBe(true);
+    expect(await new FileCache(dir, '.pdf').copyTo('card', path.join(dir, '..', 'out.pdf'))).toBe(
+      true,
+    );
     folders.push(path.join(dir, '..', 'out.pdf'));
-    expect(await sweepCacheFolders([dir, path.join(dir, 'missing')])).toEqual({ kept: 1, deleted: 0 });
+    expect(await sweepCacheFolders([dir, path.join(dir, 'missing')])).toEqual({
+      kept: 1,
+      deleted: 0,
+    });
   });
 });

@@ -42,8 +42,15 @@ describe('the default delivery window', () => {
       { cups: 1 },
     );
     const stove = stoveEntry([90, 150, 250, 400]);
-    const request = { pot: oneCup, stove, room: seaLevel, kettlePresetsK: [70 + C, 80 + C, 90 + C] };
-    const scaled = accepted(planCard({ ...request, coffee: { ...coffeeEntry(), deliveryWindowS: null } }));
+    const request = {
+      pot: oneCup,
+      stove,
+      room: seaLevel,
+      kettlePresetsK: [70 + C, 80 + C, 90 + C],
+    };
+    const scaled = accepted(
+      planCard({ ...request, coffee: { ...coffeeEntry(), deliveryWindowS: null } }),
+    );
     // The window a three-cup pot gets, imposed on the one-cup pot: 3 × [20, 50] s.
     const threeCup = accepted(
       planCard({ ...request, coffee: { ...coffeeEntry(), deliveryWindowS: [180, 450] } }),
