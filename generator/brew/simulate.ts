@@ -31,7 +31,8 @@
  * ../physics/water-table.ts (tables of IF97 Region 1, R12-08 and SR1-86, within 1e-8 of
  * them); the stored-energy bookkeeping and the initial state use the correlations directly.
  *
- * Tolerances: rtol 1e-6 (setup.relativeTolerance) on every state, atol per state (ATOL below); event times to 1e-9 s.
+ * Tolerances: rtol 1e-6 (setup.relativeTolerance) on every state, atol per state (ATOL
+ * below); event times to 1e-9 s.
  */
 import { integrate, type EventFunction, type DenseStep } from '../numerics/dormand-prince.ts';
 import {
