@@ -227,26 +227,16 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
 
-  // The search ran at SEARCH_RTOL: the run to be printed must itself keep the hard limits
-  // and end before the sputter. When it does not (an off-heat time on the sputter's edge),
-  // the heat goes off a little earlier, and failing that the next best candidate is taken.
-  let chosen: Scored | null = null;
-  let brew: BrewResult | null = null;
-  for (const left = [...refined]; left.length > 0 && brew === null; ) {
-    const next = left.reduce((best, other) => (better(other, best, presets) ? other : best));
-    left.splice(left.indexOf(next), 1);
-    for (let retry = 0; retry <= EDGE_RETRIES && brew === null; retry++) {
-      const offS = next.offS - retry * OFF_HEAT_RESOLUTION_S;
-      const printed = run(next.startK, next.levelIndex, { offS });
-      if (printed.peakGaugePa <= limitPa && printed.endReason !== 'sputter' && printed.extraction) {
-        chosen = { ...next, offS };
-        brew = printed;
-      }
-    }
-  }
-  if (chosen === null || brew === null) {
+  const printable = firstPrintable(
+    refined,
+    (a, b) => better(a, b, presets),
+    (choice, offS) => run(choice.startK, choice.levelIndex, { offS }),
+    limitPa,
+  );
+  if (printable === null) {
     return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
+  const { chosen, brew } = printable;
   const coldBrew = run(room.ambientK, chosen.levelIndex);
   const offCupM3 = brew.events.find((e) => e.kind === 'heat-off')?.cupM3 ?? brew.yieldM3;
   // The corners only spread the timings into ranges: search accuracy is plenty.
@@ -392,6 +382,33 @@ function bestOffHeat(
   }
   const end = score(latest);
   return wins(end, best) ? end : best;
+}
+
+/**
+ * The search ran at SEARCH_RTOL: the run to be printed must itself keep the pressure limit
+ * and end before the sputter. Takes the choices best first (`better`); one whose printed
+ * run fails (an off-heat time on the sputter's edge) is tried with the heat off
+ * OFF_HEAT_RESOLUTION_S earlier, EDGE_RETRIES times, before the next choice. Null when
+ * none passes.
+ */
+export function firstPrintable<C extends { readonly offS: number }>(
+  choices: readonly C[],
+  better: (a: C, b: C) => boolean,
+  printedRun: (choice: C, offS: number) => BrewResult,
+  limitPa: number,
+): { chosen: C; brew: BrewResult } | null {
+  for (const left = [...choices]; left.length > 0; ) {
+    const next = left.reduce((best, other) => (better(other, best) ? other : best));
+    left.splice(left.indexOf(next), 1);
+    for (let retry = 0; retry <= EDGE_RETRIES; retry++) {
+      const offS = next.offS - retry * OFF_HEAT_RESOLUTION_S;
+      const brew = printedRun(next, offS);
+      if (brew.peakGaugePa <= limitPa && brew.endReason !== 'sputter' && brew.extraction) {
+        return { chosen: { ...next, offS }, brew };
+      }
+    }
+  }
+  return null;
 }
 
 /** Tie-breaks (shares within TIE_SHARE): gentler level, a kettle preset, cooler start. */

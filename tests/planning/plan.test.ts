@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { planCard, startCandidates, TIE_SHARE } from '../../generator/planning/plan.ts';
+import {
+  firstPrintable,
+  planCard,
+  startCandidates,
+  TIE_SHARE,
+} from '../../generator/planning/plan.ts';
+import type { BrewResult } from '../../generator/brew/types.ts';
 import { maxSafeFill } from '../../generator/planning/fill.ts';
 import { simulateBrew } from '../../generator/brew/simulate.ts';
 import { brewSetup, roomModel } from '../../generator/planning/setup.ts';
@@ -16,7 +22,9 @@ const accepted = (plan: CardPlan): AcceptedPlan => {
   if (plan.refused) throw new Error(`expected a recipe, got a refusal: ${plan.refused.reason}`);
   return plan;
 };
-const typical = accepted(planCard({ pot: potEntry(), coffee: coffeeEntry(), stove: gasRing, room: seaLevel }));
+const typical = accepted(
+  planCard({ pot: potEntry(), coffee: coffeeEntry(), stove: gasRing, room: seaLevel }),
+);
 
 describe('planCard on a typical three-cup pot with a permeable grind', () => {
   it('re-simulating the plan’s own choices gives the plan’s numbers', () => {
@@ -88,7 +96,12 @@ describe('planCard at altitude (ISO 2533 pressure, IF97 Region 4 boiling point)'
 
   it('never starts within 2 K of boiling', () => {
     const starts = startCandidates(
-      { pot: potEntry(), coffee: coffeeEntry(), stove: gasRing, room: { ...seaLevel, altitudeM: 2500 } },
+      {
+        pot: potEntry(),
+        coffee: coffeeEntry(),
+        stove: gasRing,
+        room: { ...seaLevel, altitudeM: 2500 },
+      },
       high.boilingK,
     );
     expect(Math.max(...starts)).toBeLessThanOrEqual(high.boilingK - 2);
@@ -122,7 +135,12 @@ describe('planCard refusals (a reason and a fix, never a recipe)', () => {
 
   it('refuses an aluminium pot on induction, and accepts it with an induction plate', () => {
     const induction = stoveEntry([100, 150, 200, 300], 'induction');
-    const plan = planCard({ pot: potEntry(), coffee: coffeeEntry(), stove: induction, room: seaLevel });
+    const plan = planCard({
+      pot: potEntry(),
+      coffee: coffeeEntry(),
+      stove: induction,
+      room: seaLevel,
+    });
     expect(plan.refused).toEqual(planWords.inductionNeedsMagneticBase(potEntry().name));
     const plated = planCard({
       pot: potEntry({}, { inductionReady: true }),
@@ -167,5 +185,45 @@ describe('planCard’s coarse-to-fine start search', () => {
     }
     expect(accepted).toBeGreaterThanOrEqual(12);
     expect(same / accepted).toBeGreaterThanOrEqual(0.9);
+  });
+});
+
+describe('firstPrintable: the printed run keeps the limits the search saw', () => {
+  // Stand-in runs: only the fields firstPrintable reads.
+  const runOf = (over: Partial<BrewResult>): BrewResult =>
+    ({ peakGaugePa: 1e4, endReason: 'flow-stopped', extraction: {}, ...over }) as BrewResult;
+  const byShare = (a: { share: number }, b: { share: number }) => a.share > b.share;
+  const limitPa = 5e4;
+
+  it('takes the heat off 4 s earlier when the best choice’s printed run sputters', () => {
+    const tried: number[] = [];
+    const result = firstPrintable(
+      [{ share: 0.9, offS: 100 }],
+      byShare,
+      (_c, offS) => {
+        tried.push(offS);
+        return runOf(offS > 97 ? { endReason: 'sputter' } : {});
+      },
+      limitPa,
+    );
+    expect(tried).toEqual([100, 96]);
+    expect(result?.chosen.offS).toBe(96);
+  });
+
+  it('moves to the next best choice when retries do not help, and refuses when none passes', () => {
+    const choices = [
+      { share: 0.5, offS: 80 },
+      { share: 0.9, offS: 100 },
+    ];
+    const result = firstPrintable(
+      choices,
+      byShare,
+      (c) => runOf(c.share > 0.8 ? { peakGaugePa: 6e4 } : {}),
+      limitPa,
+    );
+    expect(result?.chosen).toEqual({ share: 0.5, offS: 80 });
+    expect(
+      firstPrintable(choices, byShare, () => runOf({ endReason: 'sputter' }), limitPa),
+    ).toBeNull();
   });
 });
