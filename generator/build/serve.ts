@@ -95,7 +95,7 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
   });
   const address = server.address();
   const url = `http://localhost:${typeof address === 'object' && address ? address.port : options.port}/`;
-  options.log(buildWords.serving(url));
+  options.log(buildWords.serving(url, options.contentDir));
 
   let timer: NodeJS.Timeout | null = null;
   let running: Promise<void> | null = null;

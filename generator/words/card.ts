@@ -373,8 +373,8 @@ export const buildWords = {
     `--out ${outDir} is a file, not a folder; choose a folder for the site (default: site)`,
   outNotASite: (outDir: string): string =>
     `--out ${outDir} is a folder that holds other files (no index.html of an earlier build), and the build replaces the whole --out folder; choose a new or empty folder, or remove it first`,
-  serving: (url: string): string =>
-    `serving ${url} (Ctrl-C to stop); rebuilding when content/ or templates/ change`,
+  serving: (url: string, contentDir: string): string =>
+    `serving ${url} (Ctrl-C to stop); rebuilding when ${contentDir} or the templates change`,
   rebuilt: (summary: string): string => `rebuilt: ${summary}`,
   rebuildFailed: (message: string): string =>
     `rebuild failed, still serving the last good site:\n${message}`,
