@@ -2,7 +2,8 @@
  * A folder of files named by a key (a hex sha256 of what made them): `<dir>/<key><ext>`.
  * The plan, view, page and PDF caches are each one of these. Writes go to a temporary
  * name and are renamed, so a crash never leaves half a file; a file that cannot be read
- * is a miss, so a damaged cache only costs a re-render.
+ * is a miss (and so is a copy of one that does not end as its kind must), so a damaged
+ * cache only costs a re-render.
  *
  * Eviction (sweepCacheFolders, after each successful build): a file no cache of its folder
  * has read or written in this process since the folder's last sweep, and not written for
@@ -15,6 +16,7 @@ import {
   access,
   copyFile,
   mkdir,
+  open,
   readdir,
   readFile,
   rename,
@@ -46,9 +48,14 @@ export class FileCache {
 
   private readonly used: Set<string>;
 
+  /**
+   * `ending`: how every whole file of this cache ends (a PDF's `%%EOF`, a page's `</html>`);
+   * a file that does not is damaged, and copyTo treats it as a miss.
+   */
   constructor(
     dir: string,
     private readonly ext: string,
+    private readonly ending?: string,
   ) {
     this.dir = path.resolve(dir);
     this.used = usedIn(this.dir);
@@ -102,12 +109,27 @@ export class FileCache {
    */
   async copyTo(key: string, target: string): Promise<boolean> {
     try {
-      await copyFile(this.file(key), target, constants.COPYFILE_FICLONE);
+      const file = this.file(key);
+      if (this.ending !== undefined && !(await endsWith(file, this.ending))) return false;
+      await copyFile(file, target, constants.COPYFILE_FICLONE);
       return true;
     } catch (error) {
       if ((error as NodeJS.ErrnoException).code === 'ENOENT') return false;
       throw error;
     }
+  }
+}
+
+/** True when the file's last bytes, trailing white space aside, are `ending`. */
+async function endsWith(file: string, ending: string): Promise<boolean> {
+  const handle = await open(file, 'r');
+  try {
+    const { size } = await handle.stat();
+    const tail = Buffer.alloc(Math.min(size, ending.length + 16));
+    await handle.read(tail, 0, tail.length, size - tail.length);
+    return tail.toString('latin1').trimEnd().endsWith(ending);
+  } finally {
+    await handle.close();
   }
 }
 

@@ -61,3 +61,17 @@ describe('sweepCacheFolders', () => {
     });
   });
 });
+
+describe('FileCache.copyTo with an ending', () => {
+  it('treats a file that does not end as a whole file of its kind does as a miss', async () => {
+    const dir = await folder();
+    const cache = new FileCache(dir, '.pdf', '%%EOF');
+    await cache.put('whole', '%PDF-1.7\n…\n%%EOF\n');
+    await cache.put('cut', '%PDF-1.7\n… 12 0 obj <<');
+    await cache.put('tiny', 'E');
+    expect(await cache.copyTo('whole', path.join(dir, 'out-whole.pdf'))).toBe(true);
+    expect(await cache.copyTo('cut', path.join(dir, 'out-cut.pdf'))).toBe(false);
+    expect(await cache.copyTo('tiny', path.join(dir, 'out-tiny.pdf'))).toBe(false);
+    expect(await cache.copyTo('absent', path.join(dir, 'out-absent.pdf'))).toBe(false);
+  });
+});
