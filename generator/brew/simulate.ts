@@ -154,11 +154,11 @@ export function simulateHeatOn(setup: BrewSetup): HeatOnBrew {
       const points = log.checkpoints;
       // The last step boundary strictly before offS: the full run's step that reaches offS
       // starts there (a boundary at offS itself would not see the event's sign change).
-      let lo = 0;
-      let hi = points.length - 1;
       if (points.length === 0 || !(points[0]!.t < offS) || !(offS < result.endS)) {
         return runBrew(branched, c, null, null);
       }
+      let lo = 0;
+      let hi = points.length - 1;
       while (lo < hi) {
         const mid = (lo + hi + 1) >> 1;
         if (points[mid]!.t < offS) lo = mid;

@@ -74,7 +74,6 @@ export interface PlanRequest {
 interface Candidate {
   readonly startK: number;
   readonly levelIndex: number;
-  readonly heatOn: BrewResult;
   /** The heat-on run, kept so the off-heat search branches off it. */
   readonly run: HeatOnBrew;
 }
@@ -164,7 +163,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     lowestPeak = Math.min(lowestPeak, heatOn.peakGaugePa);
     if (heatOn.peakGaugePa > limitPa) return 'stop';
     if (heatOn.firstCoffeeS === null) return 'on';
-    candidates.push({ startK, levelIndex, heatOn, run: heatOnRun });
+    candidates.push({ startK, levelIndex, run: heatOnRun });
     const delivery = (heatOn.sputterS ?? Infinity) - heatOn.firstCoffeeS;
     return delivery < windowLow + SPUTTER_LEAD_S ? 'stop' : 'on';
   };
@@ -200,8 +199,8 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   }
 
   const offHeatWindow = (c: Candidate): [number, number] => {
-    const first = c.heatOn.firstCoffeeS!;
-    const latest = Math.min(first + windowHigh, (c.heatOn.sputterS ?? Infinity) - SPUTTER_LEAD_S);
+    const first = c.run.result.firstCoffeeS!;
+    const latest = Math.min(first + windowHigh, (c.run.result.sputterS ?? Infinity) - SPUTTER_LEAD_S);
     return [first + windowLow, latest];
   };
   const feasible = candidates.filter((c) => {
@@ -339,7 +338,7 @@ export function coarseStarts(
 }
 
 function heatOnScore(c: Candidate): number {
-  return c.heatOn.extraction?.inBandShare ?? 0;
+  return c.run.result.extraction?.inBandShare ?? 0;
 }
 
 /**
@@ -424,7 +423,7 @@ function better(a: Scored, b: Scored, presets: ReadonlySet<number>): boolean {
 /** True when, even on the gentlest candidates, the delivery finishes before the window opens. */
 function tooFast(candidates: readonly Candidate[], windowLowS: number): boolean {
   return candidates.every(
-    (c) => (c.heatOn.sputterS ?? Infinity) - c.heatOn.firstCoffeeS! < windowLowS + SPUTTER_LEAD_S,
+    (c) => (c.run.result.sputterS ?? Infinity) - c.run.result.firstCoffeeS! < windowLowS + SPUTTER_LEAD_S,
   );
 }
 
