@@ -1,5 +1,5 @@
 // Eleventy wiring only: folders, the generator's filters and the copied assets. The data
-// (computed card views) is added by generator/build/eleventy.ts when it runs Eleventy.
+// (computed card views) is added by generator/pipeline/eleventy.ts when it runs Eleventy.
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 

@@ -3,8 +3,8 @@
  * per card of the full build, and the two ratios against their targets.
  */
 import { resourceUsage } from 'node:process';
-import type { BuildResult } from '../generator/build/build-site.ts';
-import type { BuildStats } from '../generator/build/stats.ts';
+import type { BuildResult } from '../generator/pipeline/build-site.ts';
+import type { BuildStats } from '../generator/pipeline/stats.ts';
 import type { CatalogueSize } from './catalogue.ts';
 
 export interface Measured {

@@ -15,7 +15,7 @@
  *             `stovecard build --serve` does); the table shows the last
  *
  * Each build is buildSite with a PDF step as its extra step, as `stovecard build` runs it:
- * `site` (default), the build's incremental step on the workers (generator/build/pdf-step.ts),
+ * `site` (default), the build's incremental step on the workers (generator/pipeline/pdf-step.ts),
  * or `module`, the PDF module's own step (render/pdf/site-pdfs.ts pdfBuildStep: every PDF,
  * in one thread; its PDFs are not counted in the table). Prints a table and the ratios
  * full/floor (target ≤ 1.5) and rebuild/full (target ≤ 0.05). Timings are only compared
@@ -27,10 +27,10 @@ import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { availableParallelism, tmpdir } from 'node:os';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
-import { buildSite, type BuildResult, type BuildStep } from '../generator/build/build-site.ts';
-import { expandCards } from '../generator/build/cards.ts';
-import { sitePdfStep } from '../generator/build/pdf-step.ts';
-import { WorkerPool } from '../generator/build/pool.ts';
+import { buildSite, type BuildResult, type BuildStep } from '../generator/pipeline/build-site.ts';
+import { expandCards } from '../generator/pipeline/cards.ts';
+import { sitePdfStep } from '../generator/pipeline/pdf-step.ts';
+import { WorkerPool } from '../generator/pipeline/pool.ts';
 import { loadCatalogue } from '../generator/content/index.ts';
 import { pdfBuildStep } from '../generator/render/pdf/site-pdfs.ts';
 import { DEFAULT_SIZE, sizeForCards, stationCount, writeCatalogue } from './catalogue.ts';

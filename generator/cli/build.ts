@@ -1,8 +1,8 @@
 /** `stovecard build [--content DIR] [--out DIR] [--serve]`: the site of cards. */
-import { buildSite, type BuildResult } from '../build/build-site.ts';
-import { terminalProgress } from '../build/progress.ts';
-import { serveSite } from '../build/serve.ts';
-import { sitePdfStep } from '../build/pdf-step.ts';
+import { buildSite, type BuildResult } from '../pipeline/build-site.ts';
+import { terminalProgress } from '../pipeline/progress.ts';
+import { serveSite } from '../pipeline/serve.ts';
+import { sitePdfStep } from '../pipeline/pdf-step.ts';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
 import { UsageError } from './errors.ts';

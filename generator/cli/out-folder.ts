@@ -1,6 +1,6 @@
 /**
  * Where `stovecard build` may write. The build swaps a whole new folder in place of --out
- * (generator/build/swap.ts) and removes what was there, so --out must be a site an earlier
+ * (generator/pipeline/swap.ts) and removes what was there, so --out must be a site an earlier
  * build made, an empty folder, or a new one: never the content folder, the working folder
  * or one of their parents, never a file, never a folder of other things.
  */

@@ -6,7 +6,7 @@
 import { cp, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { buildSite, type BuildResult } from '../../generator/build/build-site.ts';
+import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
 import type { PaperSize } from '../../generator/content/types.ts';
 
 export const DEMO_CONTENT = fileURLToPath(new URL('../../content/', import.meta.url));

@@ -21,7 +21,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, expect, it } from 'vitest';
-import { buildSite } from '../../generator/build/build-site.ts';
+import { buildSite } from '../../generator/pipeline/build-site.ts';
 import { describeWithBrowser, openFile, openGuardedPage, type GuardedPage } from './chromium.ts';
 import { BUILD_ENV, DEMO_CONTENT } from './demo-builds.ts';
 import { compareImages, decodePng, encodePng } from './png.ts';

@@ -6,8 +6,8 @@ import { mkdtemp, readFile, readdir, rm, stat } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildSite, type BuildResult } from '../../generator/build/build-site.ts';
-import type { ProgressEvent } from '../../generator/build/progress.ts';
+import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
+import type { ProgressEvent } from '../../generator/pipeline/progress.ts';
 import { relativeHref } from '../../generator/render/paths.ts';
 import { pdfBuildStep } from '../../generator/render/pdf/site-pdfs.ts';
 

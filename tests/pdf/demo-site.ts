@@ -5,9 +5,9 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { planAll, siteData, type PlannedCard } from '../../generator/build/build-site.ts';
-import { expandCards, type CardJobs } from '../../generator/build/cards.ts';
-import { PlanCache } from '../../generator/build/plan-cache.ts';
+import { planAll, siteData, type PlannedCard } from '../../generator/pipeline/build-site.ts';
+import { expandCards, type CardJobs } from '../../generator/pipeline/cards.ts';
+import { PlanCache } from '../../generator/pipeline/plan-cache.ts';
 import { loadCatalogue } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
 import { setPdf, type SetPdf } from '../../generator/render/pdf/binder.ts';

@@ -115,7 +115,7 @@ export async function writeSitePdfs(
   return { files, ms: performance.now() - started };
 }
 
-/** buildSite's extra step (generator/build/build-site.ts BuildStep). */
+/** buildSite's extra step (generator/pipeline/build-site.ts BuildStep). */
 export async function pdfBuildStep(context: {
   readonly siteDir: string;
   readonly data: SiteData;

@@ -6,7 +6,7 @@ import {
   CACHE_GRACE_DAYS,
   FileCache,
   sweepCacheFolders,
-} from '../../generator/build/file-cache.ts';
+} from '../../generator/pipeline/file-cache.ts';
 
 const DAY_MS = 24 * 3600 * 1000;
 const folders: string[] = [];

@@ -11,7 +11,7 @@
  * A card page (templates/card.njk, insert.njk and their partials and layout) reads its
  * card and, of the global data, only `site`, `nav` and `index` (CARD_PAGE_GLOBALS);
  * Eleventy paginates the card lists one card per page, so a page rendered in a run with
- * fewer cards has the same bytes. tests/build/incremental.test.ts holds both to it: a
+ * fewer cards has the same bytes. tests/pipeline/incremental.test.ts holds both to it: a
  * template that starts reading another global must add it here.
  */
 import { mkdir, readFile } from 'node:fs/promises';

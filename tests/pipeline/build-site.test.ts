@@ -7,8 +7,8 @@ import { cp, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises'
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildSite, type BuildResult } from '../../generator/build/build-site.ts';
-import { expandCards } from '../../generator/build/cards.ts';
+import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
+import { expandCards } from '../../generator/pipeline/cards.ts';
 import {
   ContentErrors,
   formatContentErrors,

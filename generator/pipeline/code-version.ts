@@ -26,16 +26,16 @@ export const PLAN_SOURCES: readonly string[] = [
   'generator/numerics',
   'generator/planning',
   'generator/words/plan.ts',
-  'generator/build/plan-all.ts', // what of the catalogue a plan request carries
+  'generator/pipeline/plan-all.ts', // what of the catalogue a plan request carries
 ];
 
 /** … of the render code version (views, charts, drawings, PDFs). */
 export const RENDER_SOURCES: readonly string[] = [
   'generator/render',
   'generator/words',
-  'generator/build/site-data.ts', // what a view is given (its catalogue, its fingerprint)
-  'generator/build/render-cache.ts',
-  'generator/build/pdf-step.ts', // what a set's PDF is given
+  'generator/pipeline/site-data.ts', // what a view is given (its catalogue, its fingerprint)
+  'generator/pipeline/render-cache.ts',
+  'generator/pipeline/pdf-step.ts', // what a set's PDF is given
   'package-lock.json',
 ];
 
@@ -44,8 +44,8 @@ export const PAGE_SOURCES: readonly string[] = [
   'templates',
   '.eleventy.js',
   'generator/render/eleventy-setup.ts',
-  'generator/build/eleventy.ts',
-  'generator/build/pages.ts',
+  'generator/pipeline/eleventy.ts',
+  'generator/pipeline/pages.ts',
   'package-lock.json',
 ];
 

@@ -1,6 +1,6 @@
 /** expandCards: the sets of the demo site as station jobs, insert jobs and set outlines. */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { expandCards } from '../../generator/build/cards.ts';
+import { expandCards } from '../../generator/pipeline/cards.ts';
 import { loadCatalogue } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
 import { heatKindOf } from '../../generator/words/card.ts';

@@ -10,10 +10,10 @@ import { cp, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises'
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildSite, type BuildResult } from '../../generator/build/build-site.ts';
-import { writeSite } from '../../generator/build/eleventy.ts';
-import { CARD_PAGE_GLOBALS } from '../../generator/build/pages.ts';
-import { sitePdfStep } from '../../generator/build/pdf-step.ts';
+import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
+import { writeSite } from '../../generator/pipeline/eleventy.ts';
+import { CARD_PAGE_GLOBALS } from '../../generator/pipeline/pages.ts';
+import { sitePdfStep } from '../../generator/pipeline/pdf-step.ts';
 import { pdfBuildStep } from '../../generator/render/pdf/site-pdfs.ts';
 import type { SiteData } from '../../generator/render/site-view.ts';
 

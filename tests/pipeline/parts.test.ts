@@ -3,10 +3,10 @@ import { mkdtemp, mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promis
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildDate } from '../../generator/build/build-date.ts';
-import { planFromJson, planToJson, stableJson } from '../../generator/build/plan-cache.ts';
-import { terminalProgress } from '../../generator/build/progress.ts';
-import { swapIn, tempDirFor } from '../../generator/build/swap.ts';
+import { buildDate } from '../../generator/pipeline/build-date.ts';
+import { planFromJson, planToJson, stableJson } from '../../generator/pipeline/plan-cache.ts';
+import { terminalProgress } from '../../generator/pipeline/progress.ts';
+import { swapIn, tempDirFor } from '../../generator/pipeline/swap.ts';
 import { run } from '../../generator/cli/build.ts';
 import { UsageError } from '../../generator/cli/errors.ts';
 import type { CardPlan } from '../../generator/planning/types.ts';

@@ -3,8 +3,8 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildSite } from '../../generator/build/build-site.ts';
-import { serveSite, type SiteServer } from '../../generator/build/serve.ts';
+import { buildSite } from '../../generator/pipeline/build-site.ts';
+import { serveSite, type SiteServer } from '../../generator/pipeline/serve.ts';
 
 let root: string;
 let server: SiteServer;

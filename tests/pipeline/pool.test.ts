@@ -5,13 +5,13 @@
  * site made on the pool is compared with a one-thread build in incremental.test.ts.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runTask } from '../../generator/build/build-worker.ts';
-import { expandCards, type CardJobs } from '../../generator/build/cards.ts';
-import { allSettledOrThrow, mapConcurrent } from '../../generator/build/concurrent.ts';
-import { planRequestOf } from '../../generator/build/plan-all.ts';
-import { planToJson } from '../../generator/build/plan-cache.ts';
-import { WorkerPool } from '../../generator/build/pool.ts';
-import { cardCatalogue } from '../../generator/build/site-data.ts';
+import { runTask } from '../../generator/pipeline/build-worker.ts';
+import { expandCards, type CardJobs } from '../../generator/pipeline/cards.ts';
+import { allSettledOrThrow, mapConcurrent } from '../../generator/pipeline/concurrent.ts';
+import { planRequestOf } from '../../generator/pipeline/plan-all.ts';
+import { planToJson } from '../../generator/pipeline/plan-cache.ts';
+import { WorkerPool } from '../../generator/pipeline/pool.ts';
+import { cardCatalogue } from '../../generator/pipeline/site-data.ts';
 import { loadCatalogue } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
 import { planCard } from '../../generator/planning/plan.ts';
