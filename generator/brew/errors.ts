@@ -1,14 +1,27 @@
-/** Typed failures of the brew simulation. Wording lives in generator/words/brew.ts. */
-import { brewWords } from '../words/brew.ts';
+/**
+ * Typed failures of the brew simulation, as codes and facts. The words are
+ * generator/words/brew.ts, said by the CLI; `message` is for developers only.
+ */
+
+/** Why a setup cannot be brewed at all. */
+export type BrewSetupCode =
+  | 'boils-before-sealing'
+  | 'freezes'
+  | 'below-funnel-tube'
+  | 'no-air-space'
+  | 'negative-heat'
+  | 'non-positive-permeability'
+  | 'heat-on-run-with-off-time';
 
 /** The setup cannot be brewed at all (e.g. the water would boil before sealing). */
 export class BrewSetupError extends Error {
   override readonly name = 'BrewSetupError';
   constructor(
+    /** The BrewSetup field at fault, e.g. `startK`. */
     readonly field: string,
-    readonly problem: string,
+    readonly code: BrewSetupCode,
   ) {
-    super(brewWords.setup(field, problem));
+    super(`brew setup ${code} (${field})`);
   }
 }
 
@@ -19,6 +32,6 @@ export class BrewDidNotFinishError extends Error {
     readonly outcome: string,
     readonly atS: number,
   ) {
-    super(brewWords.didNotFinish(outcome, atS));
+    super(`brew did not finish: ${outcome} at ${atS} s`);
   }
 }

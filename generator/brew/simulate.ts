@@ -55,7 +55,7 @@ import { metalSpecificHeatJPerKgK } from '../physics/metals.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
 import { darcyBedResistance, poiseuilleTubeResistance } from '../physics/flow-resistance.ts';
 import { potGeometry, type PotGeometry } from './geometry.ts';
-import { BrewSetupError, BrewDidNotFinishError } from './errors.ts';
+import { BrewSetupError, BrewDidNotFinishError, type BrewSetupCode } from './errors.ts';
 import { summariseExtraction } from './extraction.ts';
 import type { BrewEvent, BrewEventKind, BrewResult, BrewSetup, SeriesPoint } from './types.ts';
 
@@ -142,7 +142,7 @@ export interface HeatOnBrew {
 
 export function simulateHeatOn(setup: BrewSetup): HeatOnBrew {
   if (setup.heatOffAtS !== undefined) {
-    throw new BrewSetupError('heatOffAtS', 'a heat-on run leaves the heat on: leave heatOffAtS out');
+    throw new BrewSetupError('heatOffAtS', 'heat-on-run-with-off-time');
   }
   const c = prepare(setup);
   const log: RunLog = { checkpoints: [], events: [], series: [], cupCurve: [] };
@@ -456,24 +456,24 @@ type InternalEvent =
 function prepare(setup: BrewSetup): Constants {
   const { pot, bed, room } = setup;
   const geometry = potGeometry(pot);
-  const check = (ok: boolean, field: string, problem: string): void => {
+  const check = (ok: boolean, field: string, problem: BrewSetupCode): void => {
     if (!ok) throw new BrewSetupError(field, problem);
   };
   const boilingNow = saturationPressurePa(Math.min(setup.startK, 647)) >= room.ambientPa;
-  check(!boilingNow, 'startK', 'the water would already boil at the room pressure');
-  check(setup.startK >= 274.15, 'startK', 'the water would freeze');
+  check(!boilingNow, 'startK', 'boils-before-sealing');
+  check(setup.startK >= 274.15, 'startK', 'freezes');
   check(
     setup.fillVolumeM3 > geometry.volumeAtTubeEndM3,
     'fillVolumeM3',
-    'the water does not reach the funnel tube',
+    'below-funnel-tube',
   );
   check(
     setup.fillVolumeM3 < 0.98 * pot.sealedVolumeM3,
     'fillVolumeM3',
-    'no air space is left in the base',
+    'no-air-space',
   );
-  check(setup.heatInputW >= 0, 'heatInputW', 'heat input must not be negative');
-  check(bed.permeabilityM2 > 0, 'permeabilityM2', 'permeability must be positive');
+  check(setup.heatInputW >= 0, 'heatInputW', 'negative-heat');
+  check(bed.permeabilityM2 > 0, 'permeabilityM2', 'non-positive-permeability');
 
   const startDensity = region1(setup.startK, room.ambientPa).densityKgM3;
   const airVolume = pot.sealedVolumeM3 - setup.fillVolumeM3;

@@ -1,6 +1,9 @@
-/** Typed failures of a calibration. Wording lives in generator/words/fit.ts. */
+/**
+ * Typed failures of a calibration, as codes and facts. The words are generator/words/fit.ts,
+ * said by the CLI (`stovecard fit`); `message` is for developers only.
+ */
+import type { BrewSetupCode } from '../brew/errors.ts';
 import type { SourceRef } from '../content/types.ts';
-import { fitWords } from '../words/fit.ts';
 
 /** A logged brew the simulation cannot run as written (e.g. filled below the funnel tube). */
 export class BrewNotSimulatedError extends Error {
@@ -8,8 +11,8 @@ export class BrewNotSimulatedError extends Error {
   constructor(
     readonly source: SourceRef,
     readonly field: string,
-    readonly problem: string,
+    readonly code: BrewSetupCode,
   ) {
-    super(fitWords.brewNotSimulated(source, field, problem));
+    super(`logged brew not simulated: ${code} (${source.file}:${source.line} ${field})`);
   }
 }

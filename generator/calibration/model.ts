@@ -87,6 +87,6 @@ function simulateOrExplain(brew: LoggedBrew, index: number, run: () => BrewResul
     return run();
   } catch (error) {
     if (!(error instanceof BrewSetupError)) throw error;
-    throw new BrewNotSimulatedError(brew.source, `brews[${index}]`, error.message);
+    throw new BrewNotSimulatedError(brew.source, `brews[${index}]`, error.code);
   }
 }

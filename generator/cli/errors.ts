@@ -1,6 +1,7 @@
 /** Turning failures into one clear line on stderr and an exit code. */
 import { ContentErrors } from '../content/index.ts';
 import { BrewSetupError } from '../brew/errors.ts';
+import { brewWords } from '../words/brew.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
 
 /** Wrong flags or arguments: the message says what to type instead. */
@@ -24,10 +25,13 @@ export function reportError(error: unknown): number {
     process.stderr.write(lines.map((line) => `stovecard: ${line}\n`).join(''));
     return 2;
   }
+  if (error instanceof BrewSetupError) {
+    process.stderr.write(`stovecard: ${brewWords.setup(error.field, error.code)}\n`);
+    return 2;
+  }
   if (
     error instanceof UsageError ||
     error instanceof InputError ||
-    error instanceof BrewSetupError ||
     error instanceof OutOfRangeError
   ) {
     process.stderr.write(`stovecard: ${error.message}\n`);

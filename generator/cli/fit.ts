@@ -13,6 +13,7 @@ import { readdir, readFile, rename, stat, unlink, writeFile } from 'node:fs/prom
 import { basename, dirname, extname, join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
 import { BrewNotSimulatedError } from '../calibration/errors.ts';
+import { brewWords } from '../words/brew.ts';
 import { fitLog, type FitInput } from '../calibration/fit.ts';
 import type { Observation } from '../calibration/observations.ts';
 import type { Parameter } from '../calibration/parameters.ts';
@@ -82,7 +83,11 @@ export async function run(argv: string[]): Promise<number> {
   try {
     report = fitLog(loaded);
   } catch (error) {
-    if (error instanceof BrewNotSimulatedError) throw new InputError(error.message);
+    if (error instanceof BrewNotSimulatedError) {
+      throw new InputError(
+        fitWords.brewNotSimulated(error.source, error.field, brewWords.setupProblem(error.code)),
+      );
+    }
     throw error;
   }
   const elapsedS = (performance.now() - started) / 1000;

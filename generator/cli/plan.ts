@@ -4,6 +4,7 @@ import { planCard } from '../planning/plan.ts';
 import { maxSafeFill } from '../planning/fill.ts';
 import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
+import { refusalText, warningText } from '../render/plan-text.ts';
 import { cliWords } from '../words/cli.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
@@ -80,9 +81,12 @@ export function planJson(plan: CardPlan) {
     coffee: plan.coffeeId,
     stove: plan.stoveId,
     boilingC: round(toCelsius(plan.boilingK), 1),
-    warnings: plan.warnings,
+    warnings: plan.warnings.map((w) => warningText(w, 'metric')),
   };
-  if (plan.refused) return { ...context, refused: { reason: plan.refused.reason, suggestion: plan.refused.suggestion, code: plan.refused.code } };
+  if (plan.refused) {
+    const text = refusalText(plan.refused, 'metric');
+    return { ...context, refused: { code: text.code, reason: text.reason, suggestion: text.suggestion, facts: plan.refused.facts } };
+  }
   return {
     ...context,
     fillMl: round(toMl(plan.fillM3)),
@@ -115,7 +119,10 @@ export function planJson(plan: CardPlan) {
 
 function planSummary(plan: CardPlan): string {
   const j = planJson(plan);
-  if (plan.refused) return `REFUSED: ${plan.refused.reason}\nFix: ${plan.refused.suggestion}\n`;
+  if (plan.refused) {
+    const text = refusalText(plan.refused, 'metric');
+    return `REFUSED: ${text.reason}\nFix: ${text.suggestion}\n`;
+  }
   const p = j as Exclude<ReturnType<typeof planJson>, { refused: object }>;
   if (!('fillMl' in p)) return '';
   return [

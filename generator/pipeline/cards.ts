@@ -9,7 +9,7 @@
  * planned once.
  */
 import type { CardRequest, Catalogue } from '../content/types.ts';
-import { heatKindOf, type HeatKind } from '../words/card.ts';
+import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
 import { stationSlug } from '../render/paths.ts';
 
 export interface StationCardJob {

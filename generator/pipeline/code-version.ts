@@ -2,9 +2,9 @@
  * Code versions the caches are keyed by: sha256 over the source files whose code decides
  * what a cached item contains, so any edit there invalidates exactly those items.
  *
- *   plan     the simulation, physics, numerics, the planner and the planner's words (which
- *            are copied into refusals and warnings); loader, renderer or template edits
- *            keep every plan
+ *   plan     the simulation, physics, numerics and the planner; a plan holds codes and SI
+ *            facts, no words, so wording, loader, renderer or template edits keep every
+ *            plan (tests/pipeline/code-version.test.ts holds generator/words out of it)
  *   render   the renderers (views, charts, drawings, PDFs), every word they print, the
  *            build code that hands them their input, and the installed packages
  *            (package-lock.json: vega, qrcode, pdfkit, the fonts)
@@ -25,7 +25,6 @@ export const PLAN_SOURCES: readonly string[] = [
   'generator/physics',
   'generator/numerics',
   'generator/planning',
-  'generator/words/plan.ts',
   'generator/pipeline/plan-all.ts', // what of the catalogue a plan request carries
 ];
 

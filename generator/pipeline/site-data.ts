@@ -24,10 +24,13 @@ import {
   methodView,
   setViews,
   siteInfo,
+  siteNav,
   troubleshootingView,
+  type MovesView,
   type SiteData,
 } from '../render/site-view.ts';
-import { cardWords } from '../words/card.ts';
+import { movesView } from '../render/moves.ts';
+import { sensitivityMoves } from '../planning/sensitivity.ts';
 import type { CardJobs, InsertCardJob, StationCardJob } from './cards.ts';
 import { renderCodeVersion } from './code-version.ts';
 import { IO_LIMIT, mapConcurrent } from './concurrent.ts';
@@ -43,7 +46,6 @@ import {
   viewSite,
   type CachedView,
 } from './render-cache.ts';
-import { sensitivityMoves } from './sensitivity.ts';
 import { emptyStats, type BuildStats } from './stats.ts';
 
 export interface RenderOptions {
@@ -240,17 +242,27 @@ export async function renderSite(
   const example = methodExample(catalogue, jobs, plans, stations);
   const data: SiteData = {
     site: siteInfo(catalogue, builtOn),
-    nav: cardWords.nav,
+    nav: siteNav(),
     index: indexView(catalogue),
     sets: setViews(jobs.sets, stations, inserts, catalogue.site.baseUrl),
     stationCards: [...stations.values()],
     insertCards: [...inserts.values()],
     method: methodView(example, catalogue),
-    troubleshooting: troubleshootingView(
-      example ? sensitivityMoves(example.plan, catalogue) : null,
-    ),
+    troubleshooting: troubleshootingView(example ? exampleMoves(example.plan, catalogue) : null),
   };
   return { data, viewTexts };
+}
+
+/** The troubleshooting table for the method page's example card, in the site's units. */
+function exampleMoves(plan: AcceptedPlan, catalogue: Catalogue): MovesView | null {
+  const rows = sensitivityMoves(plan, catalogue);
+  if (rows === null) return null;
+  const names = {
+    pot: catalogue.pots.get(plan.potId)!.name,
+    coffee: catalogue.coffees.get(plan.coffeeId)!.name,
+    stove: catalogue.stoves.get(plan.stoveId)!.name,
+  };
+  return movesView(rows, names, catalogue.site.units);
 }
 
 /** The data of every page: card views, set lists, method and troubleshooting. */

@@ -3,7 +3,8 @@
  * warning on the card and in the build log rather than a silent extrapolation.
  */
 import type { PlanRequest } from './plan.ts';
-import { planWords } from '../words/plan.ts';
+import { distinctWarnings, planNotices } from './notices.ts';
+import type { PlanWarning } from './types.ts';
 import { potGeometry } from '../brew/geometry.ts';
 
 /** Checked ranges (SI). Permeability: the stovetop beds our checks cover. */
@@ -16,11 +17,11 @@ export const CHECKED = {
 } as const;
 
 /** Warnings for a request; `levelIndex` names the chosen level (null: before choosing). */
-export function modelRangeWarnings(request: PlanRequest, levelIndex: number | null): string[] {
-  const warnings: string[] = [];
+export function modelRangeWarnings(request: PlanRequest, levelIndex: number | null): PlanWarning[] {
+  const warnings: PlanWarning[] = [];
   const outside = (what: keyof typeof CHECKED, value: number): void => {
     const [lo, hi] = CHECKED[what];
-    if (value < lo || value > hi) warnings.push(planWords.outsideCheckedRange(what, value, lo, hi));
+    if (value < lo || value > hi) warnings.push(planNotices.outsideCheckedRange(what, value, lo, hi));
   };
   outside('permeabilityM2', request.coffee.bed.permeabilityM2);
   const level = levelIndex === null ? undefined : request.stove.levels[levelIndex];
@@ -29,7 +30,7 @@ export function modelRangeWarnings(request: PlanRequest, levelIndex: number | nu
   outside('sealedVolumeM3', request.pot.model.sealedVolumeM3);
   outside('ambientK', request.room.ambientK);
   if (request.fillM3 !== undefined && request.fillM3 < 2 * potGeometry(request.pot.model).volumeAtTubeEndM3) {
-    warnings.push(planWords.smallFill());
+    warnings.push(planNotices.smallFill());
   }
-  return [...new Set(warnings)];
+  return distinctWarnings(warnings);
 }

@@ -24,7 +24,7 @@ import { maxSafeFill, fillHeights, VALVE_MARGIN_M } from './fill.ts';
 import { brewSetup, roomModel, type Room } from './setup.ts';
 import { modelRangeWarnings } from './model-range.ts';
 import { deliveryWindowS } from './delivery.ts';
-import { planWords } from '../words/plan.ts';
+import { planNotices } from './notices.ts';
 import type {
   AcceptedPlan,
   CardPlan,
@@ -109,7 +109,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   const refuse = (refusal: Refusal): CardPlan => ({ ...context, refused: refusal });
 
   if (stove.stoveKind === 'induction' && !pot.inductionReady) {
-    return refuse(planWords.inductionNeedsMagneticBase(pot.name));
+    return refuse(planNotices.inductionNeedsMagneticBase(pot.name));
   }
   // A requested fill must stay below the valve from whatever start it is poured at.
   const starts = startCandidates(request, context.boilingK).filter(
@@ -119,7 +119,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   );
   if (starts.length === 0) {
     const limit = maxSafeFill(pot.model, room.ambientK, room.ambientPa);
-    return refuse(planWords.fillAboveValve(request.fillM3!, limit.maxFillM3, VALVE_MARGIN_M));
+    return refuse(planNotices.fillAboveValve(request.fillM3!, limit.maxFillM3, VALVE_MARGIN_M));
   }
   const presets = new Set(request.kettlePresetsK ?? []);
 
@@ -193,9 +193,9 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   }
   if (candidates.length === 0) {
     if (lowestPeak > limitPa) {
-      return refuse(planWords.pressureNearValve(lowestPeak, pot.model.valveOpeningGaugePa, coffee.grind));
+      return refuse(planNotices.pressureNearValve(lowestPeak, pot.model.valveOpeningGaugePa, coffee.grind));
     }
-    return refuse(planWords.noDelivery());
+    return refuse(planNotices.noDelivery());
   }
 
   const offHeatWindow = (c: Candidate): [number, number] => {
@@ -208,7 +208,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     return latest >= earliest;
   });
   if (feasible.length === 0) {
-    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+    return refuse(planNotices.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
   const refined: Scored[] = [];
   const byHeatOnScore = [...feasible].sort((a, b) => heatOnScore(b) - heatOnScore(a));
@@ -223,7 +223,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     }
   }
   if (refined.length === 0) {
-    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+    return refuse(planNotices.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
 
   const printable = firstPrintable(
@@ -233,7 +233,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     limitPa,
   );
   if (printable === null) {
-    return refuse(planWords.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+    return refuse(planNotices.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
   }
   const { chosen, brew } = printable;
   const coldBrew = run(room.ambientK, chosen.levelIndex);
@@ -251,7 +251,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     ...context,
     warnings: [
       ...modelRangeWarnings(request, chosen.levelIndex),
-      ...(extraction.inBandShare < LOW_SHARE ? [planWords.coolCup(extraction.inBandShare)] : []),
+      ...(extraction.inBandShare < LOW_SHARE ? [planNotices.coolCup(extraction.inBandShare)] : []),
     ],
     refused: null,
     fillM3: fill,

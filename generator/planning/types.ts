@@ -3,6 +3,7 @@
  * SI throughout. Renderers format it; they never compute physics.
  */
 import type { BrewResult } from '../brew/types.ts';
+import type { GrindClass } from '../content/types.ts';
 
 /** A timing with its spread from the model's sensitivity (permeability ±30 %, heat ±10 %). */
 export interface TimeRange {
@@ -11,20 +12,47 @@ export interface TimeRange {
   readonly highS: number;
 }
 
-export type RefusalCode =
-  | 'fill-above-valve'
-  | 'pressure-near-valve'
-  | 'induction-needs-magnetic-base'
-  | 'no-delivery'
-  | 'no-plan-fits';
+/**
+ * Why no recipe is printed, as a code and SI facts. The words a barista reads are made at
+ * the edges (generator/render/plan-text.ts with generator/words/), so a cached plan holds
+ * no language and no unit system.
+ */
+export type Refusal =
+  | { readonly code: 'induction-needs-magnetic-base'; readonly facts: { readonly potName: string } }
+  | {
+      readonly code: 'fill-above-valve';
+      readonly facts: { readonly askedM3: number; readonly limitM3: number; readonly marginM: number };
+    }
+  | {
+      readonly code: 'pressure-near-valve';
+      readonly facts: { readonly peakPa: number; readonly valvePa: number; readonly grind: GrindClass };
+    }
+  | { readonly code: 'no-delivery'; readonly facts: Record<string, never> }
+  | {
+      readonly code: 'no-plan-fits';
+      readonly facts: { readonly lowS: number; readonly highS: number; readonly tooFast: boolean };
+    };
 
-export interface Refusal {
-  readonly code: RefusalCode;
-  /** Why no recipe is printed, in words a barista reads. */
-  readonly reason: string;
-  /** The nearest change that would fix it. */
-  readonly suggestion: string;
-}
+export type RefusalCode = Refusal['code'];
+
+/** An input the model was checked for, by name (SI values; see model-range.ts). */
+export type CheckedQuantity = 'permeabilityM2' | 'heatToPotW' | 'altitudeM' | 'sealedVolumeM3' | 'ambientK';
+
+/** Something a card should say beside its recipe, as a code and SI facts. */
+export type PlanWarning =
+  | {
+      readonly code: 'outside-checked-range';
+      readonly facts: {
+        readonly quantity: CheckedQuantity;
+        readonly value: number;
+        readonly low: number;
+        readonly high: number;
+      };
+    }
+  | { readonly code: 'cool-cup'; readonly facts: { readonly inBandShare: number } }
+  | { readonly code: 'small-fill'; readonly facts: Record<string, never> };
+
+export type PlanWarningCode = PlanWarning['code'];
 
 export interface PlanContext {
   readonly potId: string;
@@ -37,7 +65,7 @@ export interface PlanContext {
   readonly boilingK: number;
   readonly valveOpeningGaugePa: number;
   /** Model-range warnings (inputs outside what the model was checked for). */
-  readonly warnings: readonly string[];
+  readonly warnings: readonly PlanWarning[];
 }
 
 export interface RefusedPlan extends PlanContext {

@@ -19,7 +19,8 @@ import type {
   UnitSystem,
 } from '../content/types.ts';
 import type { AcceptedPlan, CardPlan, RefusedPlan } from '../planning/types.ts';
-import { cardWords, heatKindOf, type HeatKind } from '../words/card.ts';
+import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
+import { cardWords } from '../words/card.ts';
 import { cupChartSpec, renderChartSvg } from './chart.ts';
 import { crossSection, type CrossSectionLayout } from './cross-section.ts';
 import {
@@ -40,12 +41,13 @@ import {
   type TimeRangeText,
 } from './format.ts';
 import { insertPaths, stationPaths, type CardPaths } from './paths.ts';
+import { refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
 
 export type { Quantity, TimeRangeText } from './format.ts';
 export type { CardPaths } from './paths.ts';
 export type { CrossSectionLayout } from './cross-section.ts';
-export type { HeatKind } from '../words/card.ts';
+export type { HeatKind } from '../content/heat-kind.ts';
 
 /** What the build passes in for every card. */
 export interface CardViewOptions {
@@ -473,15 +475,16 @@ async function recipe(
   };
 }
 
-function refusal(plan: RefusedPlan): RefusalBlock {
+function refusal(plan: RefusedPlan, units: UnitSystem): RefusalBlock {
   const words = cardWords.refusal;
+  const text = refusalText(plan.refused, units);
   return {
     heading: words.heading,
     note: words.note,
     whyLabel: words.why,
-    reason: plan.refused.reason,
+    reason: text.reason,
     changeLabel: words.change,
-    suggestion: plan.refused.suggestion,
+    suggestion: text.suggestion,
   };
 }
 
@@ -508,8 +511,8 @@ export async function stationCardView(
     page: pageSetup(units, paper),
     paths,
     recipe: plan.refused === null ? await recipe(plan, e, catalogue, units) : null,
-    refusal: plan.refused === null ? null : refusal(plan),
-    warnings: warnings(plan.warnings),
+    refusal: plan.refused === null ? null : refusal(plan, units),
+    warnings: warnings(plan.warnings.map((w) => warningText(w, units))),
     cautions: cautions(),
     footer: await footer(catalogue, paths, options),
   };
@@ -570,10 +573,11 @@ function insertRow(
 function insertWarnings(
   rows: readonly InsertRow[],
   inputs: InsertCardInput['rows'],
+  units: UnitSystem,
 ): Warnings | null {
   const byText = new Map<string, string[]>();
   inputs.forEach((input, i) => {
-    for (const text of input.plan.warnings) {
+    for (const text of input.plan.warnings.map((w) => warningText(w, units))) {
       const names = byText.get(text) ?? [];
       names.push(cardWords.insert.rowName(rows[i]!.cupsLabel, rows[i]!.heatLabel));
       byText.set(text, names);
@@ -616,7 +620,7 @@ export async function insertCardView(
     webLine: paths.webUrl ? words.web(paths.webUrl) : null,
     page: pageSetup(units, paper),
     paths,
-    warnings: insertWarnings(rows, input.rows),
+    warnings: insertWarnings(rows, input.rows, units),
     cautions: cautions(),
     footer: await footer(catalogue, paths, options),
   };

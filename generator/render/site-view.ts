@@ -134,6 +134,11 @@ const FACE_CSS: Record<FontFace, { weight: string; style: string }> = {
 /** Where the build copies the fonts, site-relative. */
 export const FONTS_DIR = 'assets/fonts';
 
+/** The links at the top of every page. */
+export function siteNav(): SiteData['nav'] {
+  return cardWords.nav;
+}
+
 export function siteInfo(catalogue: Catalogue, builtOn: string): SiteInfo {
   const site = catalogue.site;
   return {

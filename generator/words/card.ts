@@ -4,7 +4,8 @@
  * their units, from generator/render/format.ts); nothing here converts or rounds.
  * Tests assert through these same factories, so the wording can change here alone.
  */
-import type { GrindClass, StoveKind } from '../content/types.ts';
+import type { HeatKind } from '../content/heat-kind.ts';
+import type { GrindClass } from '../content/types.ts';
 import type { RefusalCode } from '../planning/types.ts';
 
 const grindNames: Record<GrindClass, string> = {
@@ -13,16 +14,6 @@ const grindNames: Record<GrindClass, string> = {
   medium: 'medium',
   'medium-coarse': 'medium-coarse',
   coarse: 'coarse',
-};
-
-/** The three kinds of heat an insert card is laid out by. */
-export type HeatKind = 'gas' | 'electric' | 'induction';
-
-export const heatKindOf: Record<StoveKind, HeatKind> = {
-  gas: 'gas',
-  'electric-coil': 'electric',
-  radiant: 'electric',
-  induction: 'induction',
 };
 
 const heatKindNames: Record<HeatKind, string> = {

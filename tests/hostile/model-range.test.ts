@@ -10,7 +10,8 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CHECKED } from '../../generator/planning/model-range.ts';
 import { buildWords } from '../../generator/words/card.ts';
-import { planWords } from '../../generator/words/plan.ts';
+import { planNotices } from '../../generator/planning/notices.ts';
+import { warningText } from '../../generator/render/plan-text.ts';
 import { lines, runMainIn, type CliRun } from './cli-run.ts';
 import { demoCopy } from './site-tree.ts';
 
@@ -30,13 +31,18 @@ const slug = (c: { pot: string; coffee: string; stove: string }) =>
   `${c.pot}--${c.coffee}--${c.stove}`;
 
 const expected = {
-  permeability: planWords.outsideCheckedRange(
-    'permeabilityM2',
-    OPEN_BED_M2,
-    ...CHECKED.permeabilityM2,
+  permeability: warningText(
+    planNotices.outsideCheckedRange('permeabilityM2', OPEN_BED_M2, ...CHECKED.permeabilityM2),
+    'metric',
   ),
-  power: planWords.outsideCheckedRange('heatToPotW', HOT_PLATE_W, ...CHECKED.heatToPotW),
-  altitude: planWords.outsideCheckedRange('altitudeM', ALTITUDE_M, ...CHECKED.altitudeM),
+  power: warningText(
+    planNotices.outsideCheckedRange('heatToPotW', HOT_PLATE_W, ...CHECKED.heatToPotW),
+    'metric',
+  ),
+  altitude: warningText(
+    planNotices.outsideCheckedRange('altitudeM', ALTITUDE_M, ...CHECKED.altitudeM),
+    'metric',
+  ),
 };
 
 let root: string;

@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { expandCards } from '../../generator/pipeline/cards.ts';
 import { loadCatalogue } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
-import { heatKindOf } from '../../generator/words/card.ts';
+import { heatKindOf } from '../../generator/content/heat-kind.ts';
 
 let catalogue: Catalogue;
 beforeAll(async () => {

@@ -6,7 +6,7 @@ import { coffeeEntry, potEntry, seaLevel, stoveEntry } from './entries.ts';
 
 const C = 273.15;
 const accepted = (plan: CardPlan): AcceptedPlan => {
-  if (plan.refused) throw new Error(`expected a recipe, got a refusal: ${plan.refused.reason}`);
+  if (plan.refused) throw new Error(`expected a recipe, got a refusal: ${plan.refused.code}`);
   return plan;
 };
 

@@ -12,14 +12,14 @@ import { brewSetup, roomModel } from '../../generator/planning/setup.ts';
 import { saturationTemperatureK } from '../../generator/physics/if97-region4.ts';
 import { ambientPressurePa } from '../../generator/physics/atmosphere.ts';
 import type { AcceptedPlan, CardPlan } from '../../generator/planning/types.ts';
-import { planWords } from '../../generator/words/plan.ts';
+import { planNotices } from '../../generator/planning/notices.ts';
 import { coffeeEntry, potEntry, seaLevel, stoveEntry } from './entries.ts';
 
 const C = 273.15;
 /** A gas ring from a simmer (~100 W reaching the pot) to a strong flame. */
 const gasRing = stoveEntry([100, 130, 160, 200, 250, 300, 400]);
 const accepted = (plan: CardPlan): AcceptedPlan => {
-  if (plan.refused) throw new Error(`expected a recipe, got a refusal: ${plan.refused.reason}`);
+  if (plan.refused) throw new Error(`expected a recipe, got a refusal: ${plan.refused.code}`);
   return plan;
 };
 const typical = accepted(
@@ -119,7 +119,9 @@ describe('planCard refusals (a reason and a fix, never a recipe)', () => {
       fillM3: limit * 1.15,
     });
     expect(plan.refused?.code).toBe('fill-above-valve');
-    expect(plan.refused?.suggestion).toMatch(/at most \d+ mL/);
+    if (plan.refused?.code !== 'fill-above-valve') return;
+    expect(plan.refused.facts.askedM3).toBe(limit * 1.15);
+    expect(plan.refused.facts.limitM3).toBeCloseTo(limit, 12);
   });
 
   it('refuses a bed so tight the pressure nears the valve, suggesting a coarser grind', () => {
@@ -130,7 +132,9 @@ describe('planCard refusals (a reason and a fix, never a recipe)', () => {
       room: seaLevel,
     });
     expect(plan.refused?.code).toBe('pressure-near-valve');
-    expect(plan.refused?.suggestion).toContain('coarser');
+    if (plan.refused?.code !== 'pressure-near-valve') return;
+    expect(plan.refused.facts.grind).toBe('fine');
+    expect(plan.refused.facts.peakPa).toBeGreaterThan(plan.refused.facts.valvePa / 2);
   });
 
   it('refuses an aluminium pot on induction, and accepts it with an induction plate', () => {
@@ -141,7 +145,7 @@ describe('planCard refusals (a reason and a fix, never a recipe)', () => {
       stove: induction,
       room: seaLevel,
     });
-    expect(plan.refused).toEqual(planWords.inductionNeedsMagneticBase(potEntry().name));
+    expect(plan.refused).toEqual(planNotices.inductionNeedsMagneticBase(potEntry().name));
     const plated = planCard({
       pot: potEntry({}, { inductionReady: true }),
       coffee: coffeeEntry(),

@@ -7,6 +7,7 @@ import type { Catalogue } from '../../generator/content/types.ts';
 import type { AcceptedPlan, RefusedPlan } from '../../generator/planning/types.ts';
 import { insertCardView, stationCardView } from '../../generator/render/card-view.ts';
 import { crossSection } from '../../generator/render/cross-section.ts';
+import { refusalText } from '../../generator/render/plan-text.ts';
 import { cardWords } from '../../generator/words/card.ts';
 import { OPTIONS, demoCatalogue, firstAcceptedPlan, plan, refusedPlan } from './demo.ts';
 
@@ -141,8 +142,9 @@ describe('stationCardView(refused plan)', () => {
   it('prints why and what to change, the cautions, and no recipe', async () => {
     const view = await stationCardView(refused, catalogue, OPTIONS);
     expect(view.recipe).toBeNull();
-    expect(view.refusal!.reason).toBe(refused.refused.reason);
-    expect(view.refusal!.suggestion).toBe(refused.refused.suggestion);
+    const text = refusalText(refused.refused, 'metric');
+    expect(view.refusal!.reason).toBe(text.reason);
+    expect(view.refusal!.suggestion).toBe(text.suggestion);
     expect(view.cautions.items.length).toBeGreaterThan(5);
     expect(JSON.stringify(view)).not.toMatch(/"fillVolume"|"dose"/);
   });
@@ -166,7 +168,7 @@ describe('stationCardView(refused plan)', () => {
     const view = await stationCardView(p, tight, OPTIONS);
     expect((view.recipe === null) !== (view.refusal === null)).toBe(true);
     expect(p.refused).not.toBeNull();
-    expect(view.refusal!.reason).toBe(p.refused!.reason);
+    expect(view.refusal!.reason).toBe(refusalText(p.refused!, 'metric').reason);
   });
 });
 

@@ -3,41 +3,52 @@
  * with one input changed at a time (grind as bed permeability ±30 %, a fifth less water,
  * one heat setting up or down, cold water instead of hot), everything else as the card
  * says, including the moment the pot comes off the heat. Each row is one brew simulation.
+ * Returns codes and SI facts; generator/render/moves.ts words and formats them.
  */
 import { BrewDidNotFinishError, BrewSetupError } from '../brew/errors.ts';
 import { simulateBrew } from '../brew/simulate.ts';
 import type { BrewResult } from '../brew/types.ts';
 import type { Catalogue } from '../content/types.ts';
-import { brewSetup, roomModel } from '../planning/setup.ts';
-import type { AcceptedPlan } from '../planning/types.ts';
-import { clock, pressure, share, temperature } from '../render/format.ts';
-import type { MoveRow, MovesView } from '../render/site-view.ts';
-import { troubleshootingWords } from '../words/card.ts';
+import { brewSetup, roomModel } from './setup.ts';
+import type { AcceptedPlan } from './types.ts';
+
+/** The one input a row changes ('baseline': the card's own recipe). */
+export type MoveCode = 'baseline' | 'finer' | 'coarser' | 'less-water' | 'less-heat' | 'more-heat' | 'cold-start';
 
 interface Variant {
-  readonly change: string;
+  readonly change: MoveCode;
   readonly permeabilityScale?: number;
   readonly fillScale?: number;
   readonly levelStep?: number;
   readonly cold?: boolean;
 }
 
-export function sensitivityMoves(plan: AcceptedPlan, catalogue: Catalogue): MovesView | null {
+const VARIANTS: readonly Variant[] = [
+  { change: 'baseline' },
+  { change: 'finer', permeabilityScale: 0.7 },
+  { change: 'coarser', permeabilityScale: 1.3 },
+  { change: 'less-water', fillScale: 0.8 },
+  { change: 'less-heat', levelStep: -1 },
+  { change: 'more-heat', levelStep: 1 },
+  { change: 'cold-start', cold: true },
+];
+
+/** One re-simulated brew, SI. */
+export interface MoveFacts {
+  readonly change: MoveCode;
+  /** null: no coffee before the off-heat time. */
+  readonly firstCoffeeS: number | null;
+  readonly meanK: number | null;
+  readonly inBandShare: number | null;
+  readonly peakGaugePa: number;
+}
+
+/** The rows that could be simulated (a level beyond the knob's ends is left out); null below two. */
+export function sensitivityMoves(plan: AcceptedPlan, catalogue: Catalogue): MoveFacts[] | null {
   const pot = catalogue.pots.get(plan.potId)!;
   const coffee = catalogue.coffees.get(plan.coffeeId)!;
   const stove = catalogue.stoves.get(plan.stoveId)!;
-  const units = catalogue.site.units;
   const room = roomModel(catalogue.site.room);
-  const words = troubleshootingWords.moves;
-  const variants: Variant[] = [
-    { change: words.baseline },
-    { change: words.finer, permeabilityScale: 0.7 },
-    { change: words.coarser, permeabilityScale: 1.3 },
-    { change: words.lessWater, fillScale: 0.8 },
-    { change: words.lessHeat, levelStep: -1 },
-    { change: words.moreHeat, levelStep: 1 },
-    { change: words.coldStart, cold: true },
-  ];
 
   const simulate = (v: Variant): BrewResult | null => {
     const level = stove.levels[plan.levelIndex + (v.levelStep ?? 0)];
@@ -62,25 +73,18 @@ export function sensitivityMoves(plan: AcceptedPlan, catalogue: Catalogue): Move
     }
   };
 
-  const rows: MoveRow[] = [];
-  for (const variant of variants) {
+  const rows: MoveFacts[] = [];
+  for (const variant of VARIANTS) {
     const result = simulate(variant);
     if (!result) continue;
     const e = result.extraction;
     rows.push({
       change: variant.change,
-      firstCoffee:
-        result.firstCoffeeS === null ? troubleshootingWords.noCoffee : clock(result.firstCoffeeS),
-      meanTemperature: e ? temperature(e.meanK, units).text : '—',
-      inBand: e ? share(e.inBandShare).text : '—',
-      peak: pressure(result.peakGaugePa, units).text,
+      firstCoffeeS: result.firstCoffeeS,
+      meanK: e ? e.meanK : null,
+      inBandShare: e ? e.inBandShare : null,
+      peakGaugePa: result.peakGaugePa,
     });
   }
-  if (rows.length < 2) return null;
-  return {
-    heading: troubleshootingWords.movesHeading,
-    intro: troubleshootingWords.movesIntro(pot.name, coffee.name, stove.name),
-    columns: troubleshootingWords.movesColumns,
-    rows,
-  };
+  return rows.length < 2 ? null : rows;
 }

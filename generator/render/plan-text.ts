@@ -1,0 +1,67 @@
+/**
+ * A plan's refusal and warnings in words: the planner's codes and SI facts formatted in
+ * the output's unit system (format.ts) and put into sentences (generator/words/plan.ts).
+ * The CLI and the card views both speak through here, so a card and `stovecard plan`
+ * say the same thing.
+ */
+import type { UnitSystem } from '../content/types.ts';
+import type { CheckedQuantity, PlanWarning, Refusal } from '../planning/types.ts';
+import { planWords, type RefusalText } from '../words/plan.ts';
+import { altitude, fillVolume, lengthDown, pressure, quantity, share, temperature, waterVolume } from './format.ts';
+
+export function refusalText(refusal: Refusal, units: UnitSystem): RefusalText {
+  switch (refusal.code) {
+    case 'induction-needs-magnetic-base':
+      return planWords.inductionNeedsMagneticBase(refusal.facts.potName);
+    case 'fill-above-valve': {
+      const f = refusal.facts;
+      return planWords.fillAboveValve(
+        waterVolume(f.askedM3, units).text,
+        fillVolume(f.limitM3, units).text,
+        lengthDown(f.marginM, units).text,
+      );
+    }
+    case 'pressure-near-valve': {
+      const f = refusal.facts;
+      return planWords.pressureNearValve(pressure(f.peakPa, units).text, pressure(f.valvePa, units).text, f.grind);
+    }
+    case 'no-delivery':
+      return planWords.noDelivery();
+    case 'no-plan-fits': {
+      const f = refusal.facts;
+      return planWords.noPlanFits(seconds(f.lowS), seconds(f.highS), f.tooFast);
+    }
+  }
+}
+
+export function warningText(warning: PlanWarning, units: UnitSystem): string {
+  switch (warning.code) {
+    case 'outside-checked-range': {
+      const f = warning.facts;
+      const say = (v: number): string => checkedValue(f.quantity, v, units);
+      return planWords.outsideCheckedRange(f.quantity, say(f.value), say(f.low), say(f.high));
+    }
+    case 'cool-cup':
+      return planWords.coolCup(share(warning.facts.inBandShare).text);
+    case 'small-fill':
+      return planWords.smallFill();
+  }
+}
+
+const seconds = (s: number): string => quantity(s, 0, 's').text;
+
+/** A checked input in the output's units, to three significant digits where it has no unit choice. */
+function checkedValue(what: CheckedQuantity, value: number, units: UnitSystem): string {
+  switch (what) {
+    case 'permeabilityM2':
+      return `${value.toPrecision(2)}\u00a0m²`;
+    case 'heatToPotW':
+      return quantity(value, 0, 'W').text;
+    case 'altitudeM':
+      return altitude(value, units).text;
+    case 'sealedVolumeM3':
+      return waterVolume(value, units).text;
+    case 'ambientK':
+      return temperature(value, units).text;
+  }
+}
