@@ -2,6 +2,7 @@
 import { ContentErrors } from '../content/index.ts';
 import { BrewSetupError } from '../brew/errors.ts';
 import { brewWords } from '../words/brew.ts';
+import { issueLine } from '../words/content.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
 
 /** Wrong flags or arguments: the message says what to type instead. */
@@ -21,7 +22,7 @@ export class InputError extends Error {
  */
 export function reportError(error: unknown): number {
   if (error instanceof ContentErrors) {
-    const lines = error.issues.length > 0 ? error.issues.map(String) : [error.message];
+    const lines = error.issues.length > 0 ? error.issues.map(issueLine) : [error.message];
     process.stderr.write(lines.map((line) => `stovecard: ${line}\n`).join(''));
     return 2;
   }

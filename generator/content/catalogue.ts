@@ -8,7 +8,7 @@
  */
 import { readdir, stat } from 'node:fs/promises';
 import { extname, join } from 'node:path';
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import { buildCoffee } from './coffee.ts';
 import { idOfFile, loadEntry, type Checked, type ValidFile } from './entry-file.ts';
 import { ContentErrors, ContentIssue, wholeFile } from './issues.ts';
@@ -40,7 +40,7 @@ interface Listing {
 
 function unreadable(file: string, error: unknown): ContentIssue {
   const reason = (error as NodeJS.ErrnoException).code ?? String(error);
-  return new ContentIssue('unreadable', wholeFile(file), contentWords.unreadable(reason));
+  return new ContentIssue('unreadable', wholeFile(file), message('unreadable', reason));
 }
 
 const compare = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
@@ -84,7 +84,7 @@ async function listFolder(contentDir: string, kind: FolderKind): Promise<Listing
         new ContentIssue(
           'bad-file-name',
           wholeFile(listed.file),
-          contentWords.badFileName(listed.id, idLike(listed.id)),
+          message('badFileName', listed.id, idLike(listed.id)),
         ),
       );
     } else if (other !== undefined) {
@@ -92,7 +92,7 @@ async function listFolder(contentDir: string, kind: FolderKind): Promise<Listing
         new ContentIssue(
           'same-id-twice',
           wholeFile(listed.file),
-          contentWords.sameIdTwice(listed.id, other),
+          message('sameIdTwice', listed.id, other),
         ),
       );
     } else {
@@ -146,7 +146,7 @@ export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
   const references = { known, stoves: stoveEntries.entries };
   const noSite: Checked<SiteEntry> = {
     issues: [
-      new ContentIssue('missing-file', wholeFile(SITE_FILE), contentWords.missingSiteFile()),
+      new ContentIssue('missing-file', wholeFile(SITE_FILE), message('missingSiteFile')),
     ],
   };
   const [logEntries, site] = await Promise.all([

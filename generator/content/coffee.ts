@@ -2,7 +2,7 @@
  * A coffee file (content/coffees/<id>.yaml) → CoffeeEntry: ranges that must run low to
  * high, the defaults for what the file leaves out, and the conversion to SI.
  */
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import { GRIND_PERMEABILITY_M2 } from './grind-permeability.ts';
 import type { ContentIssue } from './issues.ts';
@@ -33,7 +33,7 @@ export function reversedRangeIssue(
   pair: readonly [number, number] | undefined,
 ): ContentIssue[] {
   if (!pair || pair[0] < pair[1]) return [];
-  return [issueAt(source, [key], 'order', contentWords.reversedRange(pair[0], pair[1]))];
+  return [issueAt(source, [key], 'order', message('reversedRange', pair[0], pair[1]))];
 }
 
 export function buildCoffee(file: ValidFile<CoffeeYaml>): Checked<CoffeeEntry> {

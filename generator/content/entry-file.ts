@@ -4,7 +4,7 @@
  * and converts lives in pot.ts, coffee.ts, stove.ts, log.ts and site.ts.
  */
 import { basename, extname } from 'node:path';
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import { readContentText } from './file-bytes.ts';
 import type { ContentIssue } from './issues.ts';
 import { schemaIssues, type SchemaName } from './schema-check.ts';
@@ -41,7 +41,7 @@ async function readValidFile<T>(
   const parsed = parseYamlSource(read.text, file);
   if (parsed.value === undefined && parsed.issues.length > 0) return { issues: parsed.issues };
   if (parsed.value === null || parsed.value === undefined) {
-    return { issues: [issueAt(parsed.source, [], 'empty-file', contentWords.emptyFile(schema))] };
+    return { issues: [issueAt(parsed.source, [], 'empty-file', message('emptyFile', schema))] };
   }
   const issues = [...parsed.issues, ...schemaIssues(schema, parsed.value, parsed.source)];
   if (issues.length > 0) return { issues };

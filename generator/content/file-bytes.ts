@@ -4,7 +4,7 @@
  */
 import { createHash } from 'node:crypto';
 import { open } from 'node:fs/promises';
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import { ContentIssue, wholeFile } from './issues.ts';
 
 /** 1 MiB: an entry is a few hundred bytes; anything this large is the wrong file. */
@@ -56,7 +56,7 @@ export async function readContentText(path: string, file: string): Promise<Conte
     try {
       const { size } = await handle.stat();
       if (size > MAX_CONTENT_FILE_BYTES) {
-        const wording = contentWords.fileTooLarge(size, MAX_CONTENT_FILE_BYTES);
+        const wording = message('fileTooLarge', size, MAX_CONTENT_FILE_BYTES);
         return { ok: false, issue: new ContentIssue('file-too-large', whole, wording) };
       }
       bytes = await handle.readFile();
@@ -67,7 +67,7 @@ export async function readContentText(path: string, file: string): Promise<Conte
     const reason = (error as NodeJS.ErrnoException).code ?? String(error);
     return {
       ok: false,
-      issue: new ContentIssue('unreadable', whole, contentWords.unreadable(reason)),
+      issue: new ContentIssue('unreadable', whole, message('unreadable', reason)),
     };
   }
   const hash = createHash('sha256').update(bytes).digest('hex');
@@ -75,6 +75,6 @@ export async function readContentText(path: string, file: string): Promise<Conte
     return { ok: true, text: new TextDecoder('utf-8', { fatal: true }).decode(bytes), hash };
   } catch {
     const at = { ...whole, ...positionOfByte(bytes, firstInvalidByte(bytes)) };
-    return { ok: false, issue: new ContentIssue('not-utf8', at, contentWords.notUtf8()) };
+    return { ok: false, issue: new ContentIssue('not-utf8', at, message('notUtf8')) };
   }
 }

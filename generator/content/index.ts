@@ -7,7 +7,6 @@ export { loadCoffeeFile, loadLogFile, loadPotFile, loadStoveFile } from './load-
 export {
   ContentErrors,
   ContentIssue,
-  formatContentErrors,
   type ContentIssueCode,
 } from './issues.ts';
 export {
@@ -20,3 +19,4 @@ export {
   type YamlSource,
 } from './yaml-source.ts';
 export type * from './types.ts';
+export { message, type ContentMessage, type ContentMessageKey } from './messages.ts';

@@ -3,7 +3,7 @@
  * every file is collected and thrown together as one ContentErrors, so a person fixes
  * their files in one pass.
  */
-import { contentWords, type Wording } from '../words/content.ts';
+import type { ContentMessage } from './messages.ts';
 
 /** What kind of problem an issue is, for code that reacts to some of them. */
 export type ContentIssueCode =
@@ -51,21 +51,21 @@ export class ContentIssue implements IssueLocation {
   readonly line: number;
   readonly column: number;
   readonly field: string;
-  readonly problem: string;
-  readonly fix: string;
+  /** What is wrong and how to fix it, as a message key and facts (words: generator/words/content.ts). */
+  readonly message: ContentMessage;
 
-  constructor(code: ContentIssueCode, at: IssueLocation, wording: Wording) {
+  constructor(code: ContentIssueCode, at: IssueLocation, message: ContentMessage) {
     this.code = code;
     this.file = at.file;
     this.line = at.line;
     this.column = at.column;
     this.field = at.field;
-    this.problem = wording.problem;
-    this.fix = wording.fix;
+    this.message = message;
   }
 
+  /** For developers (stack traces, debugging); people read generator/words/content.ts issueLine. */
   toString(): string {
-    return contentWords.issueLine(this);
+    return `${this.file}:${this.line}:${this.column} ${this.field} ${this.code} ${this.message.key}`;
   }
 }
 
@@ -78,20 +78,11 @@ export class ContentErrors extends Error {
   /** Sorted by file, then line and column. */
   readonly issues: readonly ContentIssue[];
 
+  /** `message` is for developers; people read generator/words/content.ts formatContentErrors. */
   constructor(issues: readonly ContentIssue[]) {
     const sorted = [...issues].sort(byPlace);
-    super(formatIssues(sorted));
+    super(`${sorted.length} content issue(s): ${sorted.map(String).join('; ')}`);
     this.name = 'ContentErrors';
     this.issues = sorted;
   }
-}
-
-function formatIssues(issues: readonly ContentIssue[]): string {
-  const files = new Set(issues.map((issue) => issue.file)).size;
-  return [contentWords.errorsHeading(issues.length, files), ...issues.map(String)].join('\n');
-}
-
-/** The report a person reads: a heading, then one line per issue. */
-export function formatContentErrors(err: ContentErrors): string {
-  return formatIssues(err.issues);
 }

@@ -3,7 +3,7 @@
  * readings run forward in time, and everything is converted to SI. Whether the pot, coffee,
  * stove and levels it names exist is checked when the whole catalogue is loaded.
  */
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { unknownIdIssues, unknownLevelIssues, type KnownIds } from './references.ts';
@@ -49,14 +49,14 @@ function brewIssues(source: YamlSource, brew: BrewYaml, index: number): ContentI
   const at = ['brews', index] as const;
   const issues: ContentIssue[] = [];
   if (OBSERVATIONS.every((key) => brew[key] === undefined)) {
-    issues.push(issueAt(source, at, 'missing-key', contentWords.brewWithoutObservation()));
+    issues.push(issueAt(source, at, 'missing-key', message('brewWithoutObservation')));
   }
   if (
     brew.first_coffee_s !== undefined &&
     brew.sputter_s !== undefined &&
     brew.sputter_s < brew.first_coffee_s
   ) {
-    const wording = contentWords.sputterBeforeFirstCoffee(brew.sputter_s, brew.first_coffee_s);
+    const wording = message('sputterBeforeFirstCoffee', brew.sputter_s, brew.first_coffee_s);
     issues.push(issueAt(source, [...at, 'sputter_s'], 'order', wording));
   }
   for (const key of ['cup_g', 'water_c'] as const) {
@@ -68,7 +68,7 @@ function brewIssues(source: YamlSource, brew: BrewYaml, index: number): ContentI
             source,
             [...at, key, i, 0],
             'order',
-            contentWords.readingsOutOfOrder(tS, previousS),
+            message('readingsOutOfOrder', tS, previousS),
           ),
         );
       }

@@ -4,7 +4,7 @@
  */
 import { potGeometry } from '../brew/geometry.ts';
 import type { BaseMaterial, PotModel } from '../brew/types.ts';
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { ASSUMED_VALVE_OPENING_BAR, defaultHeatLossWPerK } from './pot-defaults.ts';
@@ -48,29 +48,29 @@ function geometryIssues({ source, data }: ValidFile<PotYaml>, model: PotModel): 
     {
       broken: base.valve_height_mm >= baseHeightMm,
       path: ['base', 'valve_height_mm'],
-      wording: () => contentWords.valveAboveBase(base.valve_height_mm, baseHeightMm),
+      wording: () => message('valveAboveBase', base.valve_height_mm, baseHeightMm),
     },
     {
       broken: funnel.tube_gap_mm >= base.valve_height_mm,
       path: ['funnel', 'tube_gap_mm'],
-      wording: () => contentWords.tubeGapAboveValve(funnel.tube_gap_mm, base.valve_height_mm),
+      wording: () => message('tubeGapAboveValve', funnel.tube_gap_mm, base.valve_height_mm),
     },
     {
       broken: upper.spout_height_mm <= bedTopMm,
       path: ['upper', 'spout_height_mm'],
-      wording: () => contentWords.spoutTooLow(upper.spout_height_mm, bedTopMm),
+      wording: () => message('spoutTooLow', upper.spout_height_mm, bedTopMm),
     },
     {
       broken: funnel.basket_diameter_mm >= base.inner_diameter_mm,
       path: ['funnel', 'basket_diameter_mm'],
       wording: () =>
-        contentWords.basketWiderThanBase(funnel.basket_diameter_mm, base.inner_diameter_mm),
+        message('basketWiderThanBase', funnel.basket_diameter_mm, base.inner_diameter_mm),
     },
     {
       broken: funnel.tube_inner_diameter_mm >= funnel.basket_diameter_mm,
       path: ['funnel', 'tube_inner_diameter_mm'],
       wording: () =>
-        contentWords.tubeWiderThanBasket(funnel.tube_inner_diameter_mm, funnel.basket_diameter_mm),
+        message('tubeWiderThanBasket', funnel.tube_inner_diameter_mm, funnel.basket_diameter_mm),
     },
   ];
   return rules

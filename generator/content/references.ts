@@ -2,7 +2,7 @@
  * References between files: ids a site or a log names must be files that exist, and a
  * log's levels must be levels of its stove. A mistyped id gets the nearest existing one.
  */
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import type { ContentIssue } from './issues.ts';
 import { nearest } from './nearest.ts';
 import type { StoveEntry } from './types.ts';
@@ -24,7 +24,7 @@ export function unknownIdIssues(
   const ids = known[kind];
   if (ids.includes(id)) return [];
   return [
-    issueAt(source, path, 'unknown-id', contentWords.unknownId(kind, id, nearest(id, ids), ids)),
+    issueAt(source, path, 'unknown-id', message('unknownId', kind, id, nearest(id, ids), ids)),
   ];
 }
 
@@ -37,6 +37,6 @@ export function unknownLevelIssues(
 ): ContentIssue[] {
   const labels = stove.levels.map((each) => each.label);
   if (labels.includes(level)) return [];
-  const wording = contentWords.unknownLevel(level, stove.id, nearest(level, labels), labels);
+  const wording = message('unknownLevel', level, stove.id, nearest(level, labels), labels);
   return [issueAt(source, path, 'unknown-level', wording)];
 }

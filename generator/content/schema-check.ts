@@ -1,12 +1,12 @@
 /**
  * Checks a file's data against its JSON Schema (schemas/<kind>.schema.json, the same
  * files editors use through the `# yaml-language-server: $schema=…` line) and turns each
- * ajv error into an issue at the YAML node's line and column, in words from
- * ../words/content.ts.
+ * ajv error into an issue at the YAML node's line and column, as a message key and facts
+ * (./messages.ts; the words are generator/words/content.ts).
  */
 import { readFileSync } from 'node:fs';
 import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
-import { contentWords, type ValueSpec, type Wording } from '../words/content.ts';
+import { message, type ContentMessage, type ValueSpec } from './messages.ts';
 import { ID_PATTERN, idLike } from './ids.ts';
 import { ContentIssue, type ContentIssueCode } from './issues.ts';
 import { nearest } from './nearest.ts';
@@ -88,7 +88,7 @@ function toIssue(error: ErrorObject, source: YamlSource): ContentIssue {
   const data: unknown = error.data;
   const at = (
     code: ContentIssueCode,
-    wording: Wording,
+    wording: ContentMessage,
     where: YamlPath = path,
     on: 'value' | 'key' = 'value',
   ) => issueAt(source, where, code, wording, on);
@@ -97,7 +97,7 @@ function toIssue(error: ErrorObject, source: YamlSource): ContentIssue {
     case 'required': {
       const key = String(error.params.missingProperty);
       const properties = schema?.properties as Readonly<Record<string, Schema>> | undefined;
-      const wording = contentWords.missingKey(key, fieldName(path), specOf(properties?.[key]));
+      const wording = message('missingKey', key, fieldName(path), specOf(properties?.[key]));
       // Point at the mapping the key belongs in (at its own key, `base:`), naming the missing field.
       const where = { ...locate(source, path, 'key'), field: fieldName([...path, key]) };
       return new ContentIssue('missing-key', where, wording);
@@ -105,55 +105,55 @@ function toIssue(error: ErrorObject, source: YamlSource): ContentIssue {
     case 'additionalProperties': {
       const key = String(error.params.additionalProperty);
       const allowed = Object.keys((schema?.properties as object | undefined) ?? {});
-      const wording = contentWords.unknownKey(key, fieldName(path), nearest(key, allowed), allowed);
+      const wording = message('unknownKey', key, fieldName(path), nearest(key, allowed), allowed);
       return at('unknown-key', wording, [...path, key], 'key');
     }
     case 'type': {
       if (typeof data === 'number' && !Number.isFinite(data)) {
         return at(
           'out-of-range',
-          contentWords.notFinite(spec, sourceText(source, path) ?? String(data)),
+          message('notFinite', spec, sourceText(source, path) ?? String(data)),
         );
       }
-      return at('wrong-type', contentWords.wrongType(spec, data, sourceText(source, path)));
+      return at('wrong-type', message('wrongType', spec, data, sourceText(source, path)));
     }
     case 'minimum':
     case 'maximum':
       return at(
         'out-of-range',
-        contentWords.outOfRange(spec, data as number, sourceText(source, path)),
+        message('outOfRange', spec, data as number, sourceText(source, path)),
       );
     case 'enum': {
       const allowed = (error.params.allowedValues as readonly unknown[]).map(String);
       const suggestion = typeof data === 'string' ? nearest(data, allowed) : undefined;
-      return at('bad-enum', contentWords.badEnum(data, allowed, suggestion));
+      return at('bad-enum', message('badEnum', data, allowed, suggestion));
     }
     case 'minItems':
     case 'maxItems':
-      return at('bad-value', contentWords.listLength(spec, (data as readonly unknown[]).length));
+      return at('bad-value', message('listLength', spec, (data as readonly unknown[]).length));
     case 'minLength':
     case 'maxLength':
       return at(
         'bad-value',
-        contentWords.textLength(schema?.maxLength as number | undefined, String(data).length),
+        message('textLength', schema?.maxLength as number | undefined, String(data).length),
       );
     case 'pattern': {
       const text = String(data);
       const wording =
         schema?.pattern === ID_PATTERN.source
-          ? contentWords.badId(text, idLike(text))
-          : contentWords.badUrl(text);
+          ? message('badId', text, idLike(text))
+          : message('badUrl', text);
       return at('bad-value', wording);
     }
     case 'uniqueItems': {
       const index = Math.max(Number(error.params.i), Number(error.params.j)); // the later repeat
-      return at('repeated', contentWords.repeatedItem((data as readonly unknown[])[index]), [
+      return at('repeated', message('repeatedItem', (data as readonly unknown[])[index]), [
         ...path,
         index,
       ]);
     }
     default:
-      return at('bad-value', contentWords.invalidValue(error.message ?? error.keyword));
+      return at('bad-value', message('invalidValue', error.message ?? error.keyword));
   }
 }
 

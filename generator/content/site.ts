@@ -3,7 +3,7 @@
  * expanded into the pot × coffee × stove cards the planner plans. Needs the ids of the
  * catalogue's files to check references and to expand "every coffee with every pot".
  */
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { unknownIdIssues, type KnownIds, type ReferencedKind } from './references.ts';
@@ -70,7 +70,7 @@ function keysNotFor(
         source,
         [...path, key],
         'layout',
-        contentWords.keyNotForLayout(key, set.layout, belongsTo),
+        message('keyNotForLayout', key, set.layout, belongsTo),
         'key',
       ),
     );
@@ -92,7 +92,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
       coffeeIds: [],
       issues: [
         ...issues,
-        issueAt(source, path, 'layout', contentWords.missingForLayout('cards', 'station', example)),
+        issueAt(source, path, 'layout', message('missingForLayout', 'cards', 'station', example)),
       ],
     };
   }
@@ -104,7 +104,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
     let requests: CardRequest[] = [];
     if (card.every_coffee_with_every_pot === true) {
       if (card.pot !== undefined || card.coffee !== undefined) {
-        issues.push(issueAt(source, at, 'layout', contentWords.cardMixesForms()));
+        issues.push(issueAt(source, at, 'layout', message('cardMixesForms')));
       }
       requests = everyCoffeeWithEveryPot(card.stove, known);
     } else if (card.every_coffee_with_every_pot === false) {
@@ -113,11 +113,11 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
           source,
           [...at, 'every_coffee_with_every_pot'],
           'bad-value',
-          contentWords.everyFlagFalse(),
+          message('everyFlagFalse'),
         ),
       );
     } else if (card.pot === undefined || card.coffee === undefined) {
-      issues.push(issueAt(source, at, 'missing-key', contentWords.cardNeedsPotAndCoffee()));
+      issues.push(issueAt(source, at, 'missing-key', message('cardNeedsPotAndCoffee')));
     } else {
       issues.push(...unknownIdIssues(source, [...at, 'pot'], 'pot', card.pot, known));
       issues.push(...unknownIdIssues(source, [...at, 'coffee'], 'coffee', card.coffee, known));
@@ -131,7 +131,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
         firstLineOf.set(key, line);
         cards.push(request);
       } else {
-        const wording = contentWords.repeatedCard(
+        const wording = message('repeatedCard', 
           request.potId,
           request.coffeeId,
           request.stoveId,
@@ -150,7 +150,7 @@ function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: Kn
   if (set.coffees === undefined) {
     const example = '`coffees: [house-blend, …]`';
     issues.push(
-      issueAt(source, path, 'layout', contentWords.missingForLayout('coffees', 'insert', example)),
+      issueAt(source, path, 'layout', message('missingForLayout', 'coffees', 'insert', example)),
     );
   }
   const coffeeIds = set.coffees ?? [];
@@ -177,7 +177,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
     if (firstLine === undefined) firstLineOf.set(set.id, positionAt(source, [...path, 'id']).line);
     else
       issues.push(
-        issueAt(source, [...path, 'id'], 'repeated', contentWords.repeatedSetId(set.id, firstLine)),
+        issueAt(source, [...path, 'id'], 'repeated', message('repeatedSetId', set.id, firstLine)),
       );
     const expanded = (set.layout === 'station' ? stationCards : insertCards)(
       source,

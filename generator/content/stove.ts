@@ -2,7 +2,7 @@
  * A stove file (content/stoves/<id>.yaml) → StoveEntry: levels named once and rising in
  * power, the kind's default efficiency, and the heat each level puts into the pot.
  */
-import { contentWords } from '../words/content.ts';
+import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { DEFAULT_STOVE_EFFICIENCY } from './stove-efficiency.ts';
@@ -34,7 +34,7 @@ function levelIssues({ source, data }: ValidFile<StoveYaml>): ContentIssue[] {
           source,
           ['levels', index, 'label'],
           'repeated',
-          contentWords.repeatedLevel(label, firstLine),
+          message('repeatedLevel', label, firstLine),
         ),
       );
     } else {
@@ -42,7 +42,7 @@ function levelIssues({ source, data }: ValidFile<StoveYaml>): ContentIssue[] {
     }
     const previous = data.levels[index - 1];
     if (previous && level.power_w <= previous.power_w) {
-      const wording = contentWords.powerNotIncreasing(
+      const wording = message('powerNotIncreasing', 
         level.power_w,
         String(previous.label),
         previous.power_w,

@@ -17,7 +17,7 @@ import {
   type Pair,
   type YAMLError,
 } from 'yaml';
-import { contentWords, type Wording } from '../words/content.ts';
+import { message, type ContentMessage } from './messages.ts';
 import { ContentIssue, type ContentIssueCode, type IssueLocation } from './issues.ts';
 import type { SourceRef } from './types.ts';
 
@@ -47,23 +47,23 @@ function yamlIssue(source: YamlSource, error: YAMLError): ContentIssue {
   if (error.code === 'DUPLICATE_KEY') {
     const path = pathAtOffset(source, offset);
     const at = { ...positionOfOffset(source, offset), file: source.file, field: fieldName(path) };
-    return new ContentIssue('duplicate-key', at, contentWords.duplicateKey(String(path.at(-1))));
+    return new ContentIssue('duplicate-key', at, message('duplicateKey', String(path.at(-1))));
   }
   const detail = error.message.split('\n')[0]!.replace(/ at line \d+, column \d+:?$/, '');
   const at = { ...positionOfOffset(source, offset), file: source.file, field: '' };
-  return new ContentIssue('yaml-syntax', at, contentWords.yamlSyntax(detail, error.code));
+  return new ContentIssue('yaml-syntax', at, message('yamlSyntax', detail, error.code));
 }
 
 function tooDeepAt(source: YamlSource, offset: number): ContentIssue {
   const at = { ...positionOfOffset(source, offset), file: source.file, field: '' };
-  return new ContentIssue('too-deep', at, contentWords.nestedTooDeeply());
+  return new ContentIssue('too-deep', at, message('nestedTooDeeply'));
 }
 
 /** The same problem at the same place once (the yaml package can repeat an error per level). */
 function uniqueIssues(issues: readonly ContentIssue[]): ContentIssue[] {
   const seen = new Set<string>();
   return issues.filter((issue) => {
-    const key = `${issue.line}:${issue.column}:${issue.code}:${issue.problem}`;
+    const key = `${issue.line}:${issue.column}:${issue.code}:${JSON.stringify(issue.message)}`;
     if (seen.has(key)) return false;
     seen.add(key);
     return true;
@@ -98,7 +98,7 @@ export function parseYamlSource(text: string, file: string): ParsedYaml {
       source,
       [],
       'too-many-aliases',
-      contentWords.tooManyAliases(MAX_ALIAS_COUNT),
+      message('tooManyAliases', MAX_ALIAS_COUNT),
     );
     return { source, value: undefined, issues: [...issues, tooMany] };
   }
@@ -202,7 +202,7 @@ export function issueAt(
   source: YamlSource,
   path: YamlPath,
   code: ContentIssueCode,
-  wording: Wording,
+  wording: ContentMessage,
   on: 'value' | 'key' = 'value',
 ): ContentIssue {
   return new ContentIssue(code, locate(source, path, on), wording);

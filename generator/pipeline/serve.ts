@@ -9,7 +9,8 @@ import { watch, type FSWatcher } from 'node:fs';
 import { readFile, stat } from 'node:fs/promises';
 import http from 'node:http';
 import path from 'node:path';
-import { ContentErrors, formatContentErrors } from '../content/index.ts';
+import { ContentErrors } from '../content/index.ts';
+import { formatContentErrors } from '../words/content.ts';
 import { buildWords } from '../words/card.ts';
 import { buildSite, type BuildResult, type BuildStep } from './build-site.ts';
 import {

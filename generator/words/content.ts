@@ -6,24 +6,28 @@
  * Tests assert through these same factories, so the wording can change here alone.
  */
 
+import type {
+  ContentKindName,
+  ContentMessage,
+  ContentMessageArgs,
+  ContentMessageKey,
+  ValueSpec,
+} from '../content/messages.ts';
+
+export type { ValueSpec } from '../content/messages.ts';
+
 export interface Wording {
   readonly problem: string;
   readonly fix: string;
 }
 
-/** What a schema expects of one value, as far as the words need it. */
-export interface ValueSpec {
-  /** JSON-Schema type: number, integer, string, boolean, array, object. */
-  readonly type?: string;
-  /** The schema's `x-unit`: mL, mm, g, bar, W/K, m², g/mL, g/g, °C, s, W, m, share. */
-  readonly unit?: string;
-  readonly minimum?: number;
-  readonly maximum?: number;
-  readonly allowed?: readonly string[];
-  readonly minItems?: number;
-  readonly maxItems?: number;
-  /** The schema's first example, to show in a fix. */
-  readonly example?: unknown;
+/** Where an issue is and what it says (generator/content/issues.ts ContentIssue). */
+interface IssueAt {
+  readonly file: string;
+  readonly line: number;
+  readonly column: number;
+  readonly field: string;
+  readonly message: ContentMessage;
 }
 
 interface UnitWords {
@@ -55,15 +59,13 @@ const UNITS: Readonly<Record<string, UnitWords>> = {
   share: { ofUnit: ' (a share: 0.38 means 38 %)', plural: '', written: [] },
 };
 
-const CONTENT_KINDS = {
+const CONTENT_KINDS: Record<ContentKindName, { readonly one: string; readonly folder: string }> = {
   pot: { one: 'pot', folder: 'pots' },
   coffee: { one: 'coffee', folder: 'coffees' },
   stove: { one: 'stove', folder: 'stoves' },
   log: { one: 'brew log', folder: 'logs' },
   site: { one: 'site', folder: '' },
-} as const;
-
-export type ContentKindName = keyof typeof CONTENT_KINDS;
+};
 
 const code = (text: string): string => `\`${text}\``;
 
@@ -161,26 +163,10 @@ function exampleFix(spec: ValueSpec): string {
   return `, e.g. ${showExample(spec.example)}`;
 }
 
-export const contentWords = {
-  /** One issue as one line of the error report. */
-  issueLine(issue: {
-    readonly file: string;
-    readonly line: number;
-    readonly column: number;
-    readonly field: string;
-    readonly problem: string;
-    readonly fix: string;
-  }): string {
-    const field = issue.field === '' ? '' : ` ${issue.field}`;
-    return `${issue.file}:${issue.line}:${issue.column}${field} — ${issue.problem}. ${issue.fix}`;
-  },
+/** One factory per content message key (generator/content/messages.ts): a missing one fails tsc. */
+type MessageWords = { readonly [K in ContentMessageKey]: (...args: ContentMessageArgs[K]) => Wording };
 
-  errorsHeading(issueCount: number, fileCount: number): string {
-    const problems = issueCount === 1 ? 'a problem' : `${issueCount} problems`;
-    const files = fileCount === 1 ? '1 file' : `${fileCount} files`;
-    return `The content has ${problems} in ${files}; nothing was built:`;
-  },
-
+const messageWords = {
   // ── Reading the file ────────────────────────────────────────────────────────────────
 
   fileTooLarge(sizeBytes: number, limitBytes: number): Wording {
@@ -572,4 +558,31 @@ export const contentWords = {
       fix: 'Remove one of them.',
     };
   },
-} as const;
+} satisfies MessageWords;
+
+/** The problem and fix of one content message. */
+export function wording(message: ContentMessage): Wording {
+  const say = messageWords[message.key] as (...args: readonly unknown[]) => Wording;
+  return say(...message.args);
+}
+
+/** One issue as one line of the error report. */
+export function issueLine(issue: IssueAt): string {
+  const { problem, fix } = wording(issue.message);
+  const field = issue.field === '' ? '' : ` ${issue.field}`;
+  return `${issue.file}:${issue.line}:${issue.column}${field} — ${problem}. ${fix}`;
+}
+
+export function errorsHeading(issueCount: number, fileCount: number): string {
+  const problems = issueCount === 1 ? 'a problem' : `${issueCount} problems`;
+  const files = fileCount === 1 ? '1 file' : `${fileCount} files`;
+  return `The content has ${problems} in ${files}; nothing was built:`;
+}
+
+/** The report a person reads: a heading, then one line per issue (issues sorted by place). */
+export function formatContentErrors(error: { readonly issues: readonly IssueAt[] }): string {
+  const files = new Set(error.issues.map((issue) => issue.file)).size;
+  return [errorsHeading(error.issues.length, files), ...error.issues.map(issueLine)].join('\n');
+}
+
+export const contentWords = { ...messageWords, wording, issueLine, errorsHeading };

@@ -15,7 +15,7 @@ import {
   loadPotFile,
   loadStoveFile,
 } from '../../generator/content/index.ts';
-import { contentWords } from '../../generator/words/content.ts';
+import { contentWords, wording } from '../../generator/words/content.ts';
 import { expectRelative } from '../helpers/close.ts';
 import { DEMO_TRUTH } from './demo-log.ts';
 import { FIRST_COFFEE_ONLY, IDS, syntheticInput, testContent } from './fixtures.ts';
@@ -218,7 +218,7 @@ describe('stovecard fit with a malformed log', () => {
       `${LOG.map((l) => (l.startsWith('pot:') ? 'pot: test-pott' : l)).join('\n')}\n`,
     );
     const error = (await loadFitInput(path, dir).catch((e: unknown) => e)) as ContentErrors;
-    expect(error.issues[0]!.fix).toBe(
+    expect(wording(error.issues[0]!.message).fix).toBe(
       contentWords.unknownId('pot', 'test-pott', 'test-pot', [IDS.pot]).fix,
     );
   });

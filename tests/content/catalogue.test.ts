@@ -3,13 +3,12 @@ import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import {
   ContentErrors,
-  formatContentErrors,
   loadCatalogue,
   type Catalogue,
 } from '../../generator/content/index.ts';
 import { MAX_CONTENT_FILE_BYTES } from '../../generator/content/file-bytes.ts';
 import { MAX_ALIAS_COUNT } from '../../generator/content/yaml-source.ts';
-import { contentWords } from '../../generator/words/content.ts';
+import { contentWords, wording, formatContentErrors } from '../../generator/words/content.ts';
 import {
   catalogueIssues,
   COFFEE,
@@ -180,7 +179,7 @@ describe('loadCatalogue(a broken copy of the content)', () => {
       code: 'unknown-id',
       wording: contentWords.unknownId('pot', 'thre-cup', 'three-cup', pots),
     });
-    expect(issue.fix).toBe('Did you mean `three-cup`?');
+    expect(wording(issue.message).fix).toBe('Did you mean `three-cup`?');
   });
 
   it('an unknown id with nothing near lists the ids there are', async () => {
@@ -192,7 +191,7 @@ describe('loadCatalogue(a broken copy of the content)', () => {
       column: 15,
       field: 'sets[1].coffees[0]',
     });
-    expect(issue.fix).toContain('`house-blend`');
+    expect(wording(issue.message).fix).toContain('`house-blend`');
   });
 
   it('a log naming a level its stove lacks suggests the nearest level', async () => {
@@ -359,7 +358,9 @@ describe('loadCatalogue(a broken copy of the content)', () => {
       'site.yaml:3 paper',
       'stoves/bar-gas.yaml:6 levels[2].power_w',
     ]);
-    expect((error as ContentErrors).message).toBe(formatContentErrors(error as ContentErrors));
+    // The error's own message is for developers: codes and places, no words.
+    expect((error as ContentErrors).message).toContain('pots/three-cup.yaml:6:');
+    expect((error as ContentErrors).message).not.toContain('Did you mean');
   });
 
   it('a missing site.yaml is one clear issue', async () => {

@@ -3,6 +3,7 @@
  * entry texts owned by the tests, so line numbers asserted below never move when the demo
  * files change. The line numbers are written beside each line.
  */
+import { wording } from '../../generator/words/content.ts';
 import { cp, mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -155,9 +156,9 @@ export function expectIssue(
   if (expected.column !== undefined) expect(issue.column, String(issue)).toBe(expected.column);
   if (expected.code !== undefined) expect(issue.code, String(issue)).toBe(expected.code);
   if (expected.wording !== undefined) {
-    expect({ problem: issue.problem, fix: issue.fix }).toEqual(expected.wording);
+    expect({ problem: wording(issue.message).problem, fix: wording(issue.message).fix }).toEqual(expected.wording);
   }
-  expect(issue.fix.length, 'every issue says how to fix it').toBeGreaterThan(0);
+  expect(wording(issue.message).fix.length, 'every issue says how to fix it').toBeGreaterThan(0);
   return issue;
 }
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { schemaIssues, type SchemaName } from '../../generator/content/schema-check.ts';
 import { parseYamlSource } from '../../generator/content/yaml-source.ts';
-import { contentWords, type ValueSpec } from '../../generator/words/content.ts';
+import { contentWords, type ValueSpec, wording } from '../../generator/words/content.ts';
 import { COFFEE, expectIssue, LOG, POT, SITE, STOVE, withLine, withoutLine } from './helpers.ts';
 
 const FILE = 'pots/three-cup.yaml';
@@ -43,15 +43,15 @@ describe('schemaIssues words each kind of mistake', () => {
       code: 'wrong-type',
       wording: contentWords.wrongType(VALVE_HEIGHT, '32mm'),
     });
-    expect(issue.problem).toBe('expected a number of millimetres between 5 and 200, got "32mm"');
-    expect(issue.fix).toMatch(/^Write 32\b/);
+    expect(wording(issue.message).problem).toBe('expected a number of millimetres between 5 and 200, got "32mm"');
+    expect(wording(issue.message).fix).toMatch(/^Write 32\b/);
   });
 
   it('a unit other than the key’s ("3.2cm") is not silently converted', () => {
     const issues = issuesOf('pot', withLine(POT, 'valve_height_mm', '  valve_height_mm: 3.2cm'));
     const issue = expectIssue(issues, { file: FILE, line: 6, field: 'base.valve_height_mm' });
-    expect(issue.fix).not.toMatch(/Write 3\.2/);
-    expect(issue.fix).toContain('millimetres');
+    expect(wording(issue.message).fix).not.toMatch(/Write 3\.2/);
+    expect(wording(issue.message).fix).toContain('millimetres');
   });
 
   it('a wrong type names what was expected and what was written', () => {
@@ -80,7 +80,7 @@ describe('schemaIssues words each kind of mistake', () => {
       code: 'out-of-range',
       wording: contentWords.outOfRange(spec, -15, '-15'),
     });
-    expect(issue.problem).toContain('cannot be negative');
+    expect(wording(issue.message).problem).toContain('cannot be negative');
   });
 
   it('a number too large to store (1e400) is refused, not read as Infinity', () => {
@@ -134,7 +134,7 @@ describe('schemaIssues words each kind of mistake', () => {
       code: 'unknown-key',
       wording: contentWords.unknownKey('valve_hieght_mm', 'base', 'valve_height_mm', allowed),
     });
-    expect(issue.fix).toBe('Did you mean `valve_height_mm`?');
+    expect(wording(issue.message).fix).toBe('Did you mean `valve_height_mm`?');
     // …and the real key is then missing, reported at the parent mapping's line.
     expectIssue(issues, {
       file: FILE,
@@ -156,7 +156,7 @@ describe('schemaIssues words each kind of mistake', () => {
       code: 'missing-key',
       wording: contentWords.missingKey('tube_gap_mm', 'funnel', spec),
     });
-    expect(issue.fix).toContain('`tube_gap_mm: 4` under `funnel`');
+    expect(wording(issue.message).fix).toContain('`tube_gap_mm: 4` under `funnel`');
   });
 
   it('a missing top-level key points at the document root', () => {
@@ -189,7 +189,7 @@ describe('schemaIssues words each kind of mistake', () => {
       code: 'bad-enum',
       wording: contentWords.badEnum('aluminum', ['aluminium', 'stainless-steel'], 'aluminium'),
     });
-    expect(issue.problem).toContain('`aluminium`, `stainless-steel`');
+    expect(wording(issue.message).problem).toContain('`aluminium`, `stainless-steel`');
   });
 
   it('a percentage for a share suggests the fraction', () => {
@@ -200,7 +200,7 @@ describe('schemaIssues words each kind of mistake', () => {
       field: 'efficiency',
       code: 'wrong-type',
     });
-    expect(issue.fix).toMatch(/^Write 0\.38\b/);
+    expect(wording(issue.message).fix).toMatch(/^Write 0\.38\b/);
   });
 
   it('a pair with three values is a list-length issue with an example', () => {

@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { loadCatalogue } from '../../generator/content/index.ts';
-import { contentWords } from '../../generator/words/content.ts';
+import { contentWords, wording } from '../../generator/words/content.ts';
 import {
   catalogueIssues,
   contentCopy,
@@ -171,7 +171,7 @@ describe('site.yaml', () => {
       field: 'sets[1]',
       code: 'layout',
     });
-    expect(insert.problem).toBe(contentWords.missingForLayout('coffees', 'insert', '').problem);
+    expect(wording(insert.message).problem).toBe(contentWords.missingForLayout('coffees', 'insert', '').problem);
   });
 
   it('unknown ids in an insert set are reported each at its place', async () => {
@@ -191,6 +191,6 @@ describe('site.yaml', () => {
       field: 'sets[1].stoves[0]',
       code: 'unknown-id',
     });
-    expect(stove.fix).toBe('Did you mean `bar-gas`?');
+    expect(wording(stove.message).fix).toBe('Did you mean `bar-gas`?');
   });
 });

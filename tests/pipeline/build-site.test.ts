@@ -2,6 +2,7 @@
  * buildSite on the demo content: the pages it makes, the plan cache, the swap that keeps the
  * last good site when a build fails, escaping of YAML text, and no network references.
  */
+import { formatContentErrors } from '../../generator/words/content.ts';
 import { createHash } from 'node:crypto';
 import { cp, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
@@ -11,7 +12,6 @@ import { buildSite, type BuildResult } from '../../generator/pipeline/build-site
 import { expandCards } from '../../generator/pipeline/cards.ts';
 import {
   ContentErrors,
-  formatContentErrors,
   loadCatalogue,
 } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
