@@ -22,6 +22,7 @@ interface SetYaml {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  readonly language?: string;
   readonly cards?: readonly CardYaml[];
   readonly coffees?: readonly string[];
   readonly pots?: readonly string[];
@@ -31,6 +32,7 @@ interface SetYaml {
 /** site.yaml as written, once it matches schemas/site.schema.json. */
 export interface SiteYaml {
   readonly business: { readonly name: string; readonly contact: string };
+  readonly language?: string;
   readonly units: UnitSystem;
   readonly paper: PaperSize;
   readonly kettle_presets_c?: readonly number[];
@@ -167,6 +169,9 @@ function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: Kn
   return { cards, coffeeIds, issues };
 }
 
+/** The language of a site or set that names none. */
+export const DEFAULT_LANGUAGE = 'en';
+
 export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<SiteEntry> {
   const { data, source } = file;
   const issues: ContentIssue[] = [];
@@ -190,6 +195,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
       id: set.id,
       title: set.title,
       layout: set.layout,
+      language: set.language ?? data.language ?? DEFAULT_LANGUAGE,
       cards: expanded.cards,
       coffeeIds: expanded.coffeeIds,
       source: refAt(source, path),
@@ -205,6 +211,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
     source: refAt(source, []),
     hash: file.hash,
     business: { name: data.business.name, contact: data.business.contact },
+    language: data.language ?? DEFAULT_LANGUAGE,
     units: data.units,
     paper: data.paper,
     kettlePresetsK: [...(data.kettle_presets_c ?? [])].sort((a, b) => a - b).map(celsiusToK),

@@ -108,6 +108,11 @@ export interface CardSet {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /**
+   * Language code of the set's cards, pages and PDFs (`language:` of the set, else of the
+   * site, else en); one of the schema's enum, which matches generator/words/ catalogues.
+   */
+  readonly language: string;
   readonly cards: readonly CardRequest[];
   /** For insert sets: the coffees, one insert each. */
   readonly coffeeIds: readonly string[];
@@ -119,6 +124,8 @@ export interface SiteEntry {
   readonly source: SourceRef;
   readonly hash: string;
   readonly business: { readonly name: string; readonly contact: string };
+  /** Language code of the site's own pages (index, method, troubleshooting) and the sets' default. */
+  readonly language: string;
   readonly units: UnitSystem;
   readonly paper: PaperSize;
   /** Kettle presets, K, ascending. */

@@ -31,6 +31,8 @@ export interface SetJob {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** Language code of the set's page and PDF (CardSet.language). */
+  readonly language: string;
   /** Station sets: slugs of their station cards; insert sets: slugs of their inserts. */
   readonly cardSlugs: readonly string[];
 }
@@ -70,6 +72,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
         id: set.id,
         title: set.title,
         layout: 'station',
+        language: set.language,
         cardSlugs: [...new Set(slugs)],
       });
       continue;
@@ -83,7 +86,13 @@ export function expandCards(catalogue: Catalogue): CardJobs {
       inserts.push({ setId: set.id, coffeeId, slug, rows });
       slugs.push(slug);
     }
-    sets.push({ id: set.id, title: set.title, layout: 'insert', cardSlugs: slugs });
+    sets.push({
+      id: set.id,
+      title: set.title,
+      layout: 'insert',
+      language: set.language,
+      cardSlugs: slugs,
+    });
   }
   return {
     sets,

@@ -21,6 +21,7 @@ import type {
 import type { AcceptedPlan, CardPlan, RefusedPlan } from '../planning/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
 import { cardWords } from '../words/card.ts';
+import { langTag } from '../words/catalogue.ts';
 import { cupChartSpec, renderChartSvg } from './chart.ts';
 import { crossSection, type CrossSectionLayout } from './cross-section.ts';
 import {
@@ -59,6 +60,8 @@ export interface CardViewOptions {
   readonly units?: UnitSystem;
   /** Paper to lay out for; default the site's. */
   readonly paper?: PaperSize;
+  /** Language code of the card's words; default the site's. */
+  readonly language?: string;
 }
 
 /** Paper and type size of a printed card. */
@@ -193,6 +196,8 @@ export interface RefusalBlock {
 
 export interface StationCardView {
   readonly kind: 'station';
+  /** Document language tag of the card's page and PDF (words/catalogue.ts langTag). */
+  readonly lang: string;
   /** "<pot>--<coffee>--<stove>". */
   readonly id: string;
   readonly potId: string;
@@ -243,6 +248,8 @@ export interface InsertRow {
 
 export interface InsertCardView {
   readonly kind: 'insert';
+  /** Document language tag of the card's page and PDF (words/catalogue.ts langTag). */
+  readonly lang: string;
   /** The page slug: the coffee id (or "<coffee>--<set>", see paths.ts). */
   readonly id: string;
   readonly setId: string;
@@ -501,6 +508,7 @@ export async function stationCardView(
   const paths = stationPaths(request, catalogue.site.baseUrl);
   return {
     kind: 'station',
+    lang: langTag(options.language ?? catalogue.site.language),
     id: paths.pageUrl.slice('cards/'.length, -1),
     ...request,
     title: e.coffee.name,
@@ -607,6 +615,7 @@ export async function insertCardView(
   });
   return {
     kind: 'insert',
+    lang: langTag(options.language ?? catalogue.site.language),
     id: input.slug ?? input.coffeeId,
     setId: input.setId,
     coffeeId: input.coffeeId,

@@ -6,6 +6,7 @@
 import type { Catalogue } from '../content/types.ts';
 import type { AcceptedPlan } from '../planning/types.ts';
 import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
+import { langTag } from '../words/catalogue.ts';
 import type { InsertCardView, PageSetup, StationCardView } from './card-view.ts';
 import { pageSetup } from './card-view.ts';
 import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts';
@@ -14,6 +15,8 @@ import { setPaths, type CardPaths } from './paths.ts';
 
 export interface SiteInfo {
   readonly title: string;
+  /** Document language tag of the site's own pages (index, method, troubleshooting). */
+  readonly lang: string;
   readonly businessName: string;
   readonly contact: string;
   readonly page: PageSetup;
@@ -47,6 +50,8 @@ export interface SetView {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** Document language tag of the set's page and PDF. */
+  readonly lang: string;
   /** "Station cards" or "Bag inserts". */
   readonly layoutLabel: string;
   readonly paths: CardPaths;
@@ -121,6 +126,8 @@ export interface SetOutline {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** Language code of the set (content CardSet.language). */
+  readonly language: string;
   readonly cardSlugs: readonly string[];
 }
 
@@ -143,6 +150,7 @@ export function siteInfo(catalogue: Catalogue, builtOn: string): SiteInfo {
   const site = catalogue.site;
   return {
     title: cardWords.siteTitle,
+    lang: langTag(site.language),
     businessName: site.business.name,
     contact: site.business.contact,
     page: pageSetup(site.units, site.paper),
@@ -194,6 +202,7 @@ export function setViews(
     id: set.id,
     title: set.title,
     layout: set.layout,
+    lang: langTag(set.language),
     layoutLabel: set.layout === 'station' ? cardWords.index.station : cardWords.index.insert,
     paths: setPaths(set.id, baseUrl),
     cards: set.cardSlugs.map((slug) => {

@@ -4,9 +4,6 @@
  * shows comes worded from the card views (generator/words/card.ts); nothing here repeats it.
  */
 
-/** Language of every PDF (the `Lang` of the catalogue): the words modules are English. */
-export const PDF_LANG = 'en-GB';
-
 export const pdfWords = {
   /** Info `Creator` and XMP `CreatorTool`. */
   creator: 'stovecard',

@@ -76,6 +76,19 @@ describe('site.yaml', () => {
     expect(site.baseUrl).toBe('https://cards.test.example/');
   });
 
+  it('language: en when the site names none; a set without its own takes the site’s', async () => {
+    const { site } = await loadCatalogue(dir);
+    expect(site.language).toBe('en');
+    expect(site.sets.map((set) => set.language)).toEqual(site.sets.map(() => 'en'));
+  });
+
+  it('a language there is no catalogue for is refused at its line, listing the ones there are', async () => {
+    await put(dir, 'site.yaml', SITE.replace(/^units: /m, 'language: xx\nunits: '));
+    const issues = await catalogueIssues(dir);
+    expect(issues.map((i) => [i.field, i.code])).toEqual([['language', 'bad-enum']]);
+    expect(wording(issues[0]!.message).problem).toContain('`en`');
+  });
+
   it('without base_url there are no QR codes', async () => {
     const { site } = await loadCatalogue(dir);
     expect(site.baseUrl).toBeUndefined();

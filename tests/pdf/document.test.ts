@@ -51,6 +51,7 @@ describe('xmpInfo(info)', () => {
     const xml = xmpInfo({
       title: '<script>alert("x")</script> & Co',
       author: 'A <b>B</b>',
+      lang: 'en-GB',
       creator: 'stovecard',
       producer: 'PDFKit',
       date: new Date(Date.UTC(2024, 4, 1)),
@@ -68,6 +69,7 @@ describe('openPdf(meta)', () => {
     const open = openPdf({
       title,
       author: 'Brindlemoss Roastery',
+      lang: 'en-GB',
       date: new Date(Date.UTC(2024, 4, 1)),
       idSeed: seed,
     });

@@ -282,6 +282,7 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   const open = openPdf({
     title: pdfWords.setTitle(input.set.title),
     author: input.author,
+    lang: input.set.lang,
     date: pdfDate(input.builtOn, input.env),
     // The shell's /ID is not kept: mergeCardPages hashes the set's from all its objects.
     idSeed: JSON.stringify({ set: input.set.id }),

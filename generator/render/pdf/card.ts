@@ -86,6 +86,7 @@ export async function cardPdf(view: CardView, context: PdfContext): Promise<Card
   const open = openPdf({
     title: cardTitle(view),
     author: context.author,
+    lang: view.lang,
     date: pdfDate(view.footer.builtOn, context.env),
     idSeed: JSON.stringify(view),
   });

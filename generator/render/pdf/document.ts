@@ -14,7 +14,7 @@
  */
 import { createHash } from 'node:crypto';
 import PDFDocument from 'pdfkit';
-import { PDF_LANG, pdfWords } from '../../words/pdf.ts';
+import { pdfWords } from '../../words/pdf.ts';
 import { escapeXml } from '../svg.ts';
 import { registerPdfFonts, startingFont } from './fonts.ts';
 
@@ -24,6 +24,8 @@ export interface PdfMeta {
   /** The business that prints the cards. */
   readonly author: string;
   readonly subject?: string;
+  /** Document language tag (`/Lang`, dc:language): generator/words/catalogue.ts langTag. */
+  readonly lang: string;
   /** Creation and modification date (pdfDate). */
   readonly date: Date;
   /** Text the file identifier is hashed from: the content the document is made of. */
@@ -77,6 +79,7 @@ export function xmpInfo(info: {
   title: string;
   author: string;
   subject?: string;
+  lang: string;
   creator: string;
   producer: string;
   date: Date;
@@ -96,7 +99,7 @@ export function xmpInfo(info: {
     `<dc:title><rdf:Alt><rdf:li xml:lang="x-default">${x(info.title)}</rdf:li></rdf:Alt></dc:title>`,
     `<dc:creator><rdf:Seq><rdf:li>${x(info.author)}</rdf:li></rdf:Seq></dc:creator>`,
     description,
-    `<dc:language><rdf:Bag><rdf:li>${x(PDF_LANG)}</rdf:li></rdf:Bag></dc:language>`,
+    `<dc:language><rdf:Bag><rdf:li>${x(info.lang)}</rdf:li></rdf:Bag></dc:language>`,
     `</rdf:Description>`,
     `<rdf:Description rdf:about="" xmlns:pdf="http://ns.adobe.com/pdf/1.3/">`,
     `<pdf:Producer>${x(info.producer)}</pdf:Producer>`,
@@ -117,7 +120,7 @@ export function openPdf(meta: PdfMeta): OpenPdf {
     pdfVersion: '1.7',
     subset: 'PDF/A-2b',
     tagged: true,
-    lang: PDF_LANG,
+    lang: meta.lang,
     displayTitle: true,
     info: {
       Title: meta.title,
@@ -137,6 +140,7 @@ export function openPdf(meta: PdfMeta): OpenPdf {
     title: meta.title,
     author: meta.author,
     ...(meta.subject ? { subject: meta.subject } : {}),
+    lang: meta.lang,
     creator: pdfWords.creator,
     producer: PRODUCER,
     date: meta.date,

@@ -1,0 +1,18 @@
+/**
+ * The English catalogue: every sentence a customer reads on a card, an insert, a set page,
+ * the binder and the PDFs. Its shape is the `Messages` type (catalogue.ts): another
+ * language's catalogue must have every key, or tsc fails.
+ */
+import { cardWords, methodWords, troubleshootingWords } from './card.ts';
+import { pdfWords } from './pdf.ts';
+import { planWords } from './plan.ts';
+
+export const en = {
+  /** BCP 47 tag of this catalogue's text: HTML `lang` and the PDFs' `/Lang` and dc:language. */
+  langTag: 'en-GB',
+  card: cardWords,
+  method: methodWords,
+  troubleshooting: troubleshootingWords,
+  plan: planWords,
+  pdf: pdfWords,
+} as const;
