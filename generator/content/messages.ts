@@ -48,11 +48,19 @@ export interface ContentMessageArgs {
   readonly badUrl: readonly [value: string];
   readonly repeatedItem: readonly [value: unknown];
   readonly invalidValue: readonly [detail: string];
-  readonly valveAboveBase: readonly [valveMm: number, equivalentHeightMm: number];
-  readonly tubeGapAboveValve: readonly [gapMm: number, valveMm: number];
-  readonly spoutTooLow: readonly [spoutMm: number, lowestMm: number];
-  readonly basketWiderThanBase: readonly [basketMm: number, baseMm: number];
-  readonly tubeWiderThanBasket: readonly [tubeMm: number, basketMm: number];
+  readonly valveAboveBase: readonly [valve: number, equivalentHeight: number, unit: 'mm' | 'in'];
+  readonly tubeGapAboveValve: readonly [gap: number, valve: number, unit: 'mm' | 'in'];
+  readonly spoutTooLow: readonly [spout: number, lowest: number, unit: 'mm' | 'in'];
+  readonly basketWiderThanBase: readonly [basket: number, base: number, unit: 'mm' | 'in'];
+  readonly tubeWiderThanBasket: readonly [tube: number, basket: number, unit: 'mm' | 'in'];
+  readonly lengthInBothUnits: readonly [mmKey: string, inKey: string];
+  readonly lengthMissing: readonly [
+    mmKey: string,
+    inKey: string,
+    parentField: string,
+    mmSpec: ValueSpec,
+    inSpec: ValueSpec,
+  ];
   readonly reversedRange: readonly [low: number, high: number];
   readonly repeatedLevel: readonly [label: string, firstLine: number];
   readonly powerNotIncreasing: readonly [powerW: number, previousLabel: string, previousW: number];

@@ -29,8 +29,36 @@ const ajv = new Ajv({
   strictNumbers: true,
   allowUnionTypes: true,
 });
+type Schema = Readonly<Record<string, unknown>>;
+
 // `x-unit` names the unit of a number for the error words; editors ignore it.
 ajv.addKeyword({ keyword: 'x-unit', schemaType: 'string' });
+// `x-one-of-keys`: pairs of keys of which exactly one is written (`valve_height_mm` or
+// `valve_height_in`); a pair written twice or not at all is an error of this keyword.
+ajv.addKeyword({
+  keyword: 'x-one-of-keys',
+  type: 'object',
+  schemaType: 'array',
+  errors: true,
+  validate: function oneOfKeys(
+    pairs: readonly (readonly [string, string])[],
+    data: object,
+    parentSchema?: Schema,
+  ): boolean {
+    const errors: Partial<ErrorObject>[] = [];
+    for (const [first, second] of pairs) {
+      const written = [first, second].filter((key) => Object.hasOwn(data, key));
+      if (written.length === 1) continue;
+      errors.push({
+        keyword: 'x-one-of-keys',
+        params: { pair: [first, second], both: written.length === 2, properties: parentSchema?.properties },
+        message: written.length === 2 ? `both ${first} and ${second}` : `neither ${first} nor ${second}`,
+      });
+    }
+    (oneOfKeys as { errors?: Partial<ErrorObject>[] }).errors = errors;
+    return errors.length === 0;
+  },
+});
 
 const compiled = new Map<SchemaName, ValidateFunction>();
 
@@ -44,7 +72,6 @@ function validator(name: SchemaName): ValidateFunction {
   return validate;
 }
 
-type Schema = Readonly<Record<string, unknown>>;
 
 function specOf(schema: Schema | undefined): ValueSpec {
   if (!schema) return {};
@@ -100,6 +127,23 @@ function toIssue(error: ErrorObject, source: YamlSource): ContentIssue {
       const wording = message('missingKey', key, fieldName(path), specOf(properties?.[key]));
       // Point at the mapping the key belongs in (at its own key, `base:`), naming the missing field.
       const where = { ...locate(source, path, 'key'), field: fieldName([...path, key]) };
+      return new ContentIssue('missing-key', where, wording);
+    }
+    case 'x-one-of-keys': {
+      const [first, second] = error.params.pair as [string, string];
+      if (error.params.both) {
+        return at('repeated', message('lengthInBothUnits', first, second), [...path, second], 'key');
+      }
+      const properties = error.params.properties as Readonly<Record<string, Schema>> | undefined;
+      const wording = message(
+        'lengthMissing',
+        first,
+        second,
+        fieldName(path),
+        specOf(properties?.[first]),
+        specOf(properties?.[second]),
+      );
+      const where = { ...locate(source, path, 'key'), field: fieldName([...path, first]) };
       return new ContentIssue('missing-key', where, wording);
     }
     case 'additionalProperties': {

@@ -30,6 +30,14 @@ interface IssueAt {
   readonly message: ContentMessage;
 }
 
+type LengthUnit = 'mm' | 'in';
+
+/** A length as the person wrote it: "32 mm", "1.26 in"; `digits` fixes the decimals of a computed one. */
+function len(value: number, unit: LengthUnit, digits?: number): string {
+  const shown = digits === undefined ? String(value) : value.toFixed(unit === 'in' ? digits + 2 : digits);
+  return `${shown} ${unit}`;
+}
+
 interface UnitWords {
   /** What follows "a number": " of millimetres". */
   readonly ofUnit: string;
@@ -46,6 +54,8 @@ function unitWords(plural: string, written: readonly string[]): UnitWords {
 const UNITS: Readonly<Record<string, UnitWords>> = {
   mL: unitWords('millilitres', ['ml', 'millilitre', 'millilitres', 'milliliter', 'milliliters']),
   mm: unitWords('millimetres', ['mm', 'millimetre', 'millimetres', 'millimeter', 'millimeters']),
+  in: unitWords('inches', ['in', 'inch', 'inches', '"']),
+  '°F': unitWords('degrees Fahrenheit', ['f', '°f', 'ºf', 'degf', 'fahrenheit']),
   g: unitWords('grams', ['g', 'gr', 'gram', 'grams']),
   bar: unitWords('bar (gauge)', ['bar', 'bars']),
   'W/K': unitWords('watts per kelvin', ['w/k']),
@@ -390,38 +400,54 @@ const messageWords = {
 
   // ── Pots ────────────────────────────────────────────────────────────────────────────
 
-  valveAboveBase(valveMm: number, equivalentHeightMm: number): Wording {
+  valveAboveBase(valve: number, equivalentHeight: number, unit: LengthUnit): Wording {
     return {
-      problem: `the valve sits ${valveMm} mm above the floor, but a base of this sealed volume and diameter is only ${equivalentHeightMm.toFixed(1)} mm high`,
+      problem: `the valve sits ${len(valve, unit)} above the floor, but a base of this sealed volume and diameter is only ${len(equivalentHeight, unit, 1)} high`,
       fix: 'Measure the valve height from the floor inside the base, and check the sealed volume and inner diameter.',
     };
   },
 
-  tubeGapAboveValve(gapMm: number, valveMm: number): Wording {
+  tubeGapAboveValve(gap: number, valve: number, unit: LengthUnit): Wording {
     return {
-      problem: `the funnel tube ends ${gapMm} mm above the floor, not below the valve at ${valveMm} mm`,
-      fix: 'Measure the gap between the lower end of the funnel tube and the floor of the base (a few millimetres).',
+      problem: `the funnel tube ends ${len(gap, unit)} above the floor, not below the valve at ${len(valve, unit)}`,
+      fix: `Measure the gap between the lower end of the funnel tube and the floor of the base (${unit === 'in' ? 'a fraction of an inch' : 'a few millimetres'}).`,
     };
   },
 
-  spoutTooLow(spoutMm: number, lowestMm: number): Wording {
+  spoutTooLow(spout: number, lowest: number, unit: LengthUnit): Wording {
     return {
-      problem: `the spout is ${spoutMm} mm above the floor of the base, below the top of the basket at ${lowestMm.toFixed(1)} mm`,
+      problem: `the spout is ${len(spout, unit)} above the floor of the base, below the top of the basket at ${len(lowest, unit, 1)}`,
       fix: 'Measure the spout outlet from the floor of the base with the pot assembled.',
     };
   },
 
-  basketWiderThanBase(basketMm: number, baseMm: number): Wording {
+  basketWiderThanBase(basket: number, base: number, unit: LengthUnit): Wording {
     return {
-      problem: `a basket ${basketMm} mm across cannot sit inside a base ${baseMm} mm across`,
+      problem: `a basket ${len(basket, unit)} across cannot sit inside a base ${len(base, unit)} across`,
       fix: 'Check both diameters: measure inside the base and inside the basket.',
     };
   },
 
-  tubeWiderThanBasket(tubeMm: number, basketMm: number): Wording {
+  tubeWiderThanBasket(tube: number, basket: number, unit: LengthUnit): Wording {
     return {
-      problem: `the funnel tube (${tubeMm} mm inside) is not narrower than the basket (${basketMm} mm)`,
-      fix: 'Measure the inside of the tube below the basket, a few millimetres across.',
+      problem: `the funnel tube (${len(tube, unit)} inside) is not narrower than the basket (${len(basket, unit)})`,
+      fix: `Measure the inside of the tube below the basket, ${unit === 'in' ? 'about a quarter of an inch' : 'a few millimetres'} across.`,
+    };
+  },
+
+  lengthInBothUnits(mmKey: string, inKey: string): Wording {
+    return {
+      problem: `${code(mmKey)} and ${code(inKey)} give the same length twice`,
+      fix: `Keep one of them: ${code(mmKey)} in millimetres or ${code(inKey)} in inches.`,
+    };
+  },
+
+  lengthMissing(mmKey: string, inKey: string, parentField: string, mmSpec: ValueSpec, inSpec: ValueSpec): Wording {
+    const example = (key: string, spec: ValueSpec): string =>
+      code(spec.example === undefined ? `${key}: …` : `${key}: ${showExample(spec.example)}`);
+    return {
+      problem: `${inParent(parentField)} there is neither ${code(mmKey)} nor ${code(inKey)}`,
+      fix: `Add ${example(mmKey, mmSpec)} ${inParent(parentField)} in millimetres, or ${example(inKey, inSpec)} in inches.`,
     };
   },
 

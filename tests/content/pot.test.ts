@@ -6,7 +6,7 @@ import {
   defaultHeatLossWPerK,
   ROOM_AIR_CONVECTION_W_PER_M2K,
 } from '../../generator/content/pot-defaults.ts';
-import { contentWords } from '../../generator/words/content.ts';
+import { contentWords, wording } from '../../generator/words/content.ts';
 import { expectIssue, POT, rejection, tempFile, withLine } from './helpers.ts';
 
 async function potIssues(text: string) {
@@ -105,7 +105,7 @@ describe('loadPotFile checks the geometry', () => {
       column: 20,
       field: 'base.valve_height_mm',
       code: 'geometry',
-      wording: contentWords.valveAboveBase(50, heightMm),
+      wording: contentWords.valveAboveBase(50, heightMm, 'mm'),
     });
   });
 
@@ -116,7 +116,7 @@ describe('loadPotFile checks the geometry', () => {
       file: path,
       line: 13,
       field: 'funnel.tube_gap_mm',
-      wording: contentWords.tubeGapAboveValve(40, 32),
+      wording: contentWords.tubeGapAboveValve(40, 32, 'mm'),
     });
   });
 
@@ -129,7 +129,7 @@ describe('loadPotFile checks the geometry', () => {
       file: path,
       line: 15,
       field: 'upper.spout_height_mm',
-      wording: contentWords.spoutTooLow(60, heightMm + 15),
+      wording: contentWords.spoutTooLow(60, heightMm + 15, 'mm'),
     });
   });
 
@@ -142,7 +142,7 @@ describe('loadPotFile checks the geometry', () => {
       file: path,
       line: 10,
       field: 'funnel.basket_diameter_mm',
-      wording: contentWords.basketWiderThanBase(90, 84),
+      wording: contentWords.basketWiderThanBase(90, 84, 'mm'),
     });
   });
 
@@ -155,7 +155,7 @@ describe('loadPotFile checks the geometry', () => {
       file: path,
       line: 12,
       field: 'funnel.tube_inner_diameter_mm',
-      wording: contentWords.tubeWiderThanBasket(28, 28),
+      wording: contentWords.tubeWiderThanBasket(28, 28, 'mm'),
     });
   });
 
@@ -187,3 +187,48 @@ describe('loadPotFile names the file as given', () => {
     });
   });
 });
+
+describe('pot lengths in inches (`_in` instead of `_mm`)', () => {
+  /** The test pot with every length in inches: 1 in = 25.4 mm exactly (NIST SP 811, B.8). */
+  const inches = (text: string): string =>
+    text.replace(/^(\s*)(\w+)_mm: ([\d.]+)/gm, (_, indent, key, mm) => `${indent}${key}_in: ${Number(mm) / 25.4}`);
+
+  it('gives the same model as the same pot in millimetres (to 1e-12 relative)', async () => {
+    const metric = await loadPotFile(await tempFile('three-cup.yaml', POT));
+    const us = await loadPotFile(await tempFile('three-cup.yaml', inches(POT)));
+    expect(inches(POT)).toContain('valve_height_in:');
+    expect(inches(POT)).not.toContain('_mm:');
+    for (const [key, value] of Object.entries(metric.model)) {
+      const other = (us.model as unknown as Record<string, unknown>)[key];
+      if (typeof value === 'number') expect(Math.abs((other as number) / value - 1), key).toBeLessThan(1e-12);
+      else expect(other, key).toEqual(value);
+    }
+  });
+
+  it('a length written both ways is refused at the `_in` key', async () => {
+    const both = POT.replace(/^(\s*)valve_height_mm: .*$/m, '$&\n$1valve_height_in: 1.26');
+    const { issues } = await potIssues(both);
+    expect(issues.map((i) => [i.field, i.code])).toEqual([['base.valve_height_in', 'repeated']]);
+    expect(wording(issues[0]!.message)).toEqual(contentWords.lengthInBothUnits('valve_height_mm', 'valve_height_in'));
+  });
+
+  it('a length written neither way is refused at its part, naming both keys', async () => {
+    const { issues } = await potIssues(withoutKey(POT, 'tube_gap_mm'));
+    expect(issues.map((i) => [i.field, i.code])).toEqual([['funnel.tube_gap_mm', 'missing-key']]);
+    expect(wording(issues[0]!.message).fix).toContain('`tube_gap_in: 0.16`');
+  });
+
+  it('a geometry problem in an inch pot is told in inches', async () => {
+    const { issues } = await potIssues(inches(POT).replace(/valve_height_in: [\d.]+/, 'valve_height_in: 2'));
+    expect(issues.map((i) => i.field)).toEqual(['base.valve_height_in']);
+    const text = wording(issues[0]!.message).problem;
+    // base height 260 mL / (π · 42² mm²) = 46.92 mm = 1.847 in
+    expect(text).toContain('2 in above the floor');
+    expect(text).toContain('1.847 in high');
+    expect(text).not.toContain('mm');
+  });
+});
+
+function withoutKey(text: string, key: string): string {
+  return text.replace(new RegExp(`^\\s*${key}: .*\\n`, 'm'), '');
+}

@@ -148,15 +148,17 @@ describe('schemaIssues words each kind of mistake', () => {
   it('a missing required key points at the parent mapping and says what to add', () => {
     const issues = issuesOf('pot', withoutLine(POT, 'tube_gap_mm'));
     const spec: ValueSpec = { type: 'number', unit: 'mm', minimum: 0.5, maximum: 50, example: 4 };
+    const inches: ValueSpec = { type: 'number', unit: 'in', minimum: 0.02, maximum: 1.97, example: 0.16 };
     const issue = expectIssue(issues, {
       file: FILE,
       line: 9,
       column: 1,
       field: 'funnel.tube_gap_mm',
       code: 'missing-key',
-      wording: contentWords.missingKey('tube_gap_mm', 'funnel', spec),
+      wording: contentWords.lengthMissing('tube_gap_mm', 'tube_gap_in', 'funnel', spec, inches),
     });
     expect(wording(issue.message).fix).toContain('`tube_gap_mm: 4` under `funnel`');
+    expect(wording(issue.message).fix).toContain('`tube_gap_in: 0.16` in inches');
   });
 
   it('a missing top-level key points at the document root', () => {
