@@ -53,7 +53,7 @@ export interface ContentMessageArgs {
   readonly spoutTooLow: readonly [spout: number, lowest: number, unit: 'mm' | 'in'];
   readonly basketWiderThanBase: readonly [basket: number, base: number, unit: 'mm' | 'in'];
   readonly tubeWiderThanBasket: readonly [tube: number, basket: number, unit: 'mm' | 'in'];
-  readonly lengthInBothUnits: readonly [mmKey: string, inKey: string];
+  readonly bothUnits: readonly [firstKey: string, secondKey: string];
   readonly lengthMissing: readonly [
     mmKey: string,
     inKey: string,

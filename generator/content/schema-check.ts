@@ -34,13 +34,10 @@ type Schema = Readonly<Record<string, unknown>>;
 // `x-unit` names the unit of a number for the error words; editors ignore it.
 ajv.addKeyword({ keyword: 'x-unit', schemaType: 'string' });
 // `x-one-of-keys`: pairs of keys of which exactly one is written (`valve_height_mm` or
-// `valve_height_in`); a pair written twice or not at all is an error of this keyword.
-ajv.addKeyword({
-  keyword: 'x-one-of-keys',
-  type: 'object',
-  schemaType: 'array',
-  errors: true,
-  validate: function oneOfKeys(
+// `valve_height_in`); `x-at-most-one-of-keys`: pairs of which one may be written
+// (`kettle_presets_c` or `kettle_presets_f`). A pair broken is an error of the keyword.
+function keyPairs(required: boolean) {
+  return function pairsCheck(
     pairs: readonly (readonly [string, string])[],
     data: object,
     parentSchema?: Schema,
@@ -48,17 +45,23 @@ ajv.addKeyword({
     const errors: Partial<ErrorObject>[] = [];
     for (const [first, second] of pairs) {
       const written = [first, second].filter((key) => Object.hasOwn(data, key));
-      if (written.length === 1) continue;
+      if (written.length === 1 || (written.length === 0 && !required)) continue;
       errors.push({
         keyword: 'x-one-of-keys',
         params: { pair: [first, second], both: written.length === 2, properties: parentSchema?.properties },
         message: written.length === 2 ? `both ${first} and ${second}` : `neither ${first} nor ${second}`,
       });
     }
-    (oneOfKeys as { errors?: Partial<ErrorObject>[] }).errors = errors;
+    (pairsCheck as { errors?: Partial<ErrorObject>[] }).errors = errors;
     return errors.length === 0;
-  },
-});
+  };
+}
+for (const [keyword, required] of [
+  ['x-one-of-keys', true],
+  ['x-at-most-one-of-keys', false],
+] as const) {
+  ajv.addKeyword({ keyword, type: 'object', schemaType: 'array', errors: true, validate: keyPairs(required) });
+}
 
 const compiled = new Map<SchemaName, ValidateFunction>();
 
@@ -132,7 +135,7 @@ function toIssue(error: ErrorObject, source: YamlSource): ContentIssue {
     case 'x-one-of-keys': {
       const [first, second] = error.params.pair as [string, string];
       if (error.params.both) {
-        return at('repeated', message('lengthInBothUnits', first, second), [...path, second], 'key');
+        return at('repeated', message('bothUnits', first, second), [...path, second], 'key');
       }
       const properties = error.params.properties as Readonly<Record<string, Schema>> | undefined;
       const wording = message(

@@ -8,7 +8,7 @@ import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { unknownIdIssues, type KnownIds, type ReferencedKind } from './references.ts';
 import type { CardRequest, CardSet, PaperSize, SiteEntry, UnitSystem } from './types.ts';
-import { celsiusToK } from './units.ts';
+import { celsiusToK, fahrenheitToK } from './units.ts';
 import { issueAt, positionAt, refAt, type YamlPath, type YamlSource } from './yaml-source.ts';
 
 interface CardYaml {
@@ -36,6 +36,7 @@ export interface SiteYaml {
   readonly units: UnitSystem;
   readonly paper: PaperSize;
   readonly kettle_presets_c?: readonly number[];
+  readonly kettle_presets_f?: readonly number[];
   readonly room: { readonly ambient_c: number; readonly altitude_m?: number };
   readonly base_url?: string;
   readonly sets: readonly SetYaml[];
@@ -169,6 +170,12 @@ function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: Kn
   return { cards, coffeeIds, issues };
 }
 
+/** The kettle presets in K, ascending, from °C or °F (the schema allows one of the two). */
+function kettlePresetsK(data: SiteYaml): number[] {
+  const fromF = (data.kettle_presets_f ?? []).map(fahrenheitToK);
+  return [...(data.kettle_presets_c ?? []).map(celsiusToK), ...fromF].sort((a, b) => a - b);
+}
+
 /** The language of a site or set that names none. */
 export const DEFAULT_LANGUAGE = 'en';
 
@@ -214,7 +221,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
     language: data.language ?? DEFAULT_LANGUAGE,
     units: data.units,
     paper: data.paper,
-    kettlePresetsK: [...(data.kettle_presets_c ?? [])].sort((a, b) => a - b).map(celsiusToK),
+    kettlePresetsK: kettlePresetsK(data),
     room: { ambientK: celsiusToK(data.room.ambient_c), altitudeM: data.room.altitude_m ?? 0 },
     baseUrl,
     sets,

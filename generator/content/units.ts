@@ -4,7 +4,11 @@
  * 9th ed., 2019; the bar is 10⁵ Pa exactly). Dividing by an exact power of ten rounds once,
  * so 84 mm gives 0.084 m, not 0.08400000000000001 m.
  */
+import { fromCelsius } from '../units.ts';
+
 export { fromCelsius as celsiusToK, fromMl as millilitresToM3 } from '../units.ts';
+
+const celsiusToK = fromCelsius;
 
 /** 1 mm = 1e-3 m: millimetresToM(84) = 0.084. */
 export const millimetresToM = (mm: number): number => mm / 1e3;
@@ -20,3 +24,6 @@ export const gramsPerMlToKgPerM3 = (gPerMl: number): number => gPerMl * 1e3;
 
 /** g of water per g of coffee is a ratio: the same number in kg/kg. */
 export const gramsPerGramToKgPerKg = (gPerG: number): number => gPerG;
+
+/** °F → K: (°F − 32) × 5/9 + 273.15 (NIST SP 811, B.8): fahrenheitToK(212) = 373.15. */
+export const fahrenheitToK = (f: number): number => celsiusToK(((f - 32) * 5) / 9);

@@ -435,10 +435,10 @@ const messageWords = {
     };
   },
 
-  lengthInBothUnits(mmKey: string, inKey: string): Wording {
+  bothUnits(firstKey: string, secondKey: string): Wording {
     return {
-      problem: `${code(mmKey)} and ${code(inKey)} give the same length twice`,
-      fix: `Keep one of them: ${code(mmKey)} in millimetres or ${code(inKey)} in inches.`,
+      problem: `${code(firstKey)} and ${code(secondKey)} say the same thing in two units`,
+      fix: `Keep one of them, ${code(firstKey)} or ${code(secondKey)}.`,
     };
   },
 

@@ -209,7 +209,7 @@ describe('pot lengths in inches (`_in` instead of `_mm`)', () => {
     const both = POT.replace(/^(\s*)valve_height_mm: .*$/m, '$&\n$1valve_height_in: 1.26');
     const { issues } = await potIssues(both);
     expect(issues.map((i) => [i.field, i.code])).toEqual([['base.valve_height_in', 'repeated']]);
-    expect(wording(issues[0]!.message)).toEqual(contentWords.lengthInBothUnits('valve_height_mm', 'valve_height_in'));
+    expect(wording(issues[0]!.message)).toEqual(contentWords.bothUnits('valve_height_mm', 'valve_height_in'));
   });
 
   it('a length written neither way is refused at its part, naming both keys', async () => {

@@ -76,6 +76,26 @@ describe('site.yaml', () => {
     expect(site.baseUrl).toBe('https://cards.test.example/');
   });
 
+  it('kettle_presets_f in °F gives the same presets in K (°F − 32) × 5/9 + 273.15 (NIST SP 811, B.8)', async () => {
+    await put(dir, 'site.yaml', withLine(SITE, 'paper', 'paper: A5\nkettle_presets_f: [212, 158, 176]'));
+    const { site } = await loadCatalogue(dir);
+    // 158 °F = 70 °C, 176 °F = 80 °C, 212 °F = 100 °C exactly
+    expect(site.kettlePresetsK.map((k) => Math.round((k - 273.15) * 1e9) / 1e9)).toEqual([70, 80, 100]);
+  });
+
+  it('kettle presets in both °C and °F are refused at the °F key', async () => {
+    await put(
+      dir,
+      'site.yaml',
+      withLine(SITE, 'paper', 'paper: A5\nkettle_presets_c: [70]\nkettle_presets_f: [158]'),
+    );
+    const issues = await catalogueIssues(dir);
+    expect(issues.map((i) => [i.field, i.code, i.line])).toEqual([['kettle_presets_f', 'repeated', 5]]);
+    expect(wording(issues[0]!.message)).toEqual(
+      contentWords.bothUnits('kettle_presets_c', 'kettle_presets_f'),
+    );
+  });
+
   it('language: en when the site names none; a set without its own takes the site’s', async () => {
     const { site } = await loadCatalogue(dir);
     expect(site.language).toBe('en');
