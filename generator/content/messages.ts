@@ -36,12 +36,21 @@ export interface ContentMessageArgs {
   readonly tooManyAliases: readonly [limit: number];
   readonly nestedTooDeeply: readonly [];
   readonly emptyFile: readonly [kindName: ContentKindName];
-  readonly unknownKey: readonly [key: string, parentField: string, suggestion: string | undefined, allowed: readonly string[]];
+  readonly unknownKey: readonly [
+    key: string,
+    parentField: string,
+    suggestion: string | undefined,
+    allowed: readonly string[],
+  ];
   readonly missingKey: readonly [key: string, parentField: string, spec: ValueSpec];
   readonly wrongType: readonly [spec: ValueSpec, value: unknown, sourceText?: string];
   readonly notFinite: readonly [spec: ValueSpec, sourceText: string];
   readonly outOfRange: readonly [spec: ValueSpec, value: number, sourceText?: string];
-  readonly badEnum: readonly [value: unknown, allowed: readonly string[], suggestion: string | undefined];
+  readonly badEnum: readonly [
+    value: unknown,
+    allowed: readonly string[],
+    suggestion: string | undefined,
+  ];
   readonly listLength: readonly [spec: ValueSpec, count: number];
   readonly textLength: readonly [maxLength: number | undefined, length: number];
   readonly badId: readonly [value: string, suggestion: string];
@@ -67,15 +76,30 @@ export interface ContentMessageArgs {
   readonly brewWithoutObservation: readonly [];
   readonly readingsOutOfOrder: readonly [tS: number, previousS: number];
   readonly sputterBeforeFirstCoffee: readonly [sputterS: number, firstCoffeeS: number];
-  readonly unknownId: readonly [kindName: ContentKindName, id: string, suggestion: string | undefined, known: readonly string[]];
-  readonly unknownLevel: readonly [level: string, stoveId: string, suggestion: string | undefined, labels: readonly string[]];
+  readonly unknownId: readonly [
+    kindName: ContentKindName,
+    id: string,
+    suggestion: string | undefined,
+    known: readonly string[],
+  ];
+  readonly unknownLevel: readonly [
+    level: string,
+    stoveId: string,
+    suggestion: string | undefined,
+    labels: readonly string[],
+  ];
   readonly repeatedSetId: readonly [id: string, firstLine: number];
   readonly keyNotForLayout: readonly [key: string, layout: string, belongsTo: string];
   readonly missingForLayout: readonly [key: string, layout: string, example: string];
   readonly cardNeedsPotAndCoffee: readonly [];
   readonly cardMixesForms: readonly [];
   readonly everyFlagFalse: readonly [];
-  readonly repeatedCard: readonly [potId: string, coffeeId: string, stoveId: string, firstLine: number];
+  readonly repeatedCard: readonly [
+    potId: string,
+    coffeeId: string,
+    stoveId: string,
+    firstLine: number,
+  ];
 }
 
 export type ContentMessageKey = keyof ContentMessageArgs;
@@ -85,6 +109,9 @@ export type ContentMessage = {
 }[ContentMessageKey];
 
 /** `message('unknownKey', key, parent, suggestion, allowed)`: a message with its facts. */
-export function message<K extends ContentMessageKey>(key: K, ...args: ContentMessageArgs[K]): ContentMessage {
+export function message<K extends ContentMessageKey>(
+  key: K,
+  ...args: ContentMessageArgs[K]
+): ContentMessage {
   return { key, args } as ContentMessage;
 }

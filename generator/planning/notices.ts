@@ -24,7 +24,12 @@ export const planNotices = {
     code: 'no-plan-fits',
     facts: { lowS, highS, tooFast },
   }),
-  outsideCheckedRange: (quantity: CheckedQuantity, value: number, low: number, high: number): PlanWarning => ({
+  outsideCheckedRange: (
+    quantity: CheckedQuantity,
+    value: number,
+    low: number,
+    high: number,
+  ): PlanWarning => ({
     code: 'outside-checked-range',
     facts: { quantity, value, low, high },
   }),

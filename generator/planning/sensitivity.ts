@@ -13,7 +13,8 @@ import { brewSetup, roomModel } from './setup.ts';
 import type { AcceptedPlan } from './types.ts';
 
 /** The one input a row changes ('baseline': the card's own recipe). */
-export type MoveCode = 'baseline' | 'finer' | 'coarser' | 'less-water' | 'less-heat' | 'more-heat' | 'cold-start';
+export type MoveCode =
+  'baseline' | 'finer' | 'coarser' | 'less-water' | 'less-heat' | 'more-heat' | 'cold-start';
 
 interface Variant {
   readonly change: MoveCode;

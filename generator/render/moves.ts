@@ -24,14 +24,13 @@ export function movesView(
     heading: troubleshootingWords.movesHeading,
     intro: troubleshootingWords.movesIntro(names.pot, names.coffee, names.stove),
     columns: troubleshootingWords.movesColumns,
-    rows: rows.map(
-      (row): MoveRow => ({
-        change: changeWords[row.change],
-        firstCoffee: row.firstCoffeeS === null ? troubleshootingWords.noCoffee : clock(row.firstCoffeeS),
-        meanTemperature: row.meanK === null ? '—' : temperature(row.meanK, units).text,
-        inBand: row.inBandShare === null ? '—' : share(row.inBandShare).text,
-        peak: pressure(row.peakGaugePa, units).text,
-      }),
-    ),
+    rows: rows.map((row): MoveRow => ({
+      change: changeWords[row.change],
+      firstCoffee:
+        row.firstCoffeeS === null ? troubleshootingWords.noCoffee : clock(row.firstCoffeeS),
+      meanTemperature: row.meanK === null ? '—' : temperature(row.meanK, units).text,
+      inBand: row.inBandShare === null ? '—' : share(row.inBandShare).text,
+      peak: pressure(row.peakGaugePa, units).text,
+    })),
   };
 }

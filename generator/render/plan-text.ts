@@ -7,7 +7,16 @@
 import type { UnitSystem } from '../content/types.ts';
 import type { CheckedQuantity, PlanWarning, Refusal } from '../planning/types.ts';
 import { planWords, type RefusalText } from '../words/plan.ts';
-import { altitude, fillVolume, lengthDown, pressure, quantity, share, temperature, waterVolume } from './format.ts';
+import {
+  altitude,
+  fillVolume,
+  lengthDown,
+  pressure,
+  quantity,
+  share,
+  temperature,
+  waterVolume,
+} from './format.ts';
 
 export function refusalText(refusal: Refusal, units: UnitSystem): RefusalText {
   switch (refusal.code) {
@@ -23,7 +32,11 @@ export function refusalText(refusal: Refusal, units: UnitSystem): RefusalText {
     }
     case 'pressure-near-valve': {
       const f = refusal.facts;
-      return planWords.pressureNearValve(pressure(f.peakPa, units).text, pressure(f.valvePa, units).text, f.grind);
+      return planWords.pressureNearValve(
+        pressure(f.peakPa, units).text,
+        pressure(f.valvePa, units).text,
+        f.grind,
+      );
     }
     case 'no-delivery':
       return planWords.noDelivery();

@@ -41,7 +41,8 @@ export function isLanguage(code: string): code is Language {
 
 /** The catalogue of a language code the schema accepted; an unknown code is a bug upstream. */
 export function wordsFor(language: string): Messages {
-  if (!isLanguage(language)) throw new Error(`no words catalogue for language ${JSON.stringify(language)}`);
+  if (!isLanguage(language))
+    throw new Error(`no words catalogue for language ${JSON.stringify(language)}`);
   return CATALOGUES[language];
 }
 

@@ -42,7 +42,18 @@ const ALLOWED: Record<Layer, readonly Layer[]> = {
   words: ['brew', 'content', 'planning', 'calibration'],
   render: ['brew', 'content', 'planning', 'words', 'units'],
   pipeline: ['brew', 'content', 'planning', 'calibration', 'render', 'words', 'units'],
-  cli: ['physics', 'numerics', 'units', 'brew', 'content', 'planning', 'calibration', 'pipeline', 'render', 'words'],
+  cli: [
+    'physics',
+    'numerics',
+    'units',
+    'brew',
+    'content',
+    'planning',
+    'calibration',
+    'pipeline',
+    'render',
+    'words',
+  ],
 };
 
 /** Layers whose imports of another layer must be type-only. */
@@ -72,7 +83,8 @@ interface ImportLine {
 }
 
 /** Static imports/exports with a `from`, side-effect imports, and dynamic import('…'). */
-const IMPORT = /(?:^|\n)\s*(import|export)\s+(type\s+)?(?:[^'";]*?\sfrom\s+)?['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g;
+const IMPORT =
+  /(?:^|\n)\s*(import|export)\s+(type\s+)?(?:[^'";]*?\sfrom\s+)?['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g;
 
 function importsOf(file: string, text: string): ImportLine[] {
   const found: ImportLine[] = [];
@@ -104,7 +116,8 @@ function forbiddenImports(files: readonly string[]): string[] {
       }
       if (to === from) continue;
       if (!ALLOWED[from].includes(to)) bad.push(`${where}: ${from} may not import ${to}`);
-      else if (TYPES_ONLY.has(from) && !imp.typeOnly) bad.push(`${where}: ${from} may import only types`);
+      else if (TYPES_ONLY.has(from) && !imp.typeOnly)
+        bad.push(`${where}: ${from} may import only types`);
     }
   }
   return bad;
@@ -124,7 +137,9 @@ describe('generator/ import direction', () => {
   });
 
   it('brew, planning, content and calibration import nothing from words/', () => {
-    const model = FILES.filter((f) => ['brew', 'planning', 'content', 'calibration'].includes(layerOf(f)!));
+    const model = FILES.filter((f) =>
+      ['brew', 'planning', 'content', 'calibration'].includes(layerOf(f)!),
+    );
     const toWords = model.flatMap((file) =>
       importsOf(file, readFileSync(file, 'utf8'))
         .filter((imp) => layerOf(path.resolve(path.dirname(file), imp.specifier)) === 'words')
@@ -154,7 +169,11 @@ describe('generator/ import direction', () => {
       const to = layerOf(path.resolve(dir, i.specifier));
       return to !== 'brew' && !ALLOWED.brew.includes(to!);
     });
-    expect(bad.map((i) => i.specifier)).toEqual(['../words/card.ts', '../planning/types.ts', '../render/format.ts']);
+    expect(bad.map((i) => i.specifier)).toEqual([
+      '../words/card.ts',
+      '../planning/types.ts',
+      '../render/format.ts',
+    ]);
   });
 });
 
@@ -166,10 +185,11 @@ describe('the plan cache follows the model code only', () => {
     for (const folder of ['brew', 'planning', 'physics', 'numerics']) {
       expect(PLAN_SOURCES).toContain(`generator/${folder}`);
     }
-    const runtime = FILES.filter((f) => ['brew', 'planning'].includes(layerOf(f)!)).flatMap((file) =>
-      importsOf(file, readFileSync(file, 'utf8'))
-        .filter((imp) => imp.specifier.startsWith('.') && !imp.typeOnly)
-        .map((imp) => layerOf(path.resolve(path.dirname(file), imp.specifier))),
+    const runtime = FILES.filter((f) => ['brew', 'planning'].includes(layerOf(f)!)).flatMap(
+      (file) =>
+        importsOf(file, readFileSync(file, 'utf8'))
+          .filter((imp) => imp.specifier.startsWith('.') && !imp.typeOnly)
+          .map((imp) => layerOf(path.resolve(path.dirname(file), imp.specifier))),
     );
     expect([...new Set(runtime)].sort()).toEqual(['brew', 'numerics', 'physics', 'planning']);
   });

@@ -23,7 +23,8 @@ function metricHits(text: string): string[] {
   const hits: string[] = [];
   const flat = text.replace(/\s+/g, ' ');
   const global = new RegExp(METRIC.source, 'g');
-  for (const m of flat.matchAll(global)) hits.push(flat.slice(Math.max(0, m.index! - 40), m.index! + 20));
+  for (const m of flat.matchAll(global))
+    hits.push(flat.slice(Math.max(0, m.index! - 40), m.index! + 20));
   return hits;
 }
 
@@ -52,9 +53,21 @@ async function filesUnder(dir: string, ext: string): Promise<string[]> {
 
 describe('the metric-unit scanner (a check that it can fail)', () => {
   it('finds each metric unit as cards print them, and passes US text and the word "bar" in a name', () => {
-    for (const metric of ['62\u00a0°C', '150\u00a0mL', '32\u00a0mm', '1.50\u00a0bar', 'Coffee in the cup (mL)'])
+    for (const metric of [
+      '62\u00a0°C',
+      '150\u00a0mL',
+      '32\u00a0mm',
+      '1.50\u00a0bar',
+      'Coffee in the cup (mL)',
+    ])
       expect(metricHits(`x ${metric} y`), metric).toHaveLength(1);
-    for (const us of ['144\u00a0°F', '5.1\u00a0fl oz', '1.26\u00a0in', '21.8\u00a0psi', 'Café Quorvel — bar station'])
+    for (const us of [
+      '144\u00a0°F',
+      '5.1\u00a0fl oz',
+      '1.26\u00a0in',
+      '21.8\u00a0psi',
+      'Café Quorvel — bar station',
+    ])
       expect(metricHits(us), us).toEqual([]);
   });
 });
@@ -70,20 +83,30 @@ describe('refusals and warnings in US units', () => {
     // 1 bar = 14.5038 psi (NIST SP 811, B.8)
     expect(pressure.reason).toContain('14.5\u00a0psi');
     expect(pressure.reason).toContain('21.8\u00a0psi');
-    for (const text of [fill, pressure]) expect(metricHits(text.reason + text.suggestion)).toEqual([]);
+    for (const text of [fill, pressure])
+      expect(metricHits(text.reason + text.suggestion)).toEqual([]);
   });
 
   it('a model-range warning gives the altitude in feet and the room in °F', () => {
-    const altitude = warningText(planNotices.outsideCheckedRange('altitudeM', 3200, ...CHECKED.altitudeM), 'us');
+    const altitude = warningText(
+      planNotices.outsideCheckedRange('altitudeM', 3200, ...CHECKED.altitudeM),
+      'us',
+    );
     // 3200 m = 10,499 ft; 3000 m = 9,843 ft (1 ft = 0.3048 m exactly)
     expect(altitude).toContain('10499\u00a0ft');
     expect(altitude).toContain('9843\u00a0ft');
-    const room = warningText(planNotices.outsideCheckedRange('ambientK', 310, ...CHECKED.ambientK), 'us');
+    const room = warningText(
+      planNotices.outsideCheckedRange('ambientK', 310, ...CHECKED.ambientK),
+      'us',
+    );
     // 310 K = 98.3 °F; 283.15 K = 50 °F; 308.15 K = 95 °F
     expect(room).toContain('98\u00a0°F');
     expect(room).toContain('50\u00a0°F');
     expect(room).toContain('95\u00a0°F');
-    const volume = warningText(planNotices.outsideCheckedRange('sealedVolumeM3', 40e-6, ...CHECKED.sealedVolumeM3), 'us');
+    const volume = warningText(
+      planNotices.outsideCheckedRange('sealedVolumeM3', 40e-6, ...CHECKED.sealedVolumeM3),
+      'us',
+    );
     for (const w of [altitude, room, volume]) expect(metricHits(w), w).toEqual([]);
   });
 });
@@ -100,7 +123,9 @@ describe('a US build of the demo', () => {
     // Invented: a bed so tight the pressure nears the valve (refused), and a very open one.
     await writeFile(
       path.join(content, 'coffees', 'powder-fine.yaml'),
-      house.replace(/^permeability_m2: .*$/m, 'permeability_m2: 1.5e-14').replace(/^grind: .*$/m, 'grind: fine'),
+      house
+        .replace(/^permeability_m2: .*$/m, 'permeability_m2: 1.5e-14')
+        .replace(/^grind: .*$/m, 'grind: fine'),
     );
     await writeFile(
       path.join(content, 'coffees', 'open-bed.yaml'),

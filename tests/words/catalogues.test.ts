@@ -18,7 +18,8 @@ function leaves(value: unknown, at = ''): Map<string, string> {
     out.set(at, `list/${value.length}`);
     value.forEach((item, i) => leaves(item, `${at}[${i}]`).forEach((v, k) => out.set(k, v)));
   } else if (value !== null && typeof value === 'object') {
-    for (const [key, child] of Object.entries(value)) leaves(child, at === '' ? key : `${at}.${key}`).forEach((v, k) => out.set(k, v));
+    for (const [key, child] of Object.entries(value))
+      leaves(child, at === '' ? key : `${at}.${key}`).forEach((v, k) => out.set(k, v));
   } else out.set(at, typeof value);
   return out;
 }
@@ -40,8 +41,15 @@ describe('words catalogues', () => {
       const own = leaves(wordsFor(language));
       const missing = [...reference.keys()].filter((k) => !own.has(k));
       const extra = [...own.keys()].filter((k) => !reference.has(k));
-      const differ = [...reference].filter(([k, v]) => own.has(k) && own.get(k) !== v).map(([k]) => k);
-      expect({ language, missing, extra, differ }).toEqual({ language, missing: [], extra: [], differ: [] });
+      const differ = [...reference]
+        .filter(([k, v]) => own.has(k) && own.get(k) !== v)
+        .map(([k]) => k);
+      expect({ language, missing, extra, differ }).toEqual({
+        language,
+        missing: [],
+        extra: [],
+        differ: [],
+      });
     }
   });
 
