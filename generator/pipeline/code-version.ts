@@ -32,6 +32,8 @@ export const PLAN_SOURCES: readonly string[] = [
 export const RENDER_SOURCES: readonly string[] = [
   'generator/render',
   'generator/words',
+  'generator/units.ts', // the conversions the views print through
+  'generator/content/heat-kind.ts', // how an insert groups its stoves
   'generator/pipeline/site-data.ts', // what a view is given (its catalogue, its fingerprint)
   'generator/pipeline/render-cache.ts',
   'generator/pipeline/pdf-step.ts', // what a set's PDF is given

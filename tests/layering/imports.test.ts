@@ -194,3 +194,21 @@ describe('the plan cache follows the model code only', () => {
     expect([...new Set(runtime)].sort()).toEqual(['brew', 'numerics', 'physics', 'planning']);
   });
 });
+
+describe('the render cache follows the code a view runs', () => {
+  it('every runtime import of render/ and words/ lies in RENDER_SOURCES or PLAN_SOURCES', async () => {
+    const { PLAN_SOURCES, RENDER_SOURCES } =
+      await import('../../generator/pipeline/code-version.ts');
+    const hashed = [...PLAN_SOURCES, ...RENDER_SOURCES].map((s) => path.resolve(s));
+    const covered = (file: string): boolean =>
+      hashed.some((h) => file === h || file.startsWith(`${h}${path.sep}`));
+    const outside = FILES.filter((f) => ['render', 'words'].includes(layerOf(f)!)).flatMap((file) =>
+      importsOf(file, readFileSync(file, 'utf8'))
+        .filter((imp) => imp.specifier.startsWith('.') && !imp.typeOnly)
+        .map((imp) => path.resolve(path.dirname(file), imp.specifier))
+        .filter((target) => !covered(target))
+        .map((target) => `${path.relative('.', file)} → ${path.relative('.', target)}`),
+    );
+    expect(outside).toEqual([]);
+  });
+});
