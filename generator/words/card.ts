@@ -98,8 +98,11 @@ export const cardWords = {
     inBand: (band: string): string => `Brewed at ${band}`,
     inBandValue: (plan: string, cold: string): string => `${plan} of the cup (cold start: ${cold})`,
     peakPressure: 'Highest pressure in the base',
-    peakPressureValue: (peak: string, valve: string, assumed: boolean): string =>
-      `${peak}; the valve opens at ${valve}${assumed ? ' (assumed, the maker does not state it)' : ''}`,
+    peakPressureValue: (peak: string, valve: string): string =>
+      `${peak}; the valve opens at ${valve}`,
+    /** The valve's opening pressure when the pot's entry gives none: `valve` is "about 1.5 bar". */
+    peakPressureAssumedValue: (peak: string, valve: string): string =>
+      `${peak}; the valve is taken to open at about ${valve}, assumed because no opening pressure was given (ask the maker for it)`,
     boiling: 'Water boils here at',
     boilingValue: (boiling: string, altitude: string): string =>
       `${boiling} (altitude ${altitude})`,
@@ -127,17 +130,39 @@ export const cardWords = {
     change: 'What to change',
     note: 'This pot, coffee and stove were not given a recipe because it would not be safe or would not brew well.',
   },
+  /**
+   * The usual cautions of a stovetop pressure pot, in our own words. `full` and `compact`
+   * are parallel lists (the same caution at the same index); `compact` is for pages where
+   * space is short (A6 cards, the running foot of the binder's text pages). Every page a
+   * customer, barista or trainee reads carries one of them and the deferral.
+   */
   cautions: {
     heading: 'Safety',
-    items: [
-      'Scalding water and hot metal: hold the handle only and use a cloth on the base.',
+    full: [
+      'Scalding water, steam and hot metal: hold the pot by its handle only and use a cloth on the base.',
+      'Before closing the pot, check that the gasket and the filter plate are whole and in place, and wipe the rim of the basket clean.',
       'Never fill above the valve.',
       'Never tamp the coffee.',
       'Never heat the pot empty.',
-      'Do not open the pot while it is hot.',
-      'Keep the safety valve clean and free to move.',
-      'Follow the maker’s instructions and local rules.',
+      'Keep the flame no wider than the base, and the handle away from the flame.',
+      'Never leave the pot unattended on the heat; keep children away.',
+      'When it sputters, keep your face and hands away from the spout and the lid.',
+      'Never block the safety valve or point it at anyone; keep it clean and free to move, and do not use the pot with a damaged valve or gasket.',
+      'Before opening, let the base cool, or cool it under the cold tap holding only the handle.',
     ] as readonly string[],
+    compact: [
+      'Hot water, steam and metal: hold the handle only.',
+      'Check gasket and filter plate; wipe the basket rim.',
+      'Never fill above the valve.',
+      'Never tamp.',
+      'Never heat it empty.',
+      'Flame no wider than the base, handle clear of it.',
+      'Never leave it on the heat alone; keep children away.',
+      'Face and hands away from spout and lid.',
+      'Never block the valve or aim it at anyone; never use a damaged valve or gasket.',
+      'Cool the base (under the tap, by the handle) before opening.',
+    ] as readonly string[],
+    deferral: 'Follow the maker’s instructions and local rules.',
   },
   footer: {
     printedBy: (business: string, contact: string): string => `From ${business} · ${contact}`,

@@ -1,5 +1,18 @@
 /** User-facing words of the command line: help texts, summaries, errors. */
+import { cardWords } from './card.ts';
+
 export const cliWords = {
+  /** The valve line of `stovecard plan`: "opens at 1.50 bar", or the assumed value and why. */
+  planValve: (valve: string, assumed: boolean): string =>
+    assumed
+      ? `taken to open at about ${valve}, assumed because no opening pressure was given (ask the maker for it)`
+      : `opens at ${valve}`,
+  /** The cautions and the deferral `stovecard plan` prints after every recipe or refusal. */
+  planCautions: (): string[] => [
+    `${cardWords.cautions.heading}:`,
+    ...cardWords.cautions.full.map((line) => `  - ${line}`),
+    `  ${cardWords.cautions.deferral}`,
+  ],
   mainHelp: (commands: string[]): string =>
     [
       'stovecard — printable stovetop brew cards computed by a physics simulation',
