@@ -102,7 +102,7 @@ export const cardWords = {
       `${peak}; the valve opens at ${valve}`,
     /** The valve's opening pressure when the pot's entry gives none: `valve` is "about 1.5 bar". */
     peakPressureAssumedValue: (peak: string, valve: string): string =>
-      `${peak}; the valve is taken to open at about ${valve}, assumed because no opening pressure was given (ask the maker for it)`,
+      `${peak}; the valve opens at about ${valve} (assumed: no value was given; ask the maker)`,
     boiling: 'Water boils here at',
     boilingValue: (boiling: string, altitude: string): string =>
       `${boiling} (altitude ${altitude})`,
