@@ -139,15 +139,15 @@ export const cardWords = {
   cautions: {
     heading: 'Safety',
     full: [
-      'Scalding water, steam and hot metal: hold the pot by its handle only and use a cloth on the base.',
-      'Before closing the pot, check that the gasket and the filter plate are whole and in place, and wipe the rim of the basket clean.',
+      'Scalding water, steam and hot metal: hold the handle only; use a cloth on the base.',
+      'Before closing, check that the gasket and filter plate are whole and in place; wipe the basket rim clean.',
       'Never fill above the valve.',
       'Never tamp the coffee.',
       'Never heat the pot empty.',
-      'Keep the flame no wider than the base, and the handle away from the flame.',
+      'Keep the flame no wider than the base and the handle away from it.',
       'Never leave the pot unattended on the heat; keep children away.',
       'When it sputters, keep your face and hands away from the spout and the lid.',
-      'Never block the safety valve or point it at anyone; keep it clean and free to move, and do not use the pot with a damaged valve or gasket.',
+      'Never block the safety valve or point it at anyone; keep it clean and free to move. Do not use a pot whose valve or gasket is damaged.',
       'Before opening, let the base cool, or cool it under the cold tap holding only the handle.',
     ] as readonly string[],
     compact: [
