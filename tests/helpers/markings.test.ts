@@ -12,7 +12,14 @@ import { assertsANumber, outsideChecks, type OutsideCheck } from './markings.ts'
 
 const TESTS = fileURLToPath(new URL('../', import.meta.url));
 /** The folders whose tests hold the model against outside values. */
-export const CHECKED_FOLDERS = ['physics', 'brew', 'planning', 'calibration', 'content', 'numerics'];
+export const CHECKED_FOLDERS = [
+  'physics',
+  'brew',
+  'planning',
+  'calibration',
+  'content',
+  'numerics',
+];
 
 async function checksOf(folder: string): Promise<OutsideCheck[]> {
   const dir = path.join(TESTS, folder);
@@ -67,12 +74,17 @@ describe(`outside checks in tests/{${CHECKED_FOLDERS.join(',')}}`, () => {
         );
     }
     const counts = new Map<string, number>();
-    for (const c of checks) counts.set(c.marking ?? 'unmarked', (counts.get(c.marking ?? 'unmarked') ?? 0) + 1);
+    for (const c of checks)
+      counts.set(c.marking ?? 'unmarked', (counts.get(c.marking ?? 'unmarked') ?? 0) + 1);
     process.stdout.write(
       `outside checks: ${checks.length} (${[...counts].map(([k, n]) => `${k} ${n}`).join(', ')})\n`,
     );
     expect(checks.length).toBeGreaterThan(50);
-    const unmarked = checks.filter((c) => c.marking === null).map((c) => `${c.file}:${c.line} ${c.name}`);
-    expect(unmarked, 'outside checks with no marking (DEVELOPERS.md, "Adding a check")').toEqual([]);
+    const unmarked = checks
+      .filter((c) => c.marking === null)
+      .map((c) => `${c.file}:${c.line} ${c.name}`);
+    expect(unmarked, 'outside checks with no marking (DEVELOPERS.md, "Adding a check")').toEqual(
+      [],
+    );
   });
 });

@@ -21,12 +21,7 @@
  */
 
 export type MarkingKind =
-  | 'source'
-  | 'closed form'
-  | 'common practice'
-  | 'from memory'
-  | 'snapshot'
-  | 'own rule';
+  'source' | 'closed form' | 'common practice' | 'from memory' | 'snapshot' | 'own rule';
 
 /** Published sources the tests cite by name (a test may also write "source: …"). */
 export const SOURCE_NAMES: readonly string[] = [
@@ -215,7 +210,9 @@ export function assertsANumber(code: string): boolean {
   return code
     .split('\n')
     .filter((line) => ASSERTING.test(line))
-    .some((line) => [...line.matchAll(NUMBER)].some((n) => !TRIVIAL.has(n[0].replace(/\.0*$/, ''))));
+    .some((line) =>
+      [...line.matchAll(NUMBER)].some((n) => !TRIVIAL.has(n[0].replace(/\.0*$/, ''))),
+    );
 }
 
 function markingOf(texts: readonly string[]): { kind: MarkingKind; text: string } | null {

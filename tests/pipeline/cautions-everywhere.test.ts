@@ -66,7 +66,10 @@ beforeAll(async () => {
     const content = path.join(root, `content-${paper}`);
     await cp(DEMO_CONTENT, content, { recursive: true });
     const site = path.join(content, 'site.yaml');
-    await writeFile(site, (await readFile(site, 'utf8')).replace(/^paper: .*$/m, `paper: ${paper}`));
+    await writeFile(
+      site,
+      (await readFile(site, 'utf8')).replace(/^paper: .*$/m, `paper: ${paper}`),
+    );
     const outDir = path.join(root, `site-${paper}`);
     await buildSite({
       contentDir: content,
@@ -105,7 +108,9 @@ describe('every HTML page of the demo site', () => {
           .join('\n');
         const lacks = cautionCheck(sections, escapeHtml);
         if (lacks.length > 0)
-          failures.push(`${site.paper} ${path.relative(site.dir, file)}: lacks ${lacks.join(' | ')}`);
+          failures.push(
+            `${site.paper} ${path.relative(site.dir, file)}: lacks ${lacks.join(' | ')}`,
+          );
       }
     }
     // The index, method, troubleshooting, three set pages and the cards, at each paper.
@@ -133,7 +138,15 @@ describe(`every page of every PDF of the demo site${onPath('pdftotext') ? '' : '
         expect(count, file).toBeGreaterThan(0);
         for (let page = 1; page <= count; page++) {
           pages += 1;
-          const text = runTool('pdftotext', ['-raw', '-f', String(page), '-l', String(page), file, '-']);
+          const text = runTool('pdftotext', [
+            '-raw',
+            '-f',
+            String(page),
+            '-l',
+            String(page),
+            file,
+            '-',
+          ]);
           const lacks = cautionCheck(squash(text.stdout), squash);
           if (lacks.length > 0)
             failures.push(
