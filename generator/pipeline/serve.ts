@@ -7,11 +7,11 @@
  * the error over the last good site (sent to open pages, and added to pages loaded while the
  * error stands) until a rebuild succeeds.
  *
- * The watcher is chokidar's (Node's recursive fs.watch loses a file an editor saves by
+ * The watcher is chokidar 4's, as Eleventy's own (@11ty/chokidar-with-glob-support; Node's recursive fs.watch loses a file an editor saves by
  * writing a temporary file and renaming it over the old one); the server binds 127.0.0.1
  * unless a host is given.
  */
-import { watch, type FSWatcher } from 'chokidar';
+import { watch, type FSWatcher } from '@11ty/chokidar-with-glob-support';
 import { readFile, stat } from 'node:fs/promises';
 import http from 'node:http';
 import path from 'node:path';
