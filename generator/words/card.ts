@@ -347,18 +347,21 @@ export const troubleshootingWords = {
 /** Words of `stovecard build`: help, progress and the summary (kept with the site's words). */
 export const buildWords = {
   help: [
-    'Usage: stovecard build [--content DIR] [--out DIR] [--serve] [--port N]',
+    'Usage: stovecard build [--content DIR] [--out DIR] [--serve] [--port N] [--host ADDR]',
     '',
     'Builds the site of brew cards: plans every pot × coffee × stove the sets name (cached',
-    'in .stovecard-cache/, so only changed entries are planned again), renders the station',
-    'cards, the bag inserts, the index, set, method and troubleshooting pages, and swaps',
-    'the new site into place only when everything succeeded.',
+    'in .stovecard-cache/ beside the content folder, so only changed entries are planned',
+    'again), renders the station cards, the bag inserts, the index, set, method and',
+    'troubleshooting pages, and swaps the new site into place only when everything',
+    'succeeded.',
     '',
     '  --content DIR   the content folder (default: content)',
     '  --out DIR       the site folder to write (default: site)',
     '  --serve         build, then serve the site with live reload and rebuild when',
     '                  the content or the templates change',
     '  --port N        port of the server (default 8080)',
+    '  --host ADDR     address the server listens on (default 127.0.0.1, this machine',
+    '                  only; 0.0.0.0 lets other machines of the network in)',
     '',
     'SOURCE_DATE_EPOCH, when set, is the date printed on the cards (reproducible builds).',
     '',
@@ -401,6 +404,8 @@ export const buildWords = {
   serving: (url: string, contentDir: string): string =>
     `serving ${url} (Ctrl-C to stop); rebuilding when ${contentDir} or the templates change`,
   rebuilt: (summary: string): string => `rebuilt: ${summary}`,
+  /** Heading of the browser's overlay when a rebuild failed (the page under it is the last good one). */
+  overlayHeading: 'The last rebuild failed; this page is the last good build. Fix the problem below and save:',
   rebuildFailed: (message: string): string =>
     `rebuild failed, still serving the last good site:\n${message}`,
   badPort: (raw: string): string => `--port expects a whole number from 1 to 65535, got "${raw}"`,

@@ -17,14 +17,20 @@ export const cliWords = {
     [
       'stovecard — printable stovetop brew cards computed by a physics simulation',
       '',
-      'Usage: stovecard <command> [options]   (stovecard <command> --help for each)',
+      'Usage: stovecard <command> [options]   (stovecard help <command>, or <command> --help)',
+      '       stovecard --version',
       '',
       'Commands:',
       ...commands.map((c) => `  ${c.padEnd(10)} ${commandSummaries[c] ?? ''}`),
       '',
     ].join('\n'),
-  unknownCommand: (name: string, commands: string[]): string =>
-    `stovecard: unknown command "${name}"; the commands are ${commands.join(', ')} (stovecard --help)`,
+  unknownCommand: (name: string, commands: string[], suggestion?: string): string =>
+    `stovecard: unknown command "${name}"${suggestion ? `; did you mean "${suggestion}"?` : ''} ` +
+    `The commands are ${commands.join(', ')} (stovecard --help)`,
+  unknownOption: (option: string, options: string[], suggestion?: string): string =>
+    `unknown option ${option}${suggestion ? `; did you mean ${suggestion}?` : ''} ` +
+    `The options are ${options.join(', ')} (add --help for what each does)`,
+  version: (version: string): string => `stovecard ${version}\n`,
   simulateHelp: [
     'Usage: stovecard simulate --pot FILE --coffee FILE (--stove FILE --level LABEL | --power-w W)',
     '                          [--fill-ml V] [--start-c T] [--ambient-c T] [--altitude-m H]',
