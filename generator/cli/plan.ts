@@ -6,6 +6,7 @@ import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
 import { refusalText, warningText } from '../render/plan-text.ts';
 import { cliWords } from '../words/cli.ts';
+import { pressure, pressureRough } from '../render/format.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
 import { allEntries } from './load-entries.ts';
@@ -57,7 +58,9 @@ export async function run(argv: string[]): Promise<number> {
     const limit = maxSafeFill(pot.model, room.ambientK, roomModel(room).ambientPa);
     throw new InputError(cliWords.fillAboveValve(fillMl, Math.floor(toMl(limit.maxFillM3))));
   }
-  process.stdout.write(values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan));
+  process.stdout.write(
+    values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan, pot.valveOpeningAssumed),
+  );
   return plan.refused ? 3 : 0;
 }
 
@@ -117,11 +120,12 @@ export function planJson(plan: CardPlan) {
   };
 }
 
-function planSummary(plan: CardPlan): string {
+function planSummary(plan: CardPlan, valveAssumed: boolean): string {
   const j = planJson(plan);
+  const cautions = cliWords.planCautions().join('\n') + '\n';
   if (plan.refused) {
     const text = refusalText(plan.refused, 'metric');
-    return `REFUSED: ${text.reason}\nFix: ${text.suggestion}\n`;
+    return `REFUSED: ${text.reason}\nFix: ${text.suggestion}\n${cautions}`;
   }
   const p = j as Exclude<ReturnType<typeof planJson>, { refused: object }>;
   if (!('fillMl' in p)) return '';
@@ -132,6 +136,12 @@ function planSummary(plan: CardPlan): string {
     `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
     `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %)`,
     `pressure  peak ${p.peakGaugeBar} bar gauge`,
+    `valve     ${cliWords.planValve(valveText(plan.valveOpeningGaugePa, valveAssumed), valveAssumed)}`,
     ...p.warnings.map((w) => `warning   ${w}`),
-  ].join('\n') + '\n';
+  ].join('\n') + '\n' + cautions;
+}
+
+/** An assumed valve pressure is shown to two significant figures (nobody measured it). */
+function valveText(pa: number, assumed: boolean): string {
+  return (assumed ? pressureRough(pa, 'metric') : pressure(pa, 'metric')).text;
 }

@@ -21,6 +21,7 @@ type Layer =
   | 'physics'
   | 'numerics'
   | 'units'
+  | 'project-root'
   | 'brew'
   | 'content'
   | 'planning'
@@ -35,13 +36,23 @@ const ALLOWED: Record<Layer, readonly Layer[]> = {
   physics: [],
   numerics: [],
   units: ['physics'],
+  'project-root': [],
   brew: ['physics', 'numerics'],
-  content: ['brew', 'physics', 'units'],
+  content: ['brew', 'physics', 'units', 'project-root'],
   planning: ['brew', 'physics', 'numerics', 'content', 'units'],
   calibration: ['brew', 'physics', 'numerics', 'content', 'planning', 'units'],
   words: ['brew', 'content', 'planning', 'calibration'],
-  render: ['brew', 'content', 'planning', 'words', 'units'],
-  pipeline: ['brew', 'content', 'planning', 'calibration', 'render', 'words', 'units'],
+  render: ['brew', 'content', 'planning', 'words', 'units', 'project-root'],
+  pipeline: [
+    'brew',
+    'content',
+    'planning',
+    'calibration',
+    'render',
+    'words',
+    'units',
+    'project-root',
+  ],
   cli: [
     'physics',
     'numerics',
@@ -52,6 +63,7 @@ const ALLOWED: Record<Layer, readonly Layer[]> = {
     'calibration',
     'pipeline',
     'render',
+    'project-root',
     'words',
   ],
 };
@@ -200,7 +212,9 @@ describe('the render cache follows the code a view runs', () => {
     const { PLAN_SOURCES, RENDER_SOURCES } =
       await import('../../generator/pipeline/code-version.ts');
     const hashed = [...PLAN_SOURCES, ...RENDER_SOURCES].map((s) => path.resolve(s));
+    // project-root.ts only finds the project folder; it shapes no output.
     const covered = (file: string): boolean =>
+      layerOf(file) === 'project-root' ||
       hashed.some((h) => file === h || file.startsWith(`${h}${path.sep}`));
     const outside = FILES.filter((f) => ['render', 'words'].includes(layerOf(f)!)).flatMap((file) =>
       importsOf(file, readFileSync(file, 'utf8'))
