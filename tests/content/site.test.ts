@@ -86,6 +86,7 @@ describe('site.yaml', () => {
   });
 
   it('kettle presets in both °C and °F are refused at the °F key', async () => {
+    // own rule: one of kettle_presets_c and kettle_presets_f (content README); line 5 is the °F key
     await put(
       dir,
       'site.yaml',

@@ -114,6 +114,7 @@ describe('planCard at altitude (ISO 2533 pressure, IF97 Region 4 boiling point)'
 
 describe('planCard refusals (a reason and a fix, never a recipe)', () => {
   it('refuses a fill above the valve', () => {
+    // own rule: the refusal carries the fill asked for and the safe-fill limit as facts
     const limit = maxSafeFill(potEntry().model, seaLevel.ambientK, 101325).maxFillM3;
     const plan = planCard({
       pot: potEntry(),
