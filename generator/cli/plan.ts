@@ -5,6 +5,7 @@ import { maxSafeFill } from '../planning/fill.ts';
 import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
 import { cliWords } from '../words/cli.ts';
+import { bindingCauseText } from '../render/card-view.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
 import { allEntries } from './load-entries.ts';
@@ -108,6 +109,14 @@ export function planJson(plan: CardPlan) {
       firstCoffeeS: plan.coldStart.firstCoffeeS === null ? null : round(plan.coldStart.firstCoffeeS),
     },
     peakGaugeBar: round(toBar(plan.peakGaugePa), 3),
+    peakGaugeRangeBar: {
+      low: round(toBar(plan.peakGaugeRangePa.lowPa), 3),
+      high: round(toBar(plan.peakGaugeRangePa.highPa), 3),
+    },
+    deliveryS: round(plan.deliveryS),
+    deliveryWindowS: plan.deliveryWindowS.map((s) => round(s)),
+    spread: plan.spread,
+    bindingCause: plan.bindingCause,
     simulations: plan.simulations,
     refused: null,
   };
@@ -124,7 +133,8 @@ function planSummary(plan: CardPlan): string {
     `heat      ${p.level}`,
     `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
     `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %)`,
-    `pressure  peak ${p.peakGaugeBar} bar gauge`,
+    `pressure  peak ${p.peakGaugeBar} bar gauge (${p.peakGaugeRangeBar.low}–${p.peakGaugeRangeBar.high} if the inputs are off)`,
+    ...(plan.bindingCause ? [`why       ${bindingCauseText(plan, 'metric')}`] : []),
     ...p.warnings.map((w) => `warning   ${w}`),
   ].join('\n') + '\n';
 }

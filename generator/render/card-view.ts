@@ -27,6 +27,7 @@ import {
   dose,
   fillMass as fillMassQuantity,
   fillVolume,
+  fixed,
   length,
   lengthDown,
   pressure,
@@ -383,6 +384,7 @@ async function recipe(
     pot: e.pot.model,
     potName: e.pot.name,
     fillHeightM: plan.fillHeightM,
+    belowValveM: plan.belowValveM,
     units,
   });
 
@@ -405,6 +407,9 @@ async function recipe(
         pressure(plan.peakGaugePa, units).text,
         pressure(plan.valveOpeningGaugePa, units).text,
         e.pot.valveOpeningAssumed,
+        plan.peakGaugeRangePa
+          ? `${pressure(plan.peakGaugeRangePa.lowPa, units).text}–${pressure(plan.peakGaugeRangePa.highPa, units).text}`
+          : undefined,
       ),
     },
   ];
@@ -419,8 +424,21 @@ async function recipe(
   }
   const grindAssumed = e.coffee.permeabilityAssumed ? e.coffee.grind : null;
   const stoveAssumed = e.stove.efficiencyAssumed && !e.stove.levels[plan.levelIndex]?.fitted;
-  const notes =
-    grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : [];
+  const notes = [
+    ...(plan.bindingCause ? [bindingCauseText(plan, units)] : []),
+    ...(grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : []),
+    ...(plan.spread
+      ? [
+          words.expect.spread(
+            share(plan.spread.heatShare).text,
+            plan.spread.heatMeasured,
+            fixed(plan.spread.permeabilityFactor, 1),
+            plan.spread.permeabilityMeasured,
+          ),
+        ]
+      : []),
+    words.expect.pointOfContact,
+  ];
 
   return {
     water: {
@@ -471,6 +489,27 @@ async function recipe(
     },
     expect: { heading: words.expect.heading, rows: expectRows, notes },
   };
+}
+
+/** The binding cause's facts, formatted once here and said by words/card.ts. */
+export function bindingCauseText(plan: AcceptedPlan, units: UnitSystem): string {
+  const cause = plan.bindingCause!;
+  const f = cause.facts;
+  const opt = <T>(v: T | undefined, fmt: (v: T) => object): object => (v === undefined ? {} : fmt(v));
+  return cardWords.expect.bindingCause(cause.code, {
+    share: share(f.share).text,
+    band: temperatureBand([f.bandLowK, f.bandHighK], units),
+    mean: temperature(f.meanK, units).text,
+    delivery: `${Math.round(f.deliveryS)} s`,
+    window: `${Math.round(f.windowLowS)}–${Math.round(f.windowHighS)} s`,
+    cups: String(f.cups ?? ''),
+    ...opt(f.gentlestW, (w) => ({ gentlest: `${Math.round(w)} W into the pot` })),
+    ...opt(f.shareAtHalfHeat, (v) => ({ shareAtHalfHeat: share(v).text })),
+    ...opt(f.shareAtHalfPermeability, (v) => ({ shareAtHalfPermeability: share(v).text })),
+    ...opt(f.shareIfAllowed, (v) => ({ shareIfAllowed: share(v).text })),
+    ...opt(f.highCornerGaugePa, (v) => ({ highCorner: pressure(v, units).text })),
+    ...opt(f.limitGaugePa, (v) => ({ limit: pressure(v, units).text })),
+  });
 }
 
 function refusal(plan: RefusedPlan): RefusalBlock {

@@ -5,7 +5,7 @@
  * Tests assert through these same factories, so the wording can change here alone.
  */
 import type { GrindClass, StoveKind } from '../content/types.ts';
-import type { RefusalCode } from '../planning/types.ts';
+import type { BindingCauseCode, RefusalCode } from '../planning/types.ts';
 
 const grindNames: Record<GrindClass, string> = {
   fine: 'fine',
@@ -14,6 +14,22 @@ const grindNames: Record<GrindClass, string> = {
   'medium-coarse': 'medium-coarse',
   coarse: 'coarse',
 };
+
+/** The facts of a binding cause, formatted (render/card-view.ts). */
+export interface BindingCauseText {
+  readonly share: string;
+  readonly band: string;
+  readonly mean: string;
+  readonly delivery: string;
+  readonly window: string;
+  readonly cups: string;
+  readonly gentlest?: string;
+  readonly shareAtHalfHeat?: string;
+  readonly shareAtHalfPermeability?: string;
+  readonly shareIfAllowed?: string;
+  readonly highCorner?: string;
+  readonly limit?: string;
+}
 
 /** The three kinds of heat an insert card is laid out by. */
 export type HeatKind = 'gas' | 'electric' | 'induction';
@@ -98,8 +114,32 @@ export const cardWords = {
     inBand: (band: string): string => `Brewed at ${band}`,
     inBandValue: (plan: string, cold: string): string => `${plan} of the cup (cold start: ${cold})`,
     peakPressure: 'Highest pressure in the base',
-    peakPressureValue: (peak: string, valve: string, assumed: boolean): string =>
-      `${peak}; the valve opens at ${valve}${assumed ? ' (assumed, the maker does not state it)' : ''}`,
+    peakPressureValue: (peak: string, valve: string, assumed: boolean, range?: string): string =>
+      `${peak}${range ? ` (${range} if the inputs are off)` : ''}; the valve opens at ${valve}${assumed ? ' (assumed, the maker does not state it)' : ''}`,
+    /** The band is judged on the water reaching the grounds; the cup itself is cooler. */
+    pointOfContact:
+      'The brewing temperature is that of the water as it reaches the grounds (the SCA defines its range at the point of contact); coffee leaves the spout at most at the local boiling point.',
+    /** How far the ranges allow each input to be off, and whether it was measured. */
+    spread: (heat: string, heatMeasured: boolean, permeabilityFactor: string, permeabilityMeasured: boolean): string =>
+      `Ranges allow the heat ±${heat} (${heatMeasured ? 'measured' : 'assumed'}) and the grind's flow ×/÷${permeabilityFactor} (${permeabilityMeasured ? 'measured' : 'assumed'}).`,
+    /** Why the cup misses the band (share below 0.3), with the change that fits the cause. */
+    bindingCause: (code: BindingCauseCode, f: BindingCauseText): string => {
+      const lead = `Only ${f.share} of the cup is brewed at ${f.band}`;
+      switch (code) {
+        case 'bed-too-open':
+          return `${lead}: the coffee bed is too open for this pot, so the water runs through before it is hot (${f.shareAtHalfPermeability ?? '?'} with a bed half as permeable). Grind finer, or use a bigger pot.`;
+        case 'bed-too-tight':
+          return `${lead}: the coffee bed is so tight that the water is pushed through above the band (about ${f.mean} on average). Grind coarser and never tamp.`;
+        case 'gentlest-heat-too-strong':
+          return `${lead}: even the stove's gentlest setting (${f.gentlest}) is too strong for this pot (${f.shareAtHalfHeat ?? '?'} at half that heat). Use a heat diffuser or a smaller burner.`;
+        case 'pot-too-small-for-window':
+          return `${lead}: the pot is too small for this coffee's brew time; its ${f.cups}-cup brew runs ${f.delivery} against ${f.window}. Use a bigger pot or a coarser grind.`;
+        case 'pressure-margin-binds':
+          return `${lead}: hotter starts would reach ${f.highCorner} if the inputs are off, above the half-valve limit of ${f.limit} (they would give ${f.shareIfAllowed ?? '?'}). Time a brew log to narrow the inputs, or grind coarser.`;
+        case 'band-out-of-reach':
+          return `${lead} (about ${f.mean} on average): no setting of this stove reaches the band with this pot and coffee. Try a different grind or stove.`;
+      }
+    },
     boiling: 'Water boils here at',
     boilingValue: (boiling: string, altitude: string): string =>
       `${boiling} (altitude ${altitude})`,
