@@ -413,7 +413,37 @@ export function fitText(
       normalised: signed(r.normalised, 2),
     };
   });
+  const plain = report.estimates.flatMap((e): string[] => {
+    if (e.status !== 'fitted') return [];
+    const pct = percent(e.relativeSigma);
+    switch (e.parameter.kind) {
+      case 'heat':
+        return [fitWords.plainHeat(loaded.stove.name, e.parameter.level!, sig(e.value, 2), pct, e.entangledWith)];
+      case 'permeability':
+        return [fitWords.plainPermeability(loaded.coffee.name, pct, e.entangledWith)];
+      case 'heat-loss':
+        return [fitWords.plainHeatLoss(loaded.pot.name, sig(e.value, 2), pct)];
+    }
+  });
+  const parts = report.estimates.flatMap((e) =>
+    e.status === 'fitted' && e.relativeSigma > e.statisticalRelativeSigma * 1.05
+      ? [
+          fitWords.sigmaParts(
+            label(e.parameter, loaded).key,
+            label(e.parameter, loaded).owner,
+            percent(e.statisticalRelativeSigma),
+            percent(e.relativeSigma),
+            e.entangledWith,
+          ),
+        ]
+      : [],
+  );
   const lines = [
+    fitWords.plainHeading,
+    ...(plain.length > 0 ? plain : [fitWords.plainNothing]),
+    ...(report.misfit ? [fitWords.plainMisfit(report.misfit.brews)] : []),
+    ...(report.leaveOneOut ? [fitWords.plainPrediction(sig(report.leaveOneOut.rmsNormalised, 2))] : []),
+    '',
     fitWords.heading(logPath, loaded.pot.id, loaded.coffee.id, loaded.stove.id),
     fitWords.counts(
       loaded.log.brews.length,
@@ -426,6 +456,7 @@ export function fitText(
       report.residualVariance === null ? null : sig(report.residualVariance, 2),
     ),
     ...fitWords.fittedTable(fitted),
+    ...(parts.length > 0 ? [fitWords.sigmaPartsHeading, ...parts] : []),
     ...(keptLines.length > 0
       ? ['', fitWords.keptHeading, ...keptLines.map(fitWords.keptLine)]
       : []),
