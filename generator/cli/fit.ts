@@ -235,7 +235,13 @@ const loaders: Readonly<Record<EntryKind, (path: string) => Promise<unknown>>> =
  * and loaded and validated again before any is renamed over its entry.
  */
 export async function writeFitted(report: FitReport, loaded: LoadedFit): Promise<WrittenLine[]> {
-  const edits = plannedEdits(report, loaded.stove);
+  const date = new Date().toISOString().slice(0, 10);
+  const edits = plannedEdits(report, loaded.stove).map((edit) => {
+    const e = report.estimates.find((x) => x.parameter.id === edit.parameterId);
+    return e?.status === 'fitted'
+      ? { ...edit, note: fitWords.provenance(percent(e.relativeSigma), `logs/${basename(loaded.log.source.file)}`, date) }
+      : edit;
+  });
   const byEntry = new Map<EntryKind, EntryEdit[]>();
   for (const edit of edits) byEntry.set(edit.entry, [...(byEntry.get(edit.entry) ?? []), edit]);
   const staged: { temp: string; path: string }[] = [];
