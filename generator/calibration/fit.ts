@@ -13,7 +13,13 @@
  * observations than parameters (the ones the data inform most are fitted, ranked by
  * column-pivoted Gram–Schmidt on J at the priors), or when its relative 1-σ exceeds
  * RELATIVE_SIGMA_LIMIT. The covariance is (JᵀJ)⁻¹ in ln θ, scaled by the residual variance
- * s² = χ²/dof when dof > 0 (the σ's as stated when dof = 0); σ(θ) = θ·σ(ln θ).
+ * s² = χ²/dof only when it exceeds 1 (a σ never falls below what the readings' own σ
+ * allow); then the prior uncertainty of everything held (the parameters kept at their
+ * priors, Parameter.priorSigmaLn, and the grounds' retention, RETENTION_SIGMA_LN)
+ * propagates through dθ_f = −(J_fᵀJ_f)⁻¹ J_fᵀ J_h dθ_h, and the held values that make up
+ * over a quarter of a σ² are named beside it (entangledWith); σ(θ) = θ·σ(ln θ).
+ * χ² beyond dof + 3√(2 dof) is reported as a misfit naming the brews that disagree; a log
+ * of 3+ brews gets a leave-one-brew-out prediction error.
  */
 import type { CoffeeEntry, LogEntry, PotEntry, StoveEntry } from '../content/types.ts';
 import { inverseSpd, norm, normalMatrix, pivotedColumns } from './dense.ts';
