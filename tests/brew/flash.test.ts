@@ -22,12 +22,24 @@ describe('spoutFlash', () => {
   });
 
   it('flashes nothing from a cup below boiling', () => {
-    expect(spoutFlash([{ cupM3: 0, extractionK: 95 + C }, { cupM3: 1e-4, extractionK: 99 + C }], 101325).flashedKg).toBe(0);
+    expect(
+      spoutFlash(
+        [
+          { cupM3: 0, extractionK: 95 + C },
+          { cupM3: 1e-4, extractionK: 99 + C },
+        ],
+        101325,
+      ).flashedKg,
+    ).toBe(0);
   });
 
   it('never lets coffee leave the spout above the local boiling point, even from a tight bed and a hot start', () => {
     const r = simulateBrew(
-      referenceSetup({ startK: 85 + C, heatInputW: 450, bed: { ...referenceSetup().bed, permeabilityM2: 3e-13 } }),
+      referenceSetup({
+        startK: 85 + C,
+        heatInputW: 450,
+        bed: { ...referenceSetup().bed, permeabilityM2: 3e-13 },
+      }),
     );
     expect(r.extraction!.p90K).toBeGreaterThan(r.flash.boilingK); // the water at the grounds is hotter
     expect(r.flash.flashedKg).toBeGreaterThan(0);

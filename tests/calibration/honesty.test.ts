@@ -11,7 +11,17 @@ import type { FitReport } from '../../generator/calibration/types.ts';
 import { rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { loadLogFile } from '../../generator/content/index.ts';
-import { FIRST_COFFEE_ONLY, IDS, PROBED, SHORT_UNPROBED, syntheticInput, testContent, testEntries, TRUTH, WELL_OBSERVED } from './fixtures.ts';
+import {
+  FIRST_COFFEE_ONLY,
+  IDS,
+  PROBED,
+  SHORT_UNPROBED,
+  syntheticInput,
+  testContent,
+  testEntries,
+  TRUTH,
+  WELL_OBSERVED,
+} from './fixtures.ts';
 import { logText, mulberry32, syntheticBrews, type BrewPlan } from './synthetic-log.ts';
 
 let dir: string;
@@ -35,7 +45,10 @@ function fittedWithin3Sigma(report: FitReport, label: string): number {
     if (e.status !== 'fitted') continue;
     fitted++;
     const error = Math.log(e.value / truthOf(e.parameter.id));
-    expect(Math.abs(error), `${label}: ${e.parameter.id} off by ${(error * 100).toFixed(1)} %, σ ${(e.relativeSigma * 100).toFixed(1)} %`).toBeLessThanOrEqual(3 * e.relativeSigma);
+    expect(
+      Math.abs(error),
+      `${label}: ${e.parameter.id} off by ${(error * 100).toFixed(1)} %, σ ${(e.relativeSigma * 100).toFixed(1)} %`,
+    ).toBeLessThanOrEqual(3 * e.relativeSigma);
   }
   return fitted;
 }
@@ -46,7 +59,10 @@ const TIMED_ONLY: readonly BrewPlan[] = [
   { level: 'medium', fillMl: 150, startC: 20, roomC: 21, yield: false },
   { level: 'high', fillMl: 140, startC: 20, roomC: 21, yield: false },
 ];
-const THREE_WEIGHED: readonly BrewPlan[] = [...WELL_OBSERVED, { level: 'medium', fillMl: 140, startC: 60, roomC: 21 }];
+const THREE_WEIGHED: readonly BrewPlan[] = [
+  ...WELL_OBSERVED,
+  { level: 'medium', fillMl: 140, startC: 60, roomC: 21 },
+];
 
 const kinds: [string, readonly BrewPlan[]][] = [
   ['first coffee only', FIRST_COFFEE_ONLY],
@@ -62,19 +78,31 @@ describe('fitted values cover the truth within 3σ', () => {
     it(`${name} (seeds 11–13)`, async () => {
       let fitted = 0;
       for (const seed of [11, 12, 13]) {
-        const input = await syntheticInput(dir, `honest-${name.replace(/\W+/g, '-')}-${seed}`, plans, {
-          noise: { random: mulberry32(seed) },
-        });
-        fitted += fittedWithin3Sigma(fitLog(input, { leaveOneOut: false }), `${name}, seed ${seed}`);
+        const input = await syntheticInput(
+          dir,
+          `honest-${name.replace(/\W+/g, '-')}-${seed}`,
+          plans,
+          {
+            noise: { random: mulberry32(seed) },
+          },
+        );
+        fitted += fittedWithin3Sigma(
+          fitLog(input, { leaveOneOut: false }),
+          `${name}, seed ${seed}`,
+        );
       }
       expect(fitted).toBeGreaterThan(0);
     });
   }
 
   it('propagates what is held: a first-coffee time alone gives the heat a σ well above the stopwatch’s', async () => {
-    const input = await syntheticInput(dir, 'held-prior', FIRST_COFFEE_ONLY, { noise: { random: mulberry32(5) } });
+    const input = await syntheticInput(dir, 'held-prior', FIRST_COFFEE_ONLY, {
+      noise: { random: mulberry32(5) },
+    });
     const report = fitLog(input, { leaveOneOut: false });
-    const heats = report.estimates.filter((e) => e.parameter.kind === 'heat' && e.status === 'fitted');
+    const heats = report.estimates.filter(
+      (e) => e.parameter.kind === 'heat' && e.status === 'fitted',
+    );
     expect(heats.length).toBeGreaterThan(0);
     for (const heat of heats) {
       if (heat.status !== 'fitted') continue;
@@ -103,13 +131,17 @@ describe('misfit and prediction', () => {
   });
 
   it('reports a leave-one-brew-out error for a log of three brews, of the order of the readings’ σ', async () => {
-    const input = await syntheticInput(dir, 'three-lobo', THREE_WEIGHED, { noise: { random: mulberry32(9) } });
+    const input = await syntheticInput(dir, 'three-lobo', THREE_WEIGHED, {
+      noise: { random: mulberry32(9) },
+    });
     const report = fitLog(input);
     expect(report.leaveOneOut).not.toBeNull();
     expect(report.leaveOneOut!.perBrew.map((b) => b.brew)).toEqual([0, 1, 2]);
     expect(report.leaveOneOut!.rmsNormalised).toBeGreaterThan(0);
     expect(report.leaveOneOut!.rmsNormalised).toBeLessThan(10);
-    const two = await syntheticInput(dir, 'two-lobo', WELL_OBSERVED, { noise: { random: mulberry32(9) } });
+    const two = await syntheticInput(dir, 'two-lobo', WELL_OBSERVED, {
+      noise: { random: mulberry32(9) },
+    });
     expect(fitLog(two).leaveOneOut).toBeNull();
   });
 });

@@ -10,7 +10,13 @@
  * - the planned fill is a whole millilitre that the fill limit (and so `simulate`) accepts.
  */
 import { describe, expect, it } from 'vitest';
-import { BINDING_SHARE, PRESSURE_LIMIT_SHARE_OF_VALVE, planCard, windowPenalty, cupPenalty } from '../../generator/planning/plan.ts';
+import {
+  BINDING_SHARE,
+  PRESSURE_LIMIT_SHARE_OF_VALVE,
+  planCard,
+  windowPenalty,
+  cupPenalty,
+} from '../../generator/planning/plan.ts';
 import { maxSafeFill } from '../../generator/planning/fill.ts';
 import { simulateBrew } from '../../generator/brew/simulate.ts';
 import { brewSetup, roomModel } from '../../generator/planning/setup.ts';
@@ -37,7 +43,10 @@ const pots: Record<string, PotEntry> = {
     { cups: 1, id: 'one-cup' },
   ),
   // 320 mL sealed over a valve 30 mm up: ~150 mL of air above the fill.
-  generous3: potEntry({ sealedVolumeM3: 320e-6, valveHeightM: 0.03 }, { cups: 3, id: 'generous-three' }),
+  generous3: potEntry(
+    { sealedVolumeM3: 320e-6, valveHeightM: 0.03 },
+    { cups: 3, id: 'generous-three' },
+  ),
   nineCup: potEntry(
     {
       sealedVolumeM3: 700e-6,
@@ -69,8 +78,14 @@ const cases: { name: string; pot: PotEntry; plan: CardPlan }[] = [];
 for (const [pn, pot] of Object.entries(pots))
   for (const [bn, coffee] of Object.entries(beds))
     for (const [sn, stove] of Object.entries(stoves))
-      cases.push({ name: `${pn}/${bn}/${sn}`, pot, plan: planCard({ pot, coffee, stove, room: seaLevel, kettlePresetsK: presets }) });
-const accepted = cases.filter((c): c is typeof c & { plan: AcceptedPlan } => c.plan.refused === null);
+      cases.push({
+        name: `${pn}/${bn}/${sn}`,
+        pot,
+        plan: planCard({ pot, coffee, stove, room: seaLevel, kettlePresetsK: presets }),
+      });
+const accepted = cases.filter(
+  (c): c is typeof c & { plan: AcceptedPlan } => c.plan.refused === null,
+);
 const byName = (name: string) => accepted.find((c) => c.name === name)!.plan;
 
 describe('the planner’s choice on invented pots, beds and stoves', () => {
@@ -106,12 +121,17 @@ describe('the planner’s choice on invented pots, beds and stoves', () => {
   it('prints the recipe’s own peak, inside its corner range, with the highest corner under half the valve', () => {
     for (const { name, pot, plan } of accepted) {
       const again = simulateBrew(
-        brewSetup(pot.model, beds[name.split('/')[1] as keyof typeof beds].bed, roomModel(seaLevel), {
-          fillVolumeM3: plan.fillM3,
-          startK: plan.startK,
-          heatInputW: plan.heatToPotW,
-          heatOffAtS: plan.offHeatS.midS,
-        }),
+        brewSetup(
+          pot.model,
+          beds[name.split('/')[1] as keyof typeof beds].bed,
+          roomModel(seaLevel),
+          {
+            fillVolumeM3: plan.fillM3,
+            startK: plan.startK,
+            heatInputW: plan.heatToPotW,
+            heatOffAtS: plan.offHeatS.midS,
+          },
+        ),
       );
       expect(plan.peakGaugePa, name).toBeCloseTo(again.peakGaugePa, 0);
       expect(plan.peakGaugeRangePa.lowPa).toBeLessThanOrEqual(plan.peakGaugePa);
@@ -127,7 +147,9 @@ describe('the planner’s choice on invented pots, beds and stoves', () => {
     for (const { name, pot, plan } of accepted) {
       const ml = plan.fillM3 * 1e6;
       expect(Math.abs(ml - Math.round(ml)), name).toBeLessThan(1e-6);
-      expect(plan.fillM3).toBeLessThanOrEqual(maxSafeFill(pot.model, plan.startK, roomModel(seaLevel).ambientPa).maxFillM3);
+      expect(plan.fillM3).toBeLessThanOrEqual(
+        maxSafeFill(pot.model, plan.startK, roomModel(seaLevel).ambientPa).maxFillM3,
+      );
     }
   });
 });
