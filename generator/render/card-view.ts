@@ -27,7 +27,6 @@ import {
   dose,
   fillMass as fillMassQuantity,
   fillVolume,
-  fixed,
   length,
   lengthDown,
   pressure,
@@ -407,9 +406,7 @@ async function recipe(
         pressure(plan.peakGaugePa, units).text,
         pressure(plan.valveOpeningGaugePa, units).text,
         e.pot.valveOpeningAssumed,
-        plan.peakGaugeRangePa
-          ? `${pressure(plan.peakGaugeRangePa.lowPa, units).text}–${pressure(plan.peakGaugeRangePa.highPa, units).text}`
-          : undefined,
+        plan.peakGaugeRangePa ? pressure(plan.peakGaugeRangePa.highPa, units).text : undefined,
       ),
     },
   ];
@@ -427,17 +424,6 @@ async function recipe(
   const notes = [
     ...(plan.bindingCause ? [bindingCauseText(plan, units)] : []),
     ...(grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : []),
-    ...(plan.spread
-      ? [
-          words.expect.spread(
-            share(plan.spread.heatShare).text,
-            plan.spread.heatMeasured,
-            fixed(plan.spread.permeabilityFactor, 1),
-            plan.spread.permeabilityMeasured,
-          ),
-        ]
-      : []),
-    words.expect.pointOfContact,
   ];
 
   return {

@@ -104,7 +104,7 @@ export const cardWords = {
     thisCard: 'This card',
     coldStart: 'Cold start',
     band: (band: string): string => `Target ${band}`,
-    caption: 'Started from cold water, coffee begins to flow while the water is still cool.',
+    caption: 'Brewing temperature: the water’s as it reaches the grounds (the SCA’s point of contact).',
     alt: (plan: string, cold: string, band: string): string =>
       `Chart: brewing temperature against coffee in the cup. This card: ${plan} of the cup in the target ${band}; from a cold start: ${cold}.`,
   },
@@ -115,7 +115,7 @@ export const cardWords = {
     inBandValue: (plan: string, cold: string): string => `${plan} of the cup (cold start: ${cold})`,
     peakPressure: 'Highest pressure in the base',
     peakPressureValue: (peak: string, valve: string, assumed: boolean, range?: string): string =>
-      `${peak}${range ? ` (${range} if the inputs are off)` : ''}; the valve opens at ${valve}${assumed ? ' (assumed, the maker does not state it)' : ''}`,
+      `${peak}${range ? ` (up to ${range})` : ''}; the valve opens at ${valve}${assumed ? ' (assumed, the maker does not state it)' : ''}`,
     /** The band is judged on the water reaching the grounds; the cup itself is cooler. */
     pointOfContact:
       'The brewing temperature is that of the water as it reaches the grounds (the SCA defines its range at the point of contact); coffee leaves the spout at most at the local boiling point.',
