@@ -9,6 +9,7 @@ import { simulateBrew, spoutFlash } from '../../generator/brew/simulate.ts';
 import { C, referenceSetup } from './fixtures.ts';
 
 describe('spoutFlash', () => {
+  // from memory: steam-table values (IAPWS-IF97, as printed in the CRC Handbook)
   it('flashes c_p·ΔT/h_fg of a millilitre reaching the spout at 105 °C (about 0.94 %)', () => {
     const curve = [
       { cupM3: 0, extractionK: 105 + C },

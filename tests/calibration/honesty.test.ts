@@ -95,6 +95,7 @@ describe('fitted values cover the truth within 3σ', () => {
     });
   }
 
+  // own rule: how the fit reports its uncertainty (our specification)
   it('propagates what is held: a first-coffee time alone gives the heat a σ well above the stopwatch’s', async () => {
     const input = await syntheticInput(dir, 'held-prior', FIRST_COFFEE_ONLY, {
       noise: { random: mulberry32(5) },
@@ -130,6 +131,7 @@ describe('misfit and prediction', () => {
     expect(fitLog(agreeing, { leaveOneOut: false }).misfit).toBeNull();
   });
 
+  // own rule: how the fit reports its uncertainty (our specification)
   it('reports a leave-one-brew-out error for a log of three brews, of the order of the readings’ σ', async () => {
     const input = await syntheticInput(dir, 'three-lobo', THREE_WEIGHED, {
       noise: { random: mulberry32(9) },

@@ -108,6 +108,7 @@ describe('the planner’s choice on invented pots, beds and stoves', () => {
     }
   });
 
+  // own rule: the planner's contract (its preferences and limits), not an outside value
   it('gets the open-grind one-cup and generous three-cup pots into the band from a hot start', () => {
     // Both used to print a 20 °C start with 0 % in band; a simulation at the gentlest
     // level from 80 °C puts most of the cup in band (the planner's own engine).
@@ -143,6 +144,7 @@ describe('the planner’s choice on invented pots, beds and stoves', () => {
     }
   });
 
+  // own rule: the planner's contract (its preferences and limits), not an outside value
   it('plans a whole-millilitre fill that the fill limit at its start accepts', () => {
     for (const { name, pot, plan } of accepted) {
       const ml = plan.fillM3 * 1e6;
@@ -155,12 +157,14 @@ describe('the planner’s choice on invented pots, beds and stoves', () => {
 });
 
 describe('the planner’s preferences', () => {
+  // own rule: the planner's contract (its preferences and limits), not an outside value
   it('costs nothing inside the delivery window and grows with the distance outside it', () => {
     expect(windowPenalty(100, [60, 150])).toBe(0);
     expect(windowPenalty(30, [60, 150])).toBeGreaterThan(windowPenalty(45, [60, 150]));
     expect(windowPenalty(200, [60, 150])).toBeGreaterThan(windowPenalty(160, [60, 150]));
   });
 
+  // own rule: the planner's contract (its preferences and limits), not an outside value
   it('costs nothing for a cup at or above the floor and grows as the cup shrinks', () => {
     expect(cupPenalty(80e-6, 75e-6)).toBe(0);
     expect(cupPenalty(30e-6, 75e-6)).toBeGreaterThan(cupPenalty(60e-6, 75e-6));

@@ -27,6 +27,7 @@ const typical = accepted(
 );
 
 describe('planCard on a typical three-cup pot with a permeable grind', () => {
+  // own rule: the planner's own limits and search, not an outside value
   it('re-simulating the plan’s own choices gives the plan’s numbers', () => {
     const again = simulateBrew(
       brewSetup(potEntry().model, coffeeEntry().bed, roomModel(seaLevel), {
@@ -47,11 +48,13 @@ describe('planCard on a typical three-cup pot with a permeable grind', () => {
     expect(typical.startK - C).toBeLessThanOrEqual(90);
   });
 
+  // common practice, no source: a hot start brews far more of the cup in band than a cold one
   it('puts far more of the cup in band than a cold start', () => {
     expect(typical.extraction.inBandShare).toBeGreaterThan(typical.coldStart.inBandShare + 0.25);
     expect(typical.extraction.meanK).toBeGreaterThan(typical.coldStart.meanK + 10);
   });
 
+  // own rule: the planner's own limits and search, not an outside value
   it('keeps the delivery (first coffee → last drop) near the coffee’s window and ends before the sputter', () => {
     // The window is a scored preference: within a fifth of its opening here.
     expect(typical.deliveryS).toBeCloseTo(typical.brew.endS - typical.brew.firstCoffeeS!, 9);
@@ -68,6 +71,7 @@ describe('planCard on a typical three-cup pot with a permeable grind', () => {
     }
   });
 
+  // own rule: the planner's own limits and search, not an outside value
   it('fills below the valve with the stated margin once the water is at its hottest', () => {
     expect(typical.belowValveM).toBeGreaterThan(typical.expansionMarginM);
     expect(typical.peakGaugePa).toBeLessThanOrEqual(0.5 * potEntry().model.valveOpeningGaugePa);
@@ -134,6 +138,7 @@ describe('planCard refusals (a reason and a fix, never a recipe)', () => {
     expect(plan.refused?.suggestion).toContain('coarser');
   });
 
+  // common practice, no source: aluminium is not magnetic, so an induction hob does not heat it.
   it('refuses an aluminium pot on induction, and accepts it with an induction plate', () => {
     const induction = stoveEntry([100, 150, 200, 300], 'induction');
     const plan = planCard({
@@ -168,6 +173,7 @@ describe('planCard’s coarse-to-fine start search', () => {
     ),
   );
 
+  // own rule: the planner's own limits and search, not an outside value
   it('never chooses a plan worse than a tie with the exhaustive search’s, and mostly the same', () => {
     let same = 0;
     let accepted = 0;
@@ -196,6 +202,7 @@ describe('firstPrintable: the printed run keeps the limits the search saw', () =
   const byShare = (a: { share: number }, b: { share: number }) => a.share > b.share;
   const limitPa = 5e4;
 
+  // own rule: the planner's own limits and search, not an outside value
   it('takes the heat off 4 s earlier when the best choice’s printed run sputters', () => {
     const tried: number[] = [];
     const result = firstPrintable(
@@ -211,6 +218,7 @@ describe('firstPrintable: the printed run keeps the limits the search saw', () =
     expect(result?.chosen.offS).toBe(96);
   });
 
+  // own rule: the planner's own limits and search, not an outside value
   it('moves to the next best choice when retries do not help, and refuses when none passes', () => {
     const choices = [
       { share: 0.5, offS: 80 },
