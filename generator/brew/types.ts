@@ -97,6 +97,8 @@ export interface SeriesPoint {
   readonly waterK: number;
   /** Temperature of the coffee leaving the bed (cooler than the water while the grounds warm), K. */
   readonly coffeeK: number;
+  /** The same coffee as it leaves the spout at room pressure: at most the local boiling point, K. */
+  readonly spoutK: number;
   readonly gaugePa: number;
   readonly cupM3: number;
   readonly flowM3PerS: number;
@@ -138,6 +140,11 @@ export interface BrewResult {
   readonly doseKg: number;
   /** Null when no coffee reached the cup. */
   readonly extraction: ExtractionSummary | null;
+  /**
+   * Coffee reaching the spout hotter than the local boiling point flashes there: the
+   * boiling point, the steam flashed (an upper bound, kg) and the cup volume concerned.
+   */
+  readonly flash: { readonly boilingK: number; readonly flashedKg: number; readonly aboveBoilingM3: number };
   /** Cumulative cup volume against extraction temperature, for charts: ascending cupM3. */
   readonly cupCurve: readonly { readonly cupM3: number; readonly extractionK: number }[];
   readonly peakGaugePa: number;

@@ -13,7 +13,13 @@
  * observations than parameters (the ones the data inform most are fitted, ranked by
  * column-pivoted Gram–Schmidt on J at the priors), or when its relative 1-σ exceeds
  * RELATIVE_SIGMA_LIMIT. The covariance is (JᵀJ)⁻¹ in ln θ, scaled by the residual variance
- * s² = χ²/dof when dof > 0 (the σ's as stated when dof = 0); σ(θ) = θ·σ(ln θ).
+ * s² = χ²/dof only when it exceeds 1 (a σ never falls below what the readings' own σ
+ * allow); then the prior uncertainty of everything held (the parameters kept at their
+ * priors, Parameter.priorSigmaLn, and the grounds' retention, RETENTION_SIGMA_LN)
+ * propagates through dθ_f = −(J_fᵀJ_f)⁻¹ J_fᵀ J_h dθ_h, and the held values that make up
+ * over a quarter of a σ² are named beside it (entangledWith); σ(θ) = θ·σ(ln θ).
+ * χ² beyond dof + 3√(2 dof) is reported as a misfit naming the brews that disagree; a log
+ * of 3+ brews gets a leave-one-brew-out prediction error.
  */
 import type { CoffeeEntry, LogEntry, PotEntry, StoveEntry } from '../content/types.ts';
 import { inverseSpd, norm, normalMatrix, pivotedColumns } from './dense.ts';
@@ -21,7 +27,7 @@ import { jacobianColumns } from './jacobian.ts';
 import { leastSquares } from './least-squares.ts';
 import { forwardModel } from './model.ts';
 import { logObservations } from './observations.ts';
-import { candidateParameters, modelValues } from './parameters.ts';
+import { candidateParameters, modelValues, type Parameter } from './parameters.ts';
 import type { Estimate, FitReport, KeptEstimate, Residual } from './types.ts';
 
 /** A parameter whose 1 % change moves the scaled predictions by less than 1e-4 in all carries no information. */
@@ -36,7 +42,16 @@ export interface FitInput {
   readonly stove: StoveEntry;
 }
 
-export function fitLog(input: FitInput): FitReport {
+/** χ² above dof + MISFIT_SIGMAS·√(2·dof) is a misfit (the χ² distribution's normal approximation). */
+export const MISFIT_SIGMAS = 3;
+/** A brew whose mean (difference/σ)² exceeds this disagrees with the others. */
+export const DISAGREEING_BREW_MEAN_SQUARE = 4;
+/** σ of ln(retention): water held per gram of grounds, ±15 % between coffees (our choice). */
+export const RETENTION_SIGMA_LN = 0.15;
+/** A held prior contributing more than this share of a fitted σ² is named beside it. */
+const ENTANGLED_SHARE = 0.25;
+
+export function fitLog(input: FitInput, options: { readonly leaveOneOut?: boolean } = {}): FitReport {
   const { log, pot, coffee, stove } = input;
   const observations = logObservations(log);
   const parameters = candidateParameters(log, pot, coffee, stove);
@@ -107,7 +122,9 @@ export function fitLog(input: FitInput): FitReport {
 
     const columns = jacobianColumns(model, result.theta, model(result.theta));
     const dof = observations.length - free.length;
-    const scale = dof > 0 ? result.cost / dof : 1;
+    // Scaled by χ²/dof only upwards: a σ never falls below what the readings' own
+    // uncertainty allows (a lucky small χ² with few dof is no evidence of better readings).
+    const scale = dof > 0 ? Math.max(1, result.cost / dof) : 1;
     const inverse = inverseSpd(normalMatrix(columns));
     if (inverse === null) {
       // Rank-deficient at the optimum: the last-ranked parameter cannot be told apart.
@@ -131,16 +148,60 @@ export function fitLog(input: FitInput): FitReport {
   const finalValues = theta.map((value, i) =>
     free.includes(i) ? Math.exp(value) : parameters[i]!.prior,
   );
+
+  // The held parameters are uncertain too: their prior σ propagates into the fitted ones
+  // through the sensitivity of the optimum, dθ_f = −(J_fᵀJ_f)⁻¹ J_fᵀ J_h · dθ_h.
+  const heldVariance = free.map(() => 0);
+  const entangled: string[][] = free.map(() => []);
+  const held = all.filter((i) => !free.includes(i));
+  if (free.length > 0) {
+    const thetaAll = finalValues.map(Math.log);
+    const full = modelFor(all, thetaAll);
+    const columns = jacobianColumns(full, thetaAll, full(thetaAll));
+    // The fixed inputs no log fits, held like the rest: the grounds' retention (a column by
+    // a forward difference of ln retention).
+    const centre = full(thetaAll);
+    const step = 0.01;
+    const retained = forwardModel(
+      log,
+      pot,
+      { ...coffee, bed: { ...coffee.bed, retentionKgPerKg: coffee.bed.retentionKgPerKg * Math.exp(step) } },
+      observations,
+    ).scaledPredictions(modelValues(parameters, finalValues));
+    const retentionColumn = Float64Array.from(retained, (v, n) => (v - centre[n]!) / step);
+    const heldColumns = [
+      ...held.map((h) => ({ id: parameters[h]!.id, column: columns[h]!, sigmaLn: parameters[h]!.priorSigmaLn })),
+      { id: 'retention', column: retentionColumn, sigmaLn: RETENTION_SIGMA_LN },
+    ];
+    const inverse = inverseSpd(normalMatrix(free.map((i) => columns[i]!)));
+    if (inverse !== null) {
+      const dot = (a: Float64Array, b: Float64Array) => a.reduce((sum, v, n) => sum + v * b[n]!, 0);
+      free.forEach((_, k) => {
+        const parts = heldColumns.map((h) => {
+          const gain = free.reduce((sum, fi, m) => sum + inverse[k]![m]! * dot(columns[fi]!, h.column), 0);
+          return (gain * h.sigmaLn) ** 2;
+        });
+        heldVariance[k] = parts.reduce((a, b) => a + b, 0);
+        const total = relativeSigmas[k]! ** 2 + heldVariance[k]!;
+        heldColumns.forEach((h, n) => {
+          if (parts[n]! > ENTANGLED_SHARE * total) entangled[k]!.push(h.id);
+        });
+      });
+    }
+  }
   const estimates: Estimate[] = parameters.map((parameter, i) => {
     const k = free.indexOf(i);
     if (k < 0) return kept.get(i)!;
-    const relativeSigma = relativeSigmas[k]!;
+    const statistical = relativeSigmas[k]!;
+    const relativeSigma = Math.sqrt(statistical ** 2 + heldVariance[k]!);
     return {
       parameter,
       status: 'fitted',
       value: finalValues[i]!,
       sigma: finalValues[i]! * relativeSigma,
       relativeSigma,
+      statisticalRelativeSigma: statistical,
+      entangledWith: entangled[k]!,
     };
   });
 
@@ -152,6 +213,11 @@ export function fitLog(input: FitInput): FitReport {
   });
   const chiSquare = residuals.reduce((sum, r) => sum + r.normalised ** 2, 0);
   const dof = observations.length - free.length;
+  const misfit = misfitOf(residuals, chiSquare, dof, log.brews.length);
+  const leaveOneOut =
+    options.leaveOneOut !== false && log.brews.length >= 3
+      ? leaveOneBrewOut(input, parameters, (values) => forward.scaledPredictions(modelValues(parameters, values)), observations)
+      : null;
   return {
     logId: log.id,
     potId: pot.id,
@@ -164,9 +230,61 @@ export function fitLog(input: FitInput): FitReport {
     dof,
     chiSquare,
     residualVariance: dof > 0 && free.length > 0 ? chiSquare / dof : null,
+    misfit,
+    leaveOneOut,
     relativeSigmaLimit: RELATIVE_SIGMA_LIMIT,
     iterations,
     converged,
     simulations: forward.simulations(),
   };
+}
+
+/**
+ * A misfit: χ² far above its degrees of freedom (MISFIT_SIGMAS standard deviations of the
+ * χ² distribution), naming the brews whose readings disagree most (mean (difference/σ)²
+ * above DISAGREEING_BREW_MEAN_SQUARE, or else the worst one). Null when the fit is fine.
+ */
+function misfitOf(
+  residuals: readonly Residual[],
+  chiSquare: number,
+  dof: number,
+  brewCount: number,
+): FitReport['misfit'] {
+  if (dof <= 0 || chiSquare <= dof + MISFIT_SIGMAS * Math.sqrt(2 * dof)) return null;
+  const perBrew = Array.from({ length: brewCount }, (_, brew) => {
+    const own = residuals.filter((r) => r.observation.brew === brew);
+    const meanSquare = own.length ? own.reduce((sum, r) => sum + r.normalised ** 2, 0) / own.length : 0;
+    return { brew, meanSquare };
+  });
+  const worst = [...perBrew].sort((a, b) => b.meanSquare - a.meanSquare);
+  const disagreeing = worst.filter((b) => b.meanSquare > DISAGREEING_BREW_MEAN_SQUARE).map((b) => b.brew);
+  return { chiSquare, dof, brews: disagreeing.length > 0 ? disagreeing : [worst[0]!.brew] };
+}
+
+/**
+ * Leave one brew out: each brew predicted from a fit of the others (every parameter the
+ * smaller log does not reach stays at its prior), in units of the readings' own σ. A value
+ * near 1 says the fitted inputs predict a brew they have not seen as well as it can be read.
+ */
+function leaveOneBrewOut(
+  input: FitInput,
+  parameters: readonly Parameter[],
+  predict: (values: readonly number[]) => Float64Array,
+  observations: readonly { readonly brew: number; readonly seen: number; readonly sigma: number }[],
+): NonNullable<FitReport['leaveOneOut']> {
+  const perBrew = input.log.brews.map((_, brew) => {
+    const others = { ...input.log, brews: input.log.brews.filter((__, i) => i !== brew) };
+    const sub = fitLog({ ...input, log: others }, { leaveOneOut: false });
+    const values = parameters.map((p) => sub.estimates.find((e) => e.parameter.id === p.id)?.value ?? p.prior);
+    const scaled = predict(values);
+    const normalised = observations
+      .map((o, i) => ({ o, i }))
+      .filter(({ o }) => o.brew === brew)
+      .map(({ o, i }) => (o.seen - scaled[i]! * o.sigma) / o.sigma);
+    const rms = normalised.length ? Math.sqrt(normalised.reduce((s, v) => s + v * v, 0) / normalised.length) : 0;
+    return { brew, rmsNormalised: rms, count: normalised.length };
+  });
+  const all = perBrew.reduce((s, b) => s + b.rmsNormalised ** 2 * b.count, 0);
+  const count = perBrew.reduce((s, b) => s + b.count, 0);
+  return { perBrew, rmsNormalised: count ? Math.sqrt(all / count) : 0 };
 }

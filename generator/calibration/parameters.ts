@@ -26,6 +26,13 @@ export interface Parameter {
   /** Range the search may explore, SI. */
   readonly min: number;
   readonly max: number;
+  /**
+   * How far the prior may be off, as σ of ln(value): what propagates into the fitted
+   * parameters' σ while this one is held at its prior. Assumed values (a grind-derived
+   * permeability: ×/÷ 2; heat from a default efficiency: ±30 %; the default U·A: ±30 %)
+   * or measured ones (an entry's own value: 15 %; a fitted heat: 5 %). Our choices.
+   */
+  readonly priorSigmaLn: number;
 }
 
 /** The values one simulation needs, SI. */
@@ -64,6 +71,7 @@ export function candidateParameters(
       level: level.label,
       prior: level.heatToPotW,
       ...RANGE.heat,
+      priorSigmaLn: level.fitted ? 0.05 : stove.efficiencyAssumed ? 0.3 : 0.15,
     }));
   return [
     {
@@ -71,9 +79,10 @@ export function candidateParameters(
       kind: 'permeability',
       prior: coffee.bed.permeabilityM2,
       ...RANGE.permeability,
+      priorSigmaLn: coffee.permeabilityAssumed ? Math.LN2 : 0.15,
     },
     ...heats,
-    { id: 'heat-loss', kind: 'heat-loss', prior: pot.model.heatLossWPerK, ...RANGE['heat-loss'] },
+    { id: 'heat-loss', kind: 'heat-loss', prior: pot.model.heatLossWPerK, ...RANGE['heat-loss'], priorSigmaLn: 0.3 },
   ];
 }
 

@@ -19,8 +19,15 @@ export interface FittedEstimate {
   readonly value: number;
   /** 1-σ, SI: value × σ(ln value) (first order). */
   readonly sigma: number;
-  /** σ(ln value), ≈ the relative 1-σ. */
+  /**
+   * σ(ln value), ≈ the relative 1-σ: the readings' part (never below what their own σ
+   * allows) and the held parameters' prior uncertainty, propagated.
+   */
   readonly relativeSigma: number;
+  /** The readings' part alone. */
+  readonly statisticalRelativeSigma: number;
+  /** Held parameters whose prior uncertainty makes up more than a quarter of σ²: not separable from them. */
+  readonly entangledWith: readonly string[];
 }
 
 export interface KeptEstimate {
@@ -63,6 +70,13 @@ export interface FitReport {
   readonly residualVariance: number | null;
   /** Relative 1-σ above which a parameter counts as not identifiable. */
   readonly relativeSigmaLimit: number;
+  /** χ² far above its dof: the brews whose readings disagree most (log order, 0-based). */
+  readonly misfit: { readonly chiSquare: number; readonly dof: number; readonly brews: readonly number[] } | null;
+  /** Logs of 3 or more brews: each brew predicted by a fit of the others, in units of its readings' σ. */
+  readonly leaveOneOut: {
+    readonly perBrew: readonly { readonly brew: number; readonly rmsNormalised: number; readonly count: number }[];
+    readonly rmsNormalised: number;
+  } | null;
   readonly iterations: number;
   readonly converged: boolean;
   /** Brew simulations the whole calibration ran. */

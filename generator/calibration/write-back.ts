@@ -32,6 +32,8 @@ export interface EntryEdit {
   /** In the file's unit (m², W, W/K: the same as SI for these keys), rounded for writing. */
   readonly value: number;
   readonly parameterId: string;
+  /** Where the value came from, written as a comment at the end of its line (e.g. "fitted ± 3 % from logs/x.yaml, 2026-12-02"). */
+  readonly note?: string;
 }
 
 /** The edits a report asks for: one per fitted parameter, in the report's order. */
@@ -71,10 +73,13 @@ export function roundedForWriting(value: number, sigma: number): number {
 export function editedText(
   text: string,
   file: string,
-  edits: readonly { path: YamlPath; value: number }[],
+  edits: readonly { path: YamlPath; value: number; note?: string }[],
 ): string {
   let current = text;
-  for (const edit of edits) current = withValue(current, file, edit.path, edit.value);
+  for (const edit of edits) {
+    current = withValue(current, file, edit.path, edit.value);
+    if (edit.note) current = withNote(current, file, edit.path, edit.note);
+  }
   const expected = parseYamlSource(text, file).source.doc;
   for (const edit of edits) expected.setIn([...edit.path], edit.value);
   const written = parseYamlSource(current, file);
@@ -114,6 +119,21 @@ function withValue(text: string, file: string, path: YamlPath, value: number): s
   const at = lineEnd < 0 ? text.length : lineEnd;
   const indent = ' '.repeat(columnOf(source, (parent.items[0]!.key as Node).range![0]));
   return splice(text, at, at, `\n${indent}${key}: ${written}`);
+}
+
+/**
+ * The provenance note at the end of the value's line: after the line's own comment (kept,
+ * word for word), or as a new comment. A note written by an earlier fit is replaced.
+ */
+function withNote(text: string, file: string, path: YamlPath, note: string): string {
+  const range = rangeAt(parseYamlSource(text, file).source, path);
+  if (!range) return text;
+  const lineEnd = text.indexOf('\n', range[1]);
+  const at = lineEnd < 0 ? text.length : lineEnd;
+  let line = text.slice(range[1], at);
+  line = line.replace(/ ?[#;] ?fitted ±[^#;]*$/u, '');
+  const hasComment = /\s#/.test(line);
+  return text.slice(0, range[1]) + line + (hasComment ? `; ${note}` : ` # ${note}`) + text.slice(at);
 }
 
 function endOf(pair: Pair): number {

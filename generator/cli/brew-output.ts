@@ -25,10 +25,16 @@ export function brewJson(r: BrewResult) {
     },
     peakGaugeBar: round(toBar(r.peakGaugePa), 3),
     valveOpens: r.valveOpens,
+    flash: {
+      boilingC: round(toCelsius(r.flash.boilingK), 2),
+      flashedG: round(r.flash.flashedKg * 1000, 2),
+      aboveBoilingMl: round(toMl(r.flash.aboveBoilingM3), 1),
+    },
     series: r.series.map((p) => ({
       tS: round(p.tS, 1),
       waterC: round(toCelsius(p.waterK), 2),
       coffeeC: round(toCelsius(p.coffeeK), 2),
+      spoutC: round(toCelsius(p.spoutK), 2),
       gaugeBar: round(toBar(p.gaugePa), 4),
       cupMl: round(toMl(p.cupM3), 2),
       flowMlS: round(toMl(p.flowM3PerS), 3),
@@ -52,6 +58,11 @@ export function brewSummary(r: BrewResult, fillMl: number): string {
       ? `extraction     mean ${round(toCelsius(e.meanK), 1)} °C (10 % ${round(toCelsius(e.p10K), 1)}, median ${round(toCelsius(e.p50K), 1)}, 90 % ${round(toCelsius(e.p90K), 1)}); ${round(e.inBandShare * 100)} % in the target band`
       : 'extraction     no coffee reached the cup',
     `peak pressure  ${round(toBar(r.peakGaugePa), 2)} bar gauge${r.valveOpens ? ' — THE VALVE WOULD OPEN' : ''}`,
+    ...(r.flash.flashedKg > 0
+      ? [
+          `flash          ${round(toMl(r.flash.aboveBoilingM3))} mL reached the spout above ${round(toCelsius(r.flash.boilingK), 1)} °C; up to ${round(r.flash.flashedKg * 1000, 1)} g flashed to steam there`,
+        ]
+      : []),
   ];
   return lines.join('\n') + '\n';
 }

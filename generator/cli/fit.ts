@@ -243,7 +243,13 @@ const loaders: Readonly<Record<EntryKind, (path: string) => Promise<unknown>>> =
  * and loaded and validated again before any is renamed over its entry.
  */
 export async function writeFitted(report: FitReport, loaded: LoadedFit): Promise<WrittenLine[]> {
-  const edits = plannedEdits(report, loaded.stove);
+  const date = new Date().toISOString().slice(0, 10);
+  const edits = plannedEdits(report, loaded.stove).map((edit) => {
+    const e = report.estimates.find((x) => x.parameter.id === edit.parameterId);
+    return e?.status === 'fitted'
+      ? { ...edit, note: fitWords.provenance(percent(e.relativeSigma), `logs/${basename(loaded.log.source.file)}`, date) }
+      : edit;
+  });
   const byEntry = new Map<EntryKind, EntryEdit[]>();
   for (const edit of edits) byEntry.set(edit.entry, [...(byEntry.get(edit.entry) ?? []), edit]);
   const staged: { temp: string; path: string }[] = [];
@@ -421,7 +427,37 @@ export function fitText(
       normalised: signed(r.normalised, 2),
     };
   });
+  const plain = report.estimates.flatMap((e): string[] => {
+    if (e.status !== 'fitted') return [];
+    const pct = percent(e.relativeSigma);
+    switch (e.parameter.kind) {
+      case 'heat':
+        return [fitWords.plainHeat(loaded.stove.name, e.parameter.level!, sig(e.value, 2), pct, e.entangledWith)];
+      case 'permeability':
+        return [fitWords.plainPermeability(loaded.coffee.name, pct, e.entangledWith)];
+      case 'heat-loss':
+        return [fitWords.plainHeatLoss(loaded.pot.name, sig(e.value, 2), pct)];
+    }
+  });
+  const parts = report.estimates.flatMap((e) =>
+    e.status === 'fitted' && e.relativeSigma > e.statisticalRelativeSigma * 1.05
+      ? [
+          fitWords.sigmaParts(
+            label(e.parameter, loaded).key,
+            label(e.parameter, loaded).owner,
+            percent(e.statisticalRelativeSigma),
+            percent(e.relativeSigma),
+            e.entangledWith,
+          ),
+        ]
+      : [],
+  );
   const lines = [
+    fitWords.plainHeading,
+    ...(plain.length > 0 ? plain : [fitWords.plainNothing]),
+    ...(report.misfit ? [fitWords.plainMisfit(report.misfit.brews)] : []),
+    ...(report.leaveOneOut ? [fitWords.plainPrediction(sig(report.leaveOneOut.rmsNormalised, 2))] : []),
+    '',
     fitWords.heading(logPath, loaded.pot.id, loaded.coffee.id, loaded.stove.id),
     fitWords.counts(
       loaded.log.brews.length,
@@ -434,6 +470,7 @@ export function fitText(
       report.residualVariance === null ? null : sig(report.residualVariance, 2),
     ),
     ...fitWords.fittedTable(fitted),
+    ...(parts.length > 0 ? [fitWords.sigmaPartsHeading, ...parts] : []),
     ...(keptLines.length > 0
       ? ['', fitWords.keptHeading, ...keptLines.map(fitWords.keptLine)]
       : []),

@@ -6,6 +6,7 @@ import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
 import { refusalText, warningText } from '../render/plan-text.ts';
 import { cliWords } from '../words/cli.ts';
+import { bindingCauseText } from '../render/card-view.ts';
 import { pressure, pressureRough } from '../render/format.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
@@ -115,6 +116,14 @@ export function planJson(plan: CardPlan) {
       firstCoffeeS: plan.coldStart.firstCoffeeS === null ? null : round(plan.coldStart.firstCoffeeS),
     },
     peakGaugeBar: round(toBar(plan.peakGaugePa), 3),
+    peakGaugeRangeBar: {
+      low: round(toBar(plan.peakGaugeRangePa.lowPa), 3),
+      high: round(toBar(plan.peakGaugeRangePa.highPa), 3),
+    },
+    deliveryS: round(plan.deliveryS),
+    deliveryWindowS: plan.deliveryWindowS.map((s) => round(s)),
+    spread: plan.spread,
+    bindingCause: plan.bindingCause,
     simulations: plan.simulations,
     refused: null,
   };
@@ -135,8 +144,9 @@ function planSummary(plan: CardPlan, valveAssumed: boolean): string {
     `heat      ${p.level}`,
     `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
     `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %)`,
-    `pressure  peak ${p.peakGaugeBar} bar gauge`,
+    `pressure  peak ${p.peakGaugeBar} bar gauge (${p.peakGaugeRangeBar.low}–${p.peakGaugeRangeBar.high} if the inputs are off)`,
     `valve     ${cliWords.planValve(valveText(plan.valveOpeningGaugePa, valveAssumed), valveAssumed)}`,
+    ...(plan.bindingCause ? [`why       ${bindingCauseText(plan, 'metric')}`] : []),
     ...p.warnings.map((w) => `warning   ${w}`),
   ].join('\n') + '\n' + cautions;
 }

@@ -3,6 +3,7 @@ import { loadCoffeeFile, loadPotFile, loadStoveFile } from '../content/index.ts'
 import { simulateBrew } from '../brew/simulate.ts';
 import { brewSetup, DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import { maxSafeFill } from '../planning/fill.ts';
+import { fillFor } from '../planning/plan.ts';
 import { cliWords } from '../words/cli.ts';
 import { fromCelsius, fromMl, round, toMl } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
@@ -62,16 +63,18 @@ export async function run(argv: string[]): Promise<number> {
   if (fillMl !== undefined && fromMl(fillMl) > limit.maxFillM3) {
     throw new InputError(cliWords.fillAboveValve(fillMl, Math.floor(toMl(limit.maxFillM3))));
   }
+  // The default fill is the planner's: the safe limit rounded down to a whole mL.
+  const defaultFill = fillFor(pot, startK, room.ambientPa);
   const heatOffS = numberOption(values, 'heat-off-s');
   const result = simulateBrew({
     ...brewSetup(pot.model, coffee.bed, room, {
-      fillVolumeM3: fillMl !== undefined ? fromMl(fillMl) : limit.maxFillM3,
+      fillVolumeM3: fillMl !== undefined ? fromMl(fillMl) : defaultFill,
       startK,
       heatInputW,
       ...(heatOffS !== undefined ? { heatOffAtS: heatOffS } : {}),
       collectSeries: true,
     }),
   });
-  process.stdout.write(values.json ? JSON.stringify(brewJson(result)) + '\n' : brewSummary(result, round(toMl(fillMl !== undefined ? fromMl(fillMl) : limit.maxFillM3))));
+  process.stdout.write(values.json ? JSON.stringify(brewJson(result)) + '\n' : brewSummary(result, round(toMl(fillMl !== undefined ? fromMl(fillMl) : defaultFill))));
   return 0;
 }

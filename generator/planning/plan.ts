@@ -27,7 +27,9 @@ import { deliveryWindowS } from './delivery.ts';
 import { planNotices } from './notices.ts';
 import type {
   AcceptedPlan,
+  BindingCause,
   CardPlan,
+  InputSpread,
   PlanContext,
   PlannedBrew,
   Refusal,
@@ -43,11 +45,19 @@ const START_STEP_K = 5;
 /** Off-heat no later than this before the sputter the pot would reach with the heat on, s. */
 const SPUTTER_LEAD_S = 5;
 /** Candidates refined with an off-heat search, best first by the heat-on score. */
-const REFINE_COUNT = 4;
+const REFINE_COUNT = 6;
 /** The coarse pass takes every 4th start (20 K apart, with the presets between); see planCard. */
 const DEFAULT_SEARCH: PlanSearch = { coarseStride: 4 };
 /** Below this share in band the card warns that the cup will miss the band. */
 const LOW_SHARE = 0.1;
+/** Below this share in band the card names what binds (bindingCauseOf). */
+export const BINDING_SHARE = 0.3;
+/** A recipe's cup is at least this share of the cold start's (heat on to the sputter). */
+export const MIN_CUP_OF_COLD = 0.75;
+/** Share of the cup a delivery one window-opening's length outside the window costs (our choice). */
+export const WINDOW_PENALTY = 0.2;
+/** Share of the cup a cup that falls one floor's worth short costs (our choice). */
+export const CUP_PENALTY = 1;
 /** Shares of the cup closer than this are equal for the off-heat search. */
 const SHARE_RESOLUTION = 0.005;
 /** The off-heat time is searched to this, s (a card prints whole seconds in ranges). */
@@ -84,6 +94,10 @@ interface Scored {
   readonly offS: number;
   readonly result: BrewResult;
   readonly share: number;
+  /** The share less the delivery-window penalty: what the search maximises. */
+  readonly value: number;
+  /** The cup is at least MIN_CUP_OF_COLD of the cold start's. */
+  readonly fullCup: boolean;
 }
 
 /** How the planner searches the start temperatures (tests compare strides). */
@@ -113,15 +127,14 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   }
   // A requested fill must stay below the valve from whatever start it is poured at.
   const starts = startCandidates(request, context.boilingK).filter(
-    (startK) =>
-      request.fillM3 === undefined ||
-      request.fillM3 <= maxSafeFill(pot.model, startK, room.ambientPa).maxFillM3,
+    (startK) => request.fillM3 === undefined || request.fillM3 <= fillFor(pot, startK, room.ambientPa),
   );
   if (starts.length === 0) {
     const limit = maxSafeFill(pot.model, room.ambientK, room.ambientPa);
     return refuse(planNotices.fillAboveValve(request.fillM3!, limit.maxFillM3, VALVE_MARGIN_M));
   }
   const presets = new Set(request.kettlePresetsK ?? []);
+  const spread = inputSpread(coffee, stove);
 
   let simulations = 0;
   const setupOf = (
@@ -129,7 +142,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     levelIndex: number,
     { offS, series = false, scale = NOMINAL, search = false }: RunChoice = {},
   ) => {
-    const fill = request.fillM3 ?? maxSafeFill(pot.model, startK, room.ambientPa).maxFillM3;
+    const fill = request.fillM3 ?? fillFor(pot, startK, room.ambientPa);
     const bed = { ...coffee.bed, permeabilityM2: coffee.bed.permeabilityM2 * scale.permeability };
     return brewSetup(pot.model, bed, room, {
       fillVolumeM3: fill,
@@ -148,7 +161,9 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   const limitPa = PRESSURE_LIMIT_SHARE_OF_VALVE * pot.model.valveOpeningGaugePa;
   const candidates: Candidate[] = [];
   let lowestPeak = Infinity;
-  const [windowLow, windowHigh] = deliveryWindowS(coffee, pot);
+  const window = deliveryWindowS(coffee, pot);
+  /** The cold start's heat-on cup per level (the 75 % rule's reference), m³. */
+  const coldCup = new Map<number, number>();
   /** One heat-on run; 'stop' when this start can take no more heat (or no such brew). */
   const scan = (startK: number, levelIndex: number): 'stop' | 'on' => {
     let heatOnRun: HeatOnBrew;
@@ -162,25 +177,26 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     const heatOn = heatOnRun.result;
     lowestPeak = Math.min(lowestPeak, heatOn.peakGaugePa);
     if (heatOn.peakGaugePa > limitPa) return 'stop';
+    if (startK === room.ambientK) coldCup.set(levelIndex, heatOn.yieldM3);
     if (heatOn.firstCoffeeS === null) return 'on';
     candidates.push({ startK, levelIndex, run: heatOnRun });
-    const delivery = (heatOn.sputterS ?? Infinity) - heatOn.firstCoffeeS;
-    return delivery < windowLow + SPUTTER_LEAD_S ? 'stop' : 'on';
+    return 'on';
   };
   // Coarse to fine: every level of every coarseStride-th start first. More heat only
-  // brews faster and pushes harder, so along each start's levels (gentlest first) the
-  // search stops at the first level over the pressure limit or too fast for the delivery
-  // window. Then, at half the stride each time, the starts beside the best candidates, at
-  // their level.
+  // pushes harder, so along each start's levels (gentlest first) the search stops at the
+  // first level over the pressure limit (a safety limit; the delivery window is only a
+  // preference, scored below). Then, at half the stride each time, the starts beside the
+  // best candidates, at their level.
   const coarse = coarseStarts(starts, presets, search.coarseStride);
   for (const startK of coarse) {
     for (let levelIndex = 0; levelIndex < stove.levels.length; levelIndex++) {
       if (scan(startK, levelIndex) === 'stop') break;
     }
   }
+  const heatOnValue = (c: Candidate) => heatOnScore(c, window);
   const tried = new Set(candidates.map((c) => `${c.startK}/${c.levelIndex}`));
   for (let stride = search.coarseStride / 2; stride >= 1; stride /= 2) {
-    const leaders = [...candidates].sort((a, b) => heatOnScore(b) - heatOnScore(a));
+    const leaders = [...candidates].sort((a, b) => heatOnValue(b) - heatOnValue(a));
     for (const leader of leaders.slice(0, REFINE_COUNT)) {
       const at = starts.indexOf(leader.startK);
       for (const startK of [starts[at - stride], starts[at + stride]]) {
@@ -198,60 +214,123 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     return refuse(planNotices.noDelivery());
   }
 
-  const offHeatWindow = (c: Candidate): [number, number] => {
+  const cupFloor = (levelIndex: number) => MIN_CUP_OF_COLD * (coldCup.get(levelIndex) ?? 0);
+  /** Off-heat search of one candidate: first coffee to the sputter's lead (an early off stays a lever). */
+  const refine = (c: Candidate): Scored | null => {
     const first = c.run.result.firstCoffeeS!;
-    const latest = Math.min(first + windowHigh, (c.run.result.sputterS ?? Infinity) - SPUTTER_LEAD_S);
-    return [first + windowLow, latest];
-  };
-  const feasible = candidates.filter((c) => {
-    const [earliest, latest] = offHeatWindow(c);
-    return latest >= earliest;
-  });
-  if (feasible.length === 0) {
-    return refuse(planNotices.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
-  }
-  const refined: Scored[] = [];
-  const byHeatOnScore = [...feasible].sort((a, b) => heatOnScore(b) - heatOnScore(a));
-  for (const candidate of byHeatOnScore.slice(0, REFINE_COUNT)) {
-    const [earliest, latest] = offHeatWindow(candidate);
-    const best = bestOffHeat(earliest, latest, (offS) => {
+    const latest = Math.max(first, (c.run.result.sputterS ?? c.run.result.endS) - SPUTTER_LEAD_S);
+    const best = bestOffHeat(first, latest, window, cupFloor(c.levelIndex), (offS) => {
       simulations++;
-      return candidate.run.heatOffAt(offS);
+      return c.run.heatOffAt(offS);
     });
-    if (best.share >= 0 && best.result.peakGaugePa <= limitPa && best.result.extraction) {
-      refined.push({ startK: candidate.startK, levelIndex: candidate.levelIndex, ...best });
-    }
+    if (best.share < 0 || best.result.peakGaugePa > limitPa || !best.result.extraction) return null;
+    return { startK: c.startK, levelIndex: c.levelIndex, ...best };
+  };
+  const refined: Scored[] = [];
+  const byHeatOnScore = [...candidates].sort((a, b) => heatOnValue(b) - heatOnValue(a));
+  const refineSet = new Set(byHeatOnScore.slice(0, REFINE_COUNT));
+  // The cold starts are always refined: a card is never worse than doing nothing.
+  for (const c of candidates) if (c.startK === room.ambientK) refineSet.add(c);
+  for (const candidate of refineSet) {
+    const scored = refine(candidate);
+    if (scored) refined.push(scored);
   }
-  if (refined.length === 0) {
-    return refuse(planNotices.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+  // Never worse than doing nothing: at each level, a choice below the cold start's share
+  // (its own cold start refined by the same rules) is dropped.
+  const coldAt = (levelIndex: number) =>
+    refined.find((r) => r.startK === room.ambientK && r.levelIndex === levelIndex);
+  const atLeastCold = refined.filter((r) => r.share >= (coldAt(r.levelIndex)?.share ?? -Infinity));
+  if (atLeastCold.length === 0) {
+    return refuse(planNotices.noPlanFits(window[0], window[1], tooFast(candidates, window[0])));
   }
 
+  // The highest-pressure corner (tightest bed, most heat) must also keep the limit.
+  const highCorner = { permeability: 1 / spread.permeabilityFactor, heat: 1 + spread.heatShare };
+  /** The best choice the high corner's pressure turned down (a binding cause). */
+  let cornerRejected: { share: number; highPa: number } | null = null;
   const printable = firstPrintable(
-    refined,
+    atLeastCold,
     (a, b) => better(a, b, presets),
-    (choice, offS) => run(choice.startK, choice.levelIndex, { offS }),
+    (choice, offS) => {
+      const brew = run(choice.startK, choice.levelIndex, { offS });
+      if (brew.peakGaugePa > limitPa) return brew;
+      const high = run(choice.startK, choice.levelIndex, { offS, scale: highCorner, search: true });
+      if (high.peakGaugePa <= limitPa) return brew;
+      const share = brew.extraction?.inBandShare ?? 0;
+      if (!cornerRejected || share > cornerRejected.share) cornerRejected = { share, highPa: high.peakGaugePa };
+      return { ...brew, peakGaugePa: high.peakGaugePa };
+    },
     limitPa,
   );
   if (printable === null) {
-    return refuse(planNotices.noPlanFits(windowLow, windowHigh, tooFast(candidates, windowLow)));
+    return refuse(planNotices.noPlanFits(window[0], window[1], tooFast(candidates, window[0])));
   }
-  const { chosen, brew } = printable;
-  const coldBrew = run(room.ambientK, chosen.levelIndex);
+  let { chosen, brew } = printable;
+  // The cold start at the chosen level, taken off the heat by the same rules: what doing
+  // nothing gives. The printed run is checked against it too (its off-heat time may have
+  // moved); when it falls below, the cold start itself is the recipe.
+  const coldChoice = coldAt(chosen.levelIndex);
+  let coldBrew = coldChoice
+    ? run(room.ambientK, chosen.levelIndex, { offS: coldChoice.offS })
+    : run(room.ambientK, chosen.levelIndex);
+  const shareOf = (r: BrewResult) => r.extraction?.inBandShare ?? 0;
+  if (coldChoice && chosen.startK !== room.ambientK && shareOf(brew) < shareOf(coldBrew)) {
+    if (coldBrew.endReason !== 'sputter' && coldBrew.peakGaugePa <= limitPa && coldBrew.extraction) {
+      chosen = coldChoice;
+      brew = coldBrew;
+    }
+  }
   const offCupM3 = brew.events.find((e) => e.kind === 'heat-off')?.cupM3 ?? brew.yieldM3;
-  // The corners only spread the timings into ranges: search accuracy is plenty.
-  const corners = SENSITIVITY.map((scale) =>
+  // The corners spread the timings and the peak into ranges: search accuracy is plenty.
+  const corners = cornersOf(spread).map((scale) =>
     run(chosen.startK, chosen.levelIndex, { series: true, scale, search: true }),
   );
   const firstTimes = [brew.firstCoffeeS!, ...corners.map((r) => r.firstCoffeeS ?? brew.firstCoffeeS!)];
   const offTimes = [chosen.offS, ...corners.map((r) => timeAtCup(r, offCupM3) ?? chosen.offS)];
-  const fill = request.fillM3 ?? maxSafeFill(pot.model, chosen.startK, room.ambientPa).maxFillM3;
+  const fill = request.fillM3 ?? fillFor(pot, chosen.startK, room.ambientPa);
   const heights = fillHeights(pot.model, fill);
   const extraction = brew.extraction!;
+  const deliveryS = brew.endS - brew.firstCoffeeS!;
+  const bindingCause =
+    extraction.inBandShare < BINDING_SHARE
+      ? bindingCauseOf(
+          { share: extraction.inBandShare, extraction, deliveryS, window, cups: pot.cups, bandK: coffee.bed.targetBandK },
+          // A what-if: the best share over the coarse starts with the inputs scaled.
+          (scale) => {
+            let bestShare = 0;
+            for (const startK of coarse) {
+              let heatOnRun: HeatOnBrew;
+              try {
+                simulations++;
+                heatOnRun = simulateHeatOn(setupOf(startK, chosen.levelIndex, { scale, search: true }));
+              } catch (error) {
+                if (error instanceof BrewSetupError) continue;
+                throw error;
+              }
+              const r = heatOnRun.result;
+              if (r.firstCoffeeS === null || r.peakGaugePa > limitPa) continue;
+              const latest = Math.max(r.firstCoffeeS, (r.sputterS ?? r.endS) - SPUTTER_LEAD_S);
+              const best = bestOffHeat(r.firstCoffeeS, latest, window, 0, (offS) => {
+                simulations++;
+                return heatOnRun.heatOffAt(offS);
+              });
+              if (best.result.peakGaugePa <= limitPa) bestShare = Math.max(bestShare, best.share);
+            }
+            return bestShare;
+          },
+          stove.levels[0]!.heatToPotW,
+          stove.levels[chosen.levelIndex]!.heatToPotW,
+          coffee.bed.permeabilityM2,
+          cornerRejected === null ? null : { ...(cornerRejected as { share: number; highPa: number }), limitPa },
+        )
+      : null;
   const plan: AcceptedPlan = {
     ...context,
     warnings: [
       ...modelRangeWarnings(request, chosen.levelIndex),
-      ...(extraction.inBandShare < LOW_SHARE ? [planNotices.coolCup(extraction.inBandShare)] : []),
+      ...(extraction.inBandShare < LOW_SHARE && bindingCause === null
+        ? [planNotices.coolCup(extraction.inBandShare)]
+        : []),
     ],
     refused: null,
     fillM3: fill,
@@ -267,6 +346,8 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     heatToPotW: stove.levels[chosen.levelIndex]!.heatToPotW,
     firstCoffeeS: range(brew.firstCoffeeS!, firstTimes),
     offHeatS: range(chosen.offS, offTimes),
+    deliveryS,
+    deliveryWindowS: window,
     yieldM3: brew.yieldM3,
     extraction: {
       meanK: extraction.meanK,
@@ -281,13 +362,131 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
       inBandShare: coldBrew.extraction?.inBandShare ?? 0,
       firstCoffeeS: coldBrew.firstCoffeeS,
     },
-    peakGaugePa: Math.max(brew.peakGaugePa, ...corners.map((r) => r.peakGaugePa)),
+    peakGaugePa: brew.peakGaugePa,
+    peakGaugeRangePa: {
+      lowPa: Math.min(brew.peakGaugePa, ...corners.map((r) => r.peakGaugePa)),
+      highPa: Math.max(brew.peakGaugePa, ...corners.map((r) => r.peakGaugePa)),
+    },
+    spread,
+    bindingCause,
     brew: withoutSeries(brew),
     coldBrew: withoutSeries(coldBrew),
     simulations,
   };
   return plan;
 }
+
+/**
+ * The fill a card prints: the largest safe fill at this start, rounded down to a whole
+ * millilitre (what a jug is read to), so the printed number is the planned one and
+ * `simulate` accepts it.
+ */
+export function fillFor(pot: PotEntry, startK: number, ambientPa: number): number {
+  const max = maxSafeFill(pot.model, startK, ambientPa).maxFillM3;
+  return Math.floor(max * 1e6 + 1e-9) / 1e6;
+}
+
+/**
+ * How uncertain the two inputs that move the timings most are: measured ones (a fitted σ
+ * when the entry has one) or assumed ones (heat from a default efficiency ±30 %, a
+ * grind-derived permeability ×/÷ 2: our choices, from the spread of stove efficiencies
+ * and of grinds within one class).
+ */
+export function inputSpread(coffee: CoffeeEntry, stove: StoveEntry): InputSpread {
+  const sigma = (v: number | undefined) => (v !== undefined && Number.isFinite(v) && v > 0 ? v : undefined);
+  const kSigma = sigma((coffee as { permeabilitySigmaRel?: number }).permeabilitySigmaRel);
+  const anyFitted = stove.levels.some((l) => l.fitted);
+  const heatSigma = sigma((stove as { heatSigmaRel?: number }).heatSigmaRel);
+  const permeabilityMeasured = !coffee.permeabilityAssumed;
+  const heatMeasured = anyFitted || !stove.efficiencyAssumed;
+  return {
+    permeabilityFactor: permeabilityMeasured
+      ? 1 + Math.min(1, 2 * (kSigma ?? MEASURED_PERMEABILITY_REL))
+      : ASSUMED_PERMEABILITY_FACTOR,
+    heatShare: heatMeasured ? Math.min(0.5, 2 * (heatSigma ?? MEASURED_HEAT_REL)) : ASSUMED_HEAT_SHARE,
+    permeabilityMeasured,
+    heatMeasured,
+  };
+}
+
+/** Assumed inputs: permeability ×/÷ 2, heat ±30 %. Measured without a σ: 15 % and 5 % (one σ). */
+const ASSUMED_PERMEABILITY_FACTOR = 2;
+const ASSUMED_HEAT_SHARE = 0.3;
+const MEASURED_PERMEABILITY_REL = 0.15;
+const MEASURED_HEAT_REL = 0.05;
+
+function cornersOf(spread: InputSpread): { permeability: number; heat: number }[] {
+  const k = spread.permeabilityFactor, h = spread.heatShare;
+  return [
+    { permeability: 1 / k, heat: 1 - h },
+    { permeability: 1 / k, heat: 1 + h },
+    { permeability: k, heat: 1 - h },
+    { permeability: k, heat: 1 + h },
+  ];
+}
+
+/**
+ * Why a cup misses the band (share below BINDING_SHARE), from what-ifs of the chosen
+ * recipe: a hotter-than-band cup is a bed too tight; otherwise, half the gentlest heat
+ * and half the permeability are tried, and the change that helps most names the cause;
+ * when neither helps and the delivery is shorter than the window, the pot is too small
+ * for it. SI facts; words/plan.ts says it.
+ */
+function bindingCauseOf(
+  at: {
+    share: number;
+    extraction: { p10K: number; p90K: number; meanK: number };
+    deliveryS: number;
+    window: readonly [number, number];
+    cups: number;
+    bandK: readonly [number, number];
+  },
+  whatIf: (scale: { permeability: number; heat: number }) => number,
+  gentlestW: number,
+  chosenW: number,
+  permeabilityM2: number,
+  cornerRejected: { share: number; highPa: number; limitPa: number } | null,
+): BindingCause {
+  const base = {
+    share: at.share,
+    meanK: at.extraction.meanK,
+    bandLowK: at.bandK[0],
+    bandHighK: at.bandK[1],
+    deliveryS: at.deliveryS,
+    windowLowS: at.window[0],
+    windowHighS: at.window[1],
+  };
+  if (cornerRejected && cornerRejected.share >= at.share + CAUSE_GAIN) {
+    return {
+      code: 'pressure-margin-binds',
+      facts: {
+        ...base,
+        shareIfAllowed: cornerRejected.share,
+        highCornerGaugePa: cornerRejected.highPa,
+        limitGaugePa: cornerRejected.limitPa,
+      },
+    };
+  }
+  if (at.extraction.meanK > at.bandK[1]) {
+    return { code: 'bed-too-tight', facts: { ...base, permeabilityM2 } };
+  }
+  const gentler = whatIf({ permeability: 1, heat: (0.5 * gentlestW) / chosenW });
+  const finer = whatIf({ permeability: 0.5, heat: 1 });
+  const gain = Math.max(gentler, finer) - at.share;
+  if (gain >= CAUSE_GAIN && gentler >= finer) {
+    return { code: 'gentlest-heat-too-strong', facts: { ...base, gentlestW, shareAtHalfHeat: gentler } };
+  }
+  if (gain >= CAUSE_GAIN) {
+    return { code: 'bed-too-open', facts: { ...base, permeabilityM2, shareAtHalfPermeability: finer } };
+  }
+  if (at.deliveryS < at.window[0]) {
+    return { code: 'pot-too-small-for-window', facts: { ...base, cups: at.cups } };
+  }
+  return { code: 'band-out-of-reach', facts: base };
+}
+
+/** A what-if that gains this much share names the cause. */
+const CAUSE_GAIN = 0.1;
 
 interface RunChoice {
   readonly offS?: number;
@@ -299,14 +498,6 @@ interface RunChoice {
 }
 
 const NOMINAL = { permeability: 1, heat: 1 };
-/** The model's sensitivity corners: permeability ±30 %, heat ±10 %. */
-const SENSITIVITY = [
-  { permeability: 0.7, heat: 0.9 },
-  { permeability: 0.7, heat: 1.1 },
-  { permeability: 1.3, heat: 0.9 },
-  { permeability: 1.3, heat: 1.1 },
-];
-
 /**
  * Room temperature, the kettle presets, and 5 K steps (a thermometer), up to 90 °C and
  * 2 K below boiling, ascending.
@@ -337,29 +528,61 @@ export function coarseStarts(
   );
 }
 
-function heatOnScore(c: Candidate): number {
-  return c.run.result.extraction?.inBandShare ?? 0;
+function heatOnScore(c: Candidate, window: readonly [number, number]): number {
+  const r = c.run.result;
+  const share = r.extraction?.inBandShare ?? 0;
+  return share - windowPenalty((r.sputterS ?? r.endS) - r.firstCoffeeS!, window);
 }
 
 /**
- * Golden-section search of the off-heat time for the best share in band (unimodal in
- * practice). Shares within SHARE_RESOLUTION count as equal and the larger cup wins, so a
- * card never cuts the brew short for no gain.
+ * The delivery-window preference: no penalty inside the window, and WINDOW_PENALTY of
+ * share per window-opening's length outside it (growing with the distance, never a
+ * refusal). Delivery is first coffee → last drop, the tail included.
+ */
+export function windowPenalty(deliveryS: number, [lowS, highS]: readonly [number, number]): number {
+  const distance = Math.max(0, lowS - deliveryS, deliveryS - highS);
+  return (WINDOW_PENALTY * distance) / Math.max(lowS, 1);
+}
+
+/**
+ * The cup preference: no penalty at or above the floor (MIN_CUP_OF_COLD of the cold
+ * start's cup), and CUP_PENALTY of share per floor's worth of cup missing below it.
+ */
+export function cupPenalty(cupM3: number, floorM3: number): number {
+  return floorM3 > 0 ? (CUP_PENALTY * Math.max(0, floorM3 - cupM3)) / floorM3 : 0;
+}
+
+/**
+ * Golden-section search of the off-heat time for the best value (share in band less the
+ * window penalty; unimodal in practice). A cup under the floor loses to one above it;
+ * values within SHARE_RESOLUTION count as equal and the larger cup wins, so a card never
+ * cuts the brew short for no gain.
  */
 function bestOffHeat(
   earliest: number,
   latest: number,
+  window: readonly [number, number],
+  cupFloorM3: number,
   simulate: (offS: number) => BrewResult,
-): { offS: number; result: BrewResult; share: number } {
+): { offS: number; result: BrewResult; share: number; value: number; fullCup: boolean } {
   // A run that still reaches the sputter after the heat is off scores below any other:
   // the sputter's last, steam-driven drops are what the card tells people to avoid.
   const score = (offS: number) => {
     const result = simulate(offS);
-    const share = result.endReason === 'sputter' ? -1 : (result.extraction?.inBandShare ?? 0);
-    return { offS, result, share };
+    const sputters = result.endReason === 'sputter';
+    const share = sputters ? -1 : (result.extraction?.inBandShare ?? 0);
+    const value =
+      sputters || result.firstCoffeeS === null
+        ? -Infinity
+        : share -
+          windowPenalty(result.endS - result.firstCoffeeS, window) -
+          cupPenalty(result.yieldM3, cupFloorM3);
+    return { offS, result, share, value, fullCup: result.yieldM3 >= cupFloorM3 };
   };
-  const wins = (a: ReturnType<typeof score>, b: ReturnType<typeof score>): boolean =>
-    Math.abs(a.share - b.share) > SHARE_RESOLUTION ? a.share > b.share : a.result.yieldM3 > b.result.yieldM3;
+  type S = ReturnType<typeof score>;
+  const wins = (a: S, b: S): boolean => {
+    return Math.abs(a.value - b.value) > SHARE_RESOLUTION ? a.value > b.value : a.result.yieldM3 > b.result.yieldM3;
+  };
   if (latest - earliest < 2) return score(latest);
   const phi = (Math.sqrt(5) - 1) / 2;
   let a = earliest, b = latest;
@@ -410,9 +633,13 @@ export function firstPrintable<C extends { readonly offS: number }>(
   return null;
 }
 
-/** Tie-breaks (shares within TIE_SHARE): gentler level, a kettle preset, cooler start. */
+/**
+ * The planner's preference: the value (share in band less the window and cup penalties);
+ * values within TIE_SHARE are a tie,
+ * won by the gentler level, a kettle preset, the cooler start.
+ */
 function better(a: Scored, b: Scored, presets: ReadonlySet<number>): boolean {
-  if (Math.abs(a.share - b.share) > TIE_SHARE) return a.share > b.share;
+  if (Math.abs(a.value - b.value) > TIE_SHARE) return a.value > b.value;
   if (a.levelIndex !== b.levelIndex) return a.levelIndex < b.levelIndex;
   const aPreset = presets.has(a.startK), bPreset = presets.has(b.startK);
   if (aPreset !== bPreset) return aPreset;

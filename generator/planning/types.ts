@@ -5,7 +5,7 @@
 import type { BrewResult } from '../brew/types.ts';
 import type { GrindClass } from '../content/types.ts';
 
-/** A timing with its spread from the model's sensitivity (permeability ±30 %, heat ±10 %). */
+/** A timing with its spread from the inputs' uncertainty (InputSpread). */
 export interface TimeRange {
   readonly lowS: number;
   readonly midS: number;
@@ -108,16 +108,72 @@ export interface AcceptedPlan extends PlanContext {
   };
   readonly targetBandK: readonly [number, number];
   readonly coldStart: StartComparison;
+  /** First coffee → last drop (tail included) of the printed run, s. */
+  readonly deliveryS: number;
+  /** The coffee's delivery window for this pot, s (a preference, scored). */
+  readonly deliveryWindowS: readonly [number, number];
+  /** Peak gauge pressure of the printed run itself, Pa. */
   readonly peakGaugePa: number;
+  /** Its range over the uncertainty corners, Pa (the refusal limit is checked on the high one). */
+  readonly peakGaugeRangePa: { readonly lowPa: number; readonly highPa: number };
+  /** The inputs' uncertainty the ranges come from. */
+  readonly spread: InputSpread;
+  /** Set when the share in band is below 0.3: what binds, as a code with facts. */
+  readonly bindingCause: BindingCause | null;
   /** The chosen brew re-simulated (the charts draw its cup curve). */
   readonly brew: PlannedBrew;
-  /** The same pot, coffee and level started with room-temperature water. */
+  /** The same pot, coffee and level started with room-temperature water, off the heat by the same rules. */
   readonly coldBrew: PlannedBrew;
   /** Simulations the search ran, for the benchmark. */
   readonly simulations: number;
 }
 
 export type CardPlan = AcceptedPlan | RefusedPlan;
+
+/**
+ * How far the two inputs that move a card most may be off: the corners of the ranges are
+ * permeability ×/÷ permeabilityFactor and heat × (1 ± heatShare).
+ */
+export interface InputSpread {
+  readonly permeabilityFactor: number;
+  readonly heatShare: number;
+  /** From a log fit or a measured entry (else assumed from the grind / a default efficiency). */
+  readonly permeabilityMeasured: boolean;
+  readonly heatMeasured: boolean;
+}
+
+export type BindingCauseCode =
+  | 'bed-too-open'
+  | 'bed-too-tight'
+  | 'gentlest-heat-too-strong'
+  | 'pot-too-small-for-window'
+  | 'pressure-margin-binds'
+  | 'band-out-of-reach';
+
+/**
+ * What keeps the cup out of its band when the best share is below 0.3: a code and SI
+ * facts (K, s, W, m², shares 0–1); generator/words/plan.ts says it.
+ */
+export interface BindingCause {
+  readonly code: BindingCauseCode;
+  readonly facts: {
+    readonly share: number;
+    readonly meanK: number;
+    readonly bandLowK: number;
+    readonly bandHighK: number;
+    readonly deliveryS: number;
+    readonly windowLowS: number;
+    readonly windowHighS: number;
+    readonly gentlestW?: number;
+    readonly shareAtHalfHeat?: number;
+    readonly permeabilityM2?: number;
+    readonly shareAtHalfPermeability?: number;
+    readonly cups?: number;
+    readonly shareIfAllowed?: number;
+    readonly highCornerGaugePa?: number;
+    readonly limitGaugePa?: number;
+  };
+}
 
 /**
  * A run as a plan keeps it: without the 1 s time series, which nothing drawn from a plan

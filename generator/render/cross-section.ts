@@ -14,7 +14,7 @@ import { potGeometry } from '../brew/geometry.ts';
 import type { UnitSystem } from '../content/types.ts';
 import { cardWords } from '../words/card.ts';
 import { FONT_FAMILY } from './fonts.ts';
-import { length } from './format.ts';
+import { lengthDown } from './format.ts';
 import { el, escapeXml, n } from './svg.ts';
 import { measureText } from './text-measure.ts';
 
@@ -23,6 +23,11 @@ export interface CrossSectionInput {
   readonly potName: string;
   /** Height of the fill line above the floor, m (AcceptedPlan.fillHeightM). */
   readonly fillHeightM: number;
+  /**
+   * The fill line's gap below the valve, m (AcceptedPlan.belowValveM): labelled with the
+   * same rounding down as the card's text, so the two never differ. Default: from the pot.
+   */
+  readonly belowValveM?: number;
   readonly units: UnitSystem;
 }
 
@@ -117,7 +122,7 @@ export function crossSection(input: CrossSectionInput): CrossSection {
   const spoutY = y(pot.spoutHeightM);
   const tubeW = Math.max(3, pot.tubeInnerDiameterM * s);
   const basketW = Math.min(potWidth - 2, pot.basketDiameterM * s);
-  const gap = length(pot.valveHeightM - input.fillHeightM, input.units).text;
+  const gap = lengthDown(input.belowValveM ?? pot.valveHeightM - input.fillHeightM, input.units).text;
 
   const labelX = potRightX + VALVE_STUB_PX + LEADER_PX;
   const labels: Label[] = [

@@ -98,8 +98,16 @@ export function waterVolume(m3: number, units: UnitSystem): Quantity {
  */
 export function fillVolume(m3: number, units: UnitSystem): Quantity {
   return units === 'us'
-    ? quantity(Math.floor(toFlOz(m3) * 10) / 10, 1, 'fl oz')
-    : quantity(Math.floor(toMl(m3)), 0, 'mL');
+    ? quantity(floorShown(toFlOz(m3) * 10) / 10, 1, 'fl oz')
+    : quantity(floorShown(toMl(m3)), 0, 'mL');
+}
+
+/**
+ * Rounded down, except that float noise below a whole number does not drop it: the planner
+ * plans whole millilitres (planning/plan.ts fillFor), and 150 mL must print 150, not 149.
+ */
+function floorShown(x: number): number {
+  return Math.floor(x + 1e-9);
 }
 
 /** The fill's mass, rounded down like `fillVolume`. */

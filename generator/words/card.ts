@@ -6,7 +6,7 @@
  */
 import type { HeatKind } from '../content/heat-kind.ts';
 import type { GrindClass } from '../content/types.ts';
-import type { RefusalCode } from '../planning/types.ts';
+import type { BindingCauseCode, RefusalCode } from '../planning/types.ts';
 
 const grindNames: Record<GrindClass, string> = {
   fine: 'fine',
@@ -15,6 +15,22 @@ const grindNames: Record<GrindClass, string> = {
   'medium-coarse': 'medium-coarse',
   coarse: 'coarse',
 };
+
+/** The facts of a binding cause, formatted (render/card-view.ts). */
+export interface BindingCauseText {
+  readonly share: string;
+  readonly band: string;
+  readonly mean: string;
+  readonly delivery: string;
+  readonly window: string;
+  readonly cups: string;
+  readonly gentlest?: string;
+  readonly shareAtHalfHeat?: string;
+  readonly shareAtHalfPermeability?: string;
+  readonly shareIfAllowed?: string;
+  readonly highCorner?: string;
+  readonly limit?: string;
+}
 
 const heatKindNames: Record<HeatKind, string> = {
   gas: 'Gas',
@@ -79,7 +95,7 @@ export const cardWords = {
     thisCard: 'This card',
     coldStart: 'Cold start',
     band: (band: string): string => `Target ${band}`,
-    caption: 'Started from cold water, coffee begins to flow while the water is still cool.',
+    caption: 'Brewing temperature: the water’s as it reaches the grounds (the SCA’s point of contact).',
     alt: (plan: string, cold: string, band: string): string =>
       `Chart: brewing temperature against coffee in the cup. This card: ${plan} of the cup in the target ${band}; from a cold start: ${cold}.`,
   },
@@ -89,11 +105,29 @@ export const cardWords = {
     inBand: (band: string): string => `Brewed at ${band}`,
     inBandValue: (plan: string, cold: string): string => `${plan} of the cup (cold start: ${cold})`,
     peakPressure: 'Highest pressure in the base',
-    peakPressureValue: (peak: string, valve: string): string =>
-      `${peak}; the valve opens at ${valve}`,
+    peakPressureValue: (peak: string, valve: string, highest?: string): string =>
+      `${peak}${highest ? ` (up to ${highest})` : ''}; the valve opens at ${valve}`,
     /** The valve's opening pressure when the pot's entry gives none: `valve` is "about 1.5 bar". */
-    peakPressureAssumedValue: (peak: string, valve: string): string =>
-      `${peak}; the valve opens at about ${valve} (assumed: no value was given; ask the maker)`,
+    peakPressureAssumedValue: (peak: string, valve: string, highest?: string): string =>
+      `${peak}${highest ? ` (up to ${highest})` : ''}; the valve opens at about ${valve} (assumed: no value was given; ask the maker)`,
+    /** Why the cup misses the band (share below 0.3), with the change that fits the cause. */
+    bindingCause: (code: BindingCauseCode, f: BindingCauseText): string => {
+      const lead = `Only ${f.share} of the cup is brewed at ${f.band}`;
+      switch (code) {
+        case 'bed-too-open':
+          return `${lead}: the coffee bed is too open for this pot, so the water runs through before it is hot (${f.shareAtHalfPermeability ?? '?'} with a bed half as permeable). Grind finer, or use a bigger pot.`;
+        case 'bed-too-tight':
+          return `${lead}: the coffee bed is so tight that the water is pushed through above the band (about ${f.mean} on average). Grind coarser and never tamp.`;
+        case 'gentlest-heat-too-strong':
+          return `${lead}: even the stove's gentlest setting (${f.gentlest}) is too strong for this pot (${f.shareAtHalfHeat ?? '?'} at half that heat). Use a heat diffuser or a smaller burner.`;
+        case 'pot-too-small-for-window':
+          return `${lead}: the pot is too small for this coffee's brew time; its ${f.cups}-cup brew runs ${f.delivery} against ${f.window}. Use a bigger pot or a coarser grind.`;
+        case 'pressure-margin-binds':
+          return `${lead}: hotter starts would reach ${f.highCorner} if the inputs are off, above the half-valve limit of ${f.limit} (they would give ${f.shareIfAllowed ?? '?'}). Time a brew log to narrow the inputs, or grind coarser.`;
+        case 'band-out-of-reach':
+          return `${lead} (about ${f.mean} on average): no setting of this stove reaches the band with this pot and coffee. Try a different grind or stove.`;
+      }
+    },
     boiling: 'Water boils here at',
     boilingValue: (boiling: string, altitude: string): string =>
       `${boiling} (altitude ${altitude})`,

@@ -68,6 +68,11 @@ const table = (rows: readonly (readonly string[])[], indent = '  '): string[] =>
 };
 
 /** What would inform a parameter the log could not pin down. */
+/** Held inputs, in words for the plain summary. */
+function plainName(id: string): string {
+  return id === 'retention' ? "grounds' water retention" : id === 'permeability' ? 'coffee bed' : id === 'heat-loss' ? "pot's heat loss" : `stove's ${id.replace('heat:', '')} setting`;
+}
+
 const wouldInform: Record<KeptLine['parameterKind'], string> = {
   permeability:
     'scale readings through the delivery and probe readings of the water in the base inform it',
@@ -128,6 +133,20 @@ export const fitWords = {
   writeFailed: (file: string, reason: string): string =>
     `could not write ${file} (${reason}); nothing was changed in it`,
 
+  // ── The report: plain words first, for the person running the café ───────────────────
+  plainHeading: 'In short:',
+  plainHeat: (stove: string, level: string, watts: string, percent: string, entangled: readonly string[]): string =>
+    `  Your ${stove}'s ${level} puts about ${watts} W into this pot, give or take ${percent} %${entangled.length ? ` (part of that doubt is the ${entangled.map(plainName).join(' and ')}, which this log cannot separate)` : ''}.`,
+  plainPermeability: (coffee: string, percent: string, entangled: readonly string[]): string =>
+    `  ${coffee} lets water through the bed as measured, give or take ${percent} %${entangled.length ? ` (not separable from the ${entangled.map(plainName).join(' and ')})` : ''}.`,
+  plainHeatLoss: (pot: string, value: string, percent: string): string =>
+    `  The ${pot} loses about ${value} W for each °C above the room, give or take ${percent} %.`,
+  plainMisfit: (brews: readonly number[]): string =>
+    `  These readings do not agree with each other: brew${brews.length === 1 ? '' : 's'} ${brews.map((b) => b + 1).join(', ')} ${brews.length === 1 ? 'stands' : 'stand'} out. Check ${brews.length === 1 ? 'its' : 'their'} numbers, the stove level and the grind used that day before writing anything back.`,
+  plainPrediction: (rms: string): string =>
+    `  Each brew, predicted from the others alone, is off by about ${rms} times what a stopwatch, scale or probe can tell apart${Number(rms) <= 2 ? ': the values carry over to brews not in the log' : ': treat cards made from these values as rough'}.`,
+  plainNothing: '  This log cannot pin down anything yet: time the first coffee and the sputter of a few brews.',
+
   // ── The report ──────────────────────────────────────────────────────────────────────
   heading: (log: string, pot: string, coffee: string, stove: string): string =>
     `Calibration from ${log}: pot ${pot}, coffee ${coffee}, stove ${stove}`,
@@ -136,7 +155,7 @@ export const fitWords = {
   fittedHeading: (residualVariance: string | null): string =>
     residualVariance === null
       ? 'Fitted (± 1 σ from the Jacobian at the optimum; no degrees of freedom left, so the σ of each reading is taken as assumed):'
-      : `Fitted (± 1 σ from the Jacobian at the optimum, covariance scaled by the residual variance χ²/dof = ${residualVariance}):`,
+      : `Fitted (± 1 σ from the Jacobian at the optimum; χ²/dof = ${residualVariance}, by which the covariance is scaled only when above 1, so no σ falls below what the readings' own σ allow):`,
   fittedTable: (lines: readonly FittedLine[]): string[] =>
     lines.length === 0
       ? ['  nothing: the log cannot pin down any of the values']
@@ -150,6 +169,10 @@ export const fitWords = {
           ]),
         ),
   keptHeading: "Not identifiable from this log, kept at the entry's value:",
+  /** Fitted σ = readings' part ⊕ what the held values' own doubt adds. */
+  sigmaParts: (key: string, owner: string, readings: string, total: string, entangled: readonly string[]): string =>
+    `  ${key} (${owner}): ± ${readings} % from the readings, ± ${total} % with the doubt of ${entangled.length ? entangled.join(', ') : 'the values held'}`,
+  sigmaPartsHeading: 'Of which the held values (at their priors, with their own doubt) add:',
   keptLine: (l: KeptLine): string =>
     `  ${l.key} (${l.owner}) ${l.value} ${l.unit}: ${reasonWords(l.reason)}; ${wouldInform[l.parameterKind]}.`,
   residualsHeading: (stopwatch: string, scale: string, probe: string, yieldMl: string): string =>
@@ -173,6 +196,9 @@ export const fitWords = {
   // ── --write ─────────────────────────────────────────────────────────────────────────
   written: (l: WrittenLine): string =>
     `Wrote ${l.file}: ${l.field} ${l.value}${l.was === null ? ' (new)' : ` (was ${l.was})`}`,
+  /** The comment `fit --write` leaves beside a value it writes (kept short: one line). */
+  provenance: (percent: string, logFile: string, date: string): string =>
+    `fitted ± ${percent} % from ${logFile}, ${date}`,
   nothingWritten: 'Nothing written: the log cannot pin down any of the values.',
   notWritten: (keys: readonly string[]): string =>
     `Not written (not identifiable): ${keys.join(', ')}`,

@@ -46,7 +46,8 @@ async function hostileContent(dir: string): Promise<void> {
   await setLine(at('coffees/house-blend.yaml'), /^notes: .*$/m, `notes: ${quoted(HOSTILE.notes)}`);
   await setLine(at('pots/three-cup.yaml'), /^name: .*$/m, `name: ${quoted(HOSTILE.pot)}`);
   await setLine(at('stoves/bar-gas.yaml'), /^name: .*$/m, `name: ${quoted(HOSTILE.stove)}`);
-  await setLine(at('stoves/bar-gas.yaml'), /label: simmer/, `label: ${quoted(HOSTILE.level)}`);
+  // On the level the planner chooses for this card (low, since the window became a preference).
+  await setLine(at('stoves/bar-gas.yaml'), /label: low/, `label: ${quoted(HOSTILE.level)}`);
   await setLine(at('site.yaml'), /^ {2}name: .*$/m, `  name: ${quoted(HOSTILE.business)}`);
   await setLine(at('site.yaml'), /^ {2}contact: .*$/m, `  contact: ${quoted(HOSTILE.contact)}`);
   await setLine(

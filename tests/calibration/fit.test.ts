@@ -115,9 +115,11 @@ describe('fitLog: U·A', () => {
     const ua = estimate(fitLog(input), 'heat-loss');
     expect(ua.status, 'U·A with probe readings').toBe('fitted');
     if (ua.status !== 'fitted') return;
-    expect(ua.relativeSigma).toBeLessThanOrEqual(0.5);
-    // 3σ of this log's U·A (σ ≈ 12 %).
+    // Its readings alone give σ ≈ 12 %; the grounds' retention, held at its prior, widens it
+    // (fit.ts RETENTION_SIGMA_LN): the value still lies within 3σ of the truth.
+    expect(ua.statisticalRelativeSigma).toBeLessThanOrEqual(0.5);
     expectRelative(ua.value, truth.heatLossWPerK, 0.35, 'U·A from probe readings');
+    expect(Math.abs(Math.log(ua.value / truth.heatLossWPerK))).toBeLessThanOrEqual(3 * ua.relativeSigma);
   });
 
   // own rule: the fit recovers the synthetic truth it was given, not an outside value

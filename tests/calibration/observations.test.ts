@@ -14,6 +14,7 @@ const point = (tS: number, waterK: number, cupM3: number): SeriesPoint => ({
   tS,
   waterK,
   coffeeK: waterK,
+  spoutK: Math.min(waterK, 373.12),
   gaugePa: 0,
   cupM3,
   flowM3PerS: 0,

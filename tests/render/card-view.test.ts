@@ -136,7 +136,7 @@ describe('stationCardView(accepted plan, us)', () => {
     expect(r.water.fillVolume.text).toBe(
       `${(Math.floor(((accepted.fillM3 * 1e6) / ML_PER_FL_OZ) * 10) / 10).toFixed(1)}${NBSP}fl oz`,
     );
-    expect(r.water.fillMass.text).toBe(`${fixed((accepted.fillKg * 1e3) / G_PER_OZ, 1)}${NBSP}oz`);
+    expect(r.water.fillMass.text).toBe(`${(Math.floor(((accepted.fillKg * 1e3) / G_PER_OZ) * 10) / 10).toFixed(1)}${NBSP}oz`);
     expect(r.coffee.dose.text).toBe(`${fixed((accepted.doseKg * 1e3) / G_PER_OZ, 2)}${NBSP}oz`);
     expect(r.water.temperature.text).toBe(`${fixed(fahrenheit(accepted.startK), 0)}${NBSP}°F`);
     expect(r.water.fillHeight.text).toBe(
@@ -243,5 +243,34 @@ describe('escaping', () => {
     coffees.set(accepted.coffeeId, { ...coffees.get(accepted.coffeeId)!, name: hostile });
     const view = await stationCardView(accepted, { ...catalogue, coffees }, OPTIONS);
     expect(view.title).toBe(hostile);
+  });
+});
+
+describe('one number, one source: the one-cup demo cards', () => {
+  // The gap below the valve was printed 3 mm in the text and 4 mm in the drawing (two
+  // computations); both now format the plan's belowValveM, rounded down (a safety limit).
+  it('labels the drawing with the same gap as the text, in mm and in inches', async () => {
+    let checked = 0;
+    for (const coffeeId of catalogue.coffees.keys()) {
+      for (const stoveId of ['bar-gas', 'home-radiant']) {
+        const p = plan(catalogue, { potId: 'one-cup', coffeeId, stoveId });
+        if (p.refused) continue;
+        for (const units of ['metric', 'us'] as const) {
+          const r = (await stationCardView(p, catalogue, { ...OPTIONS, units })).recipe!;
+          expect(r.water.fillLineText).toContain(r.water.belowValve.text);
+          expect(r.water.crossSectionSvg).toContain(cardWords.crossSection.margin(r.water.belowValve.text).replace(/"/g, '&quot;'));
+          checked++;
+        }
+      }
+    }
+    expect(checked).toBeGreaterThanOrEqual(8);
+  });
+
+  it('prints the recipe’s own peak with the corners’ range', async () => {
+    const r = (await stationCardView(accepted, catalogue, { ...OPTIONS, units: 'metric' })).recipe!;
+    const row = r.expect.rows.find((x) => x.label === cardWords.expect.peakPressure)!;
+    expect(row.value.startsWith(`${(accepted.peakGaugePa / 1e5).toFixed(2)}${NBSP}bar`)).toBe(true);
+    expect(accepted.peakGaugeRangePa.lowPa).toBeLessThanOrEqual(accepted.peakGaugePa);
+    expect(accepted.peakGaugeRangePa.highPa).toBeGreaterThanOrEqual(accepted.peakGaugePa);
   });
 });
