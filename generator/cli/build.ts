@@ -5,6 +5,7 @@ import { serveSite } from '../pipeline/serve.ts';
 import { sitePdfStep } from '../pipeline/pdf-step.ts';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
+import { faultWords } from '../words/build-faults.ts';
 import { UsageError } from './errors.ts';
 import { checkOutFolder } from './out-folder.ts';
 import { parseOptions } from './options.ts';
@@ -31,6 +32,17 @@ export function warningLines(result: BuildResult): string {
       ),
     )
     .join('');
+}
+
+/** What the build did besides the site: leftovers removed, cache files made again, a previous site kept. */
+export function noteLines(result: BuildResult): string {
+  const notes: string[] = [];
+  if (result.sweptLeftovers.length > 0) notes.push(faultWords.sweptLeftovers(result.sweptLeftovers));
+  if (Object.keys(result.damagedCache).length > 0)
+    notes.push(faultWords.damagedCache(result.damagedCache));
+  const kept = result.swap.notRemoved;
+  if (kept) notes.push(faultWords.previousNotRemoved(kept.folder, kept.code));
+  return notes.map((note) => `${note}\n`).join('');
 }
 
 function portOption(raw: string | boolean | undefined): number {
@@ -78,6 +90,7 @@ export async function run(argv: string[]): Promise<number> {
   progress.finish();
   process.stderr.write(warningLines(result));
   process.stderr.write(`${summaryLine(result)}\n`);
+  process.stderr.write(noteLines(result));
   if (values.serve) {
     await serveSite({
       contentDir,

@@ -24,6 +24,7 @@ import { MAX_CONTENT_FILE_BYTES } from '../../generator/content/file-bytes.ts';
 import { MAX_ALIAS_COUNT } from '../../generator/content/yaml-source.ts';
 import { buildWords } from '../../generator/words/card.ts';
 import { contentWords } from '../../generator/words/content.ts';
+import { faultWords } from '../../generator/words/build-faults.ts';
 import {
   DEMO_CONTENT,
   expectCleanFailure,
@@ -248,7 +249,7 @@ async function prepare(name: string, mutate: Mutation): Promise<{ content: strin
   const content = await demoCopy(path.join(root, `content-${slug}`));
   await mutate(content);
   const out = path.join(root, `out-${slug}`);
-  await cp(goodSite, out, { recursive: true });
+  await cp(goodSite, out, { recursive: true, dereference: true });
   return { content, out };
 }
 
@@ -389,6 +390,6 @@ describe('stovecard build --out that must not be replaced', () => {
     const folder = path.join(root, 'photos');
     await mkdir(folder);
     await writeFile(path.join(folder, 'cat.jpg'), 'meow');
-    await refused(folder, DEMO_CONTENT, buildWords.outNotASite(folder));
+    await refused(folder, DEMO_CONTENT, faultWords.outNotASite(folder));
   });
 });
