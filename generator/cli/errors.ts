@@ -2,6 +2,7 @@
 import { ContentErrors } from '../content/index.ts';
 import { BrewSetupError } from '../brew/errors.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
+import { PageCollisionError } from '../pipeline/cards.ts';
 import { OutFolderError } from '../pipeline/swap.ts';
 import { faultWords } from '../words/build-faults.ts';
 import { shown } from '../words/shown.ts';
@@ -35,6 +36,12 @@ export function reportError(error: unknown): number {
     error instanceof OutOfRangeError
   ) {
     process.stderr.write(`stovecard: ${error.message}\n`);
+    return 2;
+  }
+  if (error instanceof PageCollisionError) {
+    process.stderr.write(
+      `stovecard: ${faultWords.pageCollision(error.page, error.first, error.second)}\n`,
+    );
     return 2;
   }
   if (error instanceof OutFolderError) {
