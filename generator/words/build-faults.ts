@@ -31,6 +31,11 @@ const CACHE_KINDS: Record<string, readonly [string, string]> = {
   pdfs: ['PDF', 'PDFs'],
 };
 
+const kindOrder = (folder: string): number => {
+  const i = Object.keys(CACHE_KINDS).indexOf(folder);
+  return i < 0 ? Infinity : i;
+};
+
 export const faultWords = {
   outNotASite: (outDir: string): string =>
     `--out ${shown(outDir)} is a folder that holds other files and was not made by stovecard build (it has no .stovecard-site file), and the build replaces the whole --out folder; choose a new or empty folder, or move its files away first`,
@@ -51,6 +56,7 @@ export const faultWords = {
       .join(', ')}${names.length > 5 ? `, and ${names.length - 5} more` : ''}`,
   damagedCache: (counts: Readonly<Record<string, number>>): string =>
     `note: made again ${Object.entries(counts)
+      .sort(([a], [b]) => kindOrder(a) - kindOrder(b))
       .map(([folder, n]) => {
         const [one, many] = CACHE_KINDS[folder] ?? [`${folder} file`, `${folder} files`];
         return `${n} ${n === 1 ? one : many}`;
