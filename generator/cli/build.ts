@@ -1,7 +1,7 @@
 /** `stovecard build [--content DIR] [--out DIR] [--serve]`: the site of cards. */
 import { buildSite, type BuildResult } from '../pipeline/build-site.ts';
 import { terminalProgress } from '../pipeline/progress.ts';
-import { serveSite } from '../pipeline/serve.ts';
+import { checkPort, serveSite } from '../pipeline/serve.ts';
 import { sitePdfStep } from '../pipeline/pdf-step.ts';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
@@ -45,6 +45,19 @@ export function noteLines(result: BuildResult): string {
   return notes.map((note) => `${note}\n`).join('');
 }
 
+/** The port --serve will listen on is free now, or a UsageError says what to change. */
+async function portFree(port: number): Promise<void> {
+  try {
+    await checkPort(port);
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code === 'EADDRINUSE')
+      throw new UsageError(faultWords.portInUse(port));
+    if ((error as NodeJS.ErrnoException).code === 'EACCES')
+      throw new UsageError(faultWords.portNotAllowed(port));
+    throw error;
+  }
+}
+
 function portOption(raw: string | boolean | undefined): number {
   if (raw === undefined || typeof raw === 'boolean') return 8080;
   const port = Number(raw);
@@ -68,6 +81,7 @@ export async function run(argv: string[]): Promise<number> {
   const outDir = typeof values.out === 'string' ? values.out : 'site';
   const port = portOption(values.port);
   await checkOutFolder(contentDir, outDir);
+  if (values.serve) await portFree(port);
   const progress = terminalProgress(process.stderr);
   let result: BuildResult;
   try {

@@ -63,7 +63,9 @@ export const faultWords = {
       })
       .join(', ')} whose cached copy failed its check (damaged or changed on disk)`,
   portInUse: (port: number): string =>
-    `port ${port} is in use by another program; stop it or choose another with --port (0 picks a free one)`,
+    `port ${port} is in use by another program; stop it or choose another with --port`,
+  portNotAllowed: (port: number): string =>
+    `port ${port} needs special rights on this system; choose one above 1023 with --port`,
   pageCollision: (page: string, first: string, second: string): string =>
     `two cards would share the page ${shown(page)}: ${shown(first)} and ${shown(second)}; rename one of the ids`,
 } as const;
