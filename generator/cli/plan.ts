@@ -5,6 +5,7 @@ import { maxSafeFill } from '../planning/fill.ts';
 import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
 import { cliWords } from '../words/cli.ts';
+import { faultWords } from '../words/build-faults.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
 import { allEntries } from './load-entries.ts';
@@ -30,8 +31,8 @@ export async function run(argv: string[]): Promise<number> {
     coffee: requiredString(values, 'coffee', cliWords.planHelp),
     stove: requiredString(values, 'stove', cliWords.planHelp),
   };
-  const ambientC = numberOption(values, 'ambient-c');
-  const altitudeM = numberOption(values, 'altitude-m');
+  const ambientC = rangedOption(numberOption(values, 'ambient-c'), '--ambient-c', AMBIENT_C);
+  const altitudeM = rangedOption(numberOption(values, 'altitude-m'), '--altitude-m', ALTITUDE_M);
   const presets = typeof values['presets-c'] === 'string' ? parsePresets(values['presets-c']) : undefined;
   const fillMl = numberOption(values, 'fill-ml');
   const [pot, coffee, stove] = await allEntries([
@@ -58,6 +59,20 @@ export async function run(argv: string[]): Promise<number> {
   }
   process.stdout.write(values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan));
   return plan.refused ? 3 : 0;
+}
+
+/** The ranges site.yaml allows for the room (site.schema.json), the flags' too. */
+const AMBIENT_C = { min: 1, max: 45, unit: '°C' } as const;
+const ALTITUDE_M = { min: -500, max: 5000, unit: 'm' } as const;
+
+function rangedOption(
+  value: number | undefined,
+  flag: string,
+  range: { readonly min: number; readonly max: number; readonly unit: string },
+): number | undefined {
+  if (value !== undefined && (value < range.min || value > range.max))
+    throw new UsageError(faultWords.flagOutOfRange(flag, value, range.min, range.max, range.unit));
+  return value;
 }
 
 function parsePresets(raw: string): number[] {
@@ -113,7 +128,7 @@ export function planJson(plan: CardPlan) {
   };
 }
 
-function planSummary(plan: CardPlan): string {
+export function planSummary(plan: CardPlan): string {
   const j = planJson(plan);
   if (plan.refused) return `REFUSED: ${plan.refused.reason}\nFix: ${plan.refused.suggestion}\n`;
   const p = j as Exclude<ReturnType<typeof planJson>, { refused: object }>;
@@ -123,7 +138,11 @@ function planSummary(plan: CardPlan): string {
     `coffee    ${p.doseG} g, level basket, do not tamp`,
     `heat      ${p.level}`,
     `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
-    `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %)`,
+    `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (${
+      Number.isFinite(p.coldStart.meanC)
+        ? `cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %`
+        : faultWords.coldStartNoCoffee
+    })`,
     `pressure  peak ${p.peakGaugeBar} bar gauge`,
     ...p.warnings.map((w) => `warning   ${w}`),
   ].join('\n') + '\n';

@@ -66,6 +66,10 @@ export const faultWords = {
     `port ${port} is in use by another program; stop it or choose another with --port`,
   portNotAllowed: (port: number): string =>
     `port ${port} needs special rights on this system; choose one above 1023 with --port`,
+  flagOutOfRange: (flag: string, value: number, min: number, max: number, unit: string): string =>
+    `${flag} ${value} is outside ${min}–${max} ${unit}, the range the model covers (as site.yaml's room); give a value inside it`,
+  /** `plan`'s summary when a cold start would deliver no coffee (its mean is not a number). */
+  coldStartNoCoffee: 'cold start: no coffee reaches the cup',
   pageCollision: (page: string, first: string, second: string): string =>
     `two cards would share the page ${shown(page)}: ${shown(first)} and ${shown(second)}; rename one of the ids`,
 } as const;
