@@ -29,7 +29,10 @@ export type ContentIssueCode =
   | 'repeated'
   | 'unknown-id'
   | 'unknown-level'
-  | 'layout';
+  | 'layout'
+  | 'more-problems'
+  | 'skipped-file'
+  | 'link-outside';
 
 export interface IssueLocation {
   /** As shown to the person: relative to the content folder, or the path as given. */
@@ -86,9 +89,18 @@ export class ContentErrors extends Error {
   }
 }
 
+/** Lines of the report: the first MAX_REPORTED issues, then how many more there are. */
+export const MAX_REPORTED = 50;
+
 function formatIssues(issues: readonly ContentIssue[]): string {
   const files = new Set(issues.map((issue) => issue.file)).size;
-  return [contentWords.errorsHeading(issues.length, files), ...issues.map(String)].join('\n');
+  const shown = issues.slice(0, MAX_REPORTED).map(String);
+  const more = issues.length - shown.length;
+  return [
+    contentWords.errorsHeading(issues.length, files),
+    ...shown,
+    ...(more > 0 ? [contentWords.moreInReport(more)] : []),
+  ].join('\n');
 }
 
 /** The report a person reads: a heading, then one line per issue. */

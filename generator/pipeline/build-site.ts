@@ -106,6 +106,8 @@ export interface BuildResult {
   readonly swap: SwapReport;
   /** Names of what killed builds had left beside <out>, removed by this one. */
   readonly sweptLeftovers: readonly string[];
+  /** Content files passed over (editor lock and backup files, dotfiles). */
+  readonly skippedFiles: readonly string[];
   /** Cached files that failed their hash check and were made again, by cache folder. */
   readonly damagedCache: Readonly<Record<string, number>>;
 }
@@ -197,6 +199,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
       stats,
       swap,
       sweptLeftovers,
+      skippedFiles: catalogue.skipped ?? [],
       damagedCache: damagedCounts(cacheDir),
     };
   } finally {

@@ -49,6 +49,11 @@ export const faultWords = {
   knownFileSystemCode: (code: string): boolean => code in FS_ADVICE,
   previousNotRemoved: (folder: string, code: string): string =>
     `note: the new site is in place, but the previous one at ${shown(folder)} could not be removed (${code}); delete it yourself when you no longer need it`,
+  skippedFiles: (files: readonly string[]): string =>
+    `note: skipped ${files.length} editor lock, backup or hidden file${files.length === 1 ? '' : 's'}: ${files
+      .slice(0, 5)
+      .map((file) => shown(file))
+      .join(', ')}${files.length > 5 ? `, and ${files.length - 5} more` : ''}`,
   sweptLeftovers: (names: readonly string[]): string =>
     `note: removed ${names.length} folder${names.length === 1 ? '' : 's'} an interrupted build had left: ${names
       .slice(0, 5)

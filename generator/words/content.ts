@@ -6,6 +6,8 @@
  * Tests assert through these same factories, so the wording can change here alone.
  */
 
+import { escapeUnsafe, SHOWN_MAX, shown as shownText } from './shown.ts';
+
 export interface Wording {
   readonly problem: string;
   readonly fix: string;
@@ -130,8 +132,13 @@ export function expected(spec: ValueSpec): string {
 /** How a wrong value reads in a message: the user's own text where it helps. */
 export function shown(value: unknown, sourceText?: string): string {
   if (value === null || value === undefined) return 'nothing';
-  if (typeof value === 'string') return JSON.stringify(value);
-  if (typeof value === 'number') return sourceText ?? String(value);
+  if (typeof value === 'string') {
+    // At most SHOWN_MAX characters, controls and bidi controls as escapes (words/shown.ts).
+    const cut = value.length > SHOWN_MAX ? value.slice(0, SHOWN_MAX) : value;
+    const rest = value.length - cut.length;
+    return `${escapeUnsafe(JSON.stringify(cut))}${rest > 0 ? `…(+${rest} characters)` : ''}`;
+  }
+  if (typeof value === 'number') return sourceText === undefined ? String(value) : shownText(sourceText);
   if (typeof value === 'boolean') return String(value);
   if (Array.isArray(value)) return value.length === 0 ? 'an empty list' : 'a list';
   return 'a mapping';
@@ -171,8 +178,43 @@ export const contentWords = {
     readonly problem: string;
     readonly fix: string;
   }): string {
-    const field = issue.field === '' ? '' : ` ${issue.field}`;
-    return `${issue.file}:${issue.line}:${issue.column}${field} — ${issue.problem}. ${issue.fix}`;
+    // Every part may carry the user's text (file names, keys, values): escaped and capped.
+    const field = issue.field === '' ? '' : ` ${shownText(issue.field)}`;
+    const file = shownText(issue.file, 200);
+    return `${file}:${issue.line}:${issue.column}${field} — ${shownText(issue.problem, 400)}. ${shownText(issue.fix, 400)}`;
+  },
+
+  /** A control or bidirectional-control character in a key or text (entry-file.ts). */
+  unsafeCharacter(codePoint: number): Wording {
+    const hex = codePoint.toString(16).toUpperCase().padStart(4, '0');
+    const bidi = (codePoint >= 0x202a && codePoint <= 0x202e) || (codePoint >= 0x2066 && codePoint <= 0x2069);
+    return {
+      problem: bidi
+        ? `the text holds U+${hex}, an invisible direction control that would reorder the printed text`
+        : `the text holds U+${hex}, an invisible control character`,
+      fix: 'Delete it (retype the text if the character cannot be seen in your editor).',
+    };
+  },
+
+  /** A content file that is a link to a place outside the content folder (catalogue.ts). */
+  linkOutside(): Wording {
+    return {
+      problem: 'this is a link to a file outside the content folder, which the build does not follow',
+      fix: 'Copy the file into the content folder, or link to a file inside it.',
+    };
+  },
+
+  /** The last issue of a file whose schema problems were cut at the cap. */
+  moreProblems(count: number): Wording {
+    return {
+      problem: `and ${count} more problem${count === 1 ? '' : 's'} of the same kind in this file, not listed`,
+      fix: 'Fix the ones listed and build again to see the rest.',
+    };
+  },
+
+  /** The report's last line when it lists only its first issues. */
+  moreInReport(count: number): string {
+    return `… and ${count} more problem${count === 1 ? '' : 's'}, not listed: fix the ones above and build again to see them`;
   },
 
   errorsHeading(issueCount: number, fileCount: number): string {
