@@ -67,6 +67,18 @@ async function readValidFile<T>(
 ): Promise<Checked<ValidFile<T>>> {
   const read = await readContentText(path, file);
   if (!read.ok) return { issues: [read.issue] };
+  return validText<T>(schema, read.text, read.hash, idOfFile(path), file);
+}
+
+/** Text already read (named `file`, its entry `id`) checked against the `schema` schema. */
+export function validText<T>(
+  schema: SchemaName,
+  text: string,
+  hash: string,
+  id: string,
+  file: string,
+): Checked<ValidFile<T>> {
+  const read = { text, hash };
   const parsed = parseYamlSource(read.text, file);
   if (parsed.value === undefined && parsed.issues.length > 0) return { issues: parsed.issues };
   if (parsed.value === null || parsed.value === undefined) {
@@ -80,7 +92,7 @@ async function readValidFile<T>(
   if (issues.length > 0) return { issues };
   const data = parsed.value as T;
   return {
-    value: { id: idOfFile(path), hash: read.hash, source: parsed.source, data },
+    value: { id, hash: read.hash, source: parsed.source, data },
     issues: [],
   };
 }
