@@ -196,6 +196,22 @@ export const contentWords = {
     };
   },
 
+  /** base_url that would not give each card its own working address (site.ts). */
+  badBaseUrl(problem: string, maxLength: number): Wording {
+    const problems: Record<string, string> = {
+      'not-a-url': 'base_url is not a web address',
+      scheme: 'base_url must start with https:// or http://',
+      query: 'base_url holds a `?query`: every card’s address would end in it, and every QR code would open the same page',
+      fragment: 'base_url holds a `#fragment`: every card’s address would end in it, and every QR code would open the same page',
+      credentials: 'base_url holds a user name or password, which would be printed on every card',
+      'too-long': `base_url is longer than ${maxLength} characters, too long for a QR code a phone can read at the printed size`,
+    };
+    return {
+      problem: problems[problem] ?? 'base_url is not usable',
+      fix: 'Give the address the site is published at, e.g. `https://cards.roaster.example/` (a folder after the host is fine).',
+    };
+  },
+
   /** A content file that is a link to a place outside the content folder (catalogue.ts). */
   linkOutside(): Wording {
     return {
