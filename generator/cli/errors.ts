@@ -4,6 +4,7 @@ import { BrewSetupError } from '../brew/errors.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
 import { PageCollisionError } from '../pipeline/cards.ts';
 import { OutFolderError } from '../pipeline/swap.ts';
+import { MIN_MODULE_MM, QR_PRINTED_MM, QrTooDenseError } from '../render/qr-density.ts';
 import { faultWords } from '../words/build-faults.ts';
 import { shown } from '../words/shown.ts';
 import { outFolderMessage } from './out-folder.ts';
@@ -41,6 +42,13 @@ export function reportError(error: unknown): number {
   if (error instanceof PageCollisionError) {
     process.stderr.write(
       `stovecard: ${faultWords.pageCollision(error.page, error.first, error.second)}\n`,
+    );
+    return 2;
+  }
+  if (error instanceof QrTooDenseError) {
+    const d = error.density;
+    process.stderr.write(
+      `stovecard: ${faultWords.qrTooDense(error.url, d.modules, d.moduleMm, QR_PRINTED_MM, MIN_MODULE_MM)}\n`,
     );
     return 2;
   }

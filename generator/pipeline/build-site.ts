@@ -19,6 +19,8 @@ import path from 'node:path';
 import { loadCatalogue } from '../content/index.ts';
 import type { Catalogue } from '../content/types.ts';
 import type { SiteData } from '../render/site-view.ts';
+import { insertPaths, stationPaths } from '../render/paths.ts';
+import { checkQrDensity } from '../render/qr-density.ts';
 import { buildDate } from './build-date.ts';
 import { expandCards, type CardJobs } from './cards.ts';
 import { writePages } from './pages.ts';
@@ -134,7 +136,14 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
     onProgress({ phase: 'load', done: 0, total: 0 });
     const { catalogue, jobs } = await timedPhase(stats, 'load', async () => {
       const catalogue = await loadCatalogue(options.contentDir);
-      return { catalogue, jobs: expandCards(catalogue) };
+      const jobs = expandCards(catalogue);
+      const baseUrl = catalogue.site.baseUrl;
+      if (baseUrl)
+        checkQrDensity([
+          ...jobs.stations.map((job) => stationPaths(job.request, baseUrl).webUrl!),
+          ...jobs.inserts.map((job) => insertPaths(job.slug, baseUrl).webUrl!),
+        ]);
+      return { catalogue, jobs };
     });
     const plans = await timedPhase(stats, 'plan', () =>
       planAll(catalogue, jobs, new PlanCache(cacheDir), onProgress, { pool, stats }),

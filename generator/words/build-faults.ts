@@ -75,6 +75,8 @@ export const faultWords = {
     `${flag} ${value} is outside ${min}–${max} ${unit}, the range the model covers (as site.yaml's room); give a value inside it`,
   /** `plan`'s summary when a cold start would deliver no coffee (its mean is not a number). */
   coldStartNoCoffee: 'cold start: no coffee reaches the cup',
+  qrTooDense: (url: string, modules: number, moduleMm: number, printedMm: number, minMm: number): string =>
+    `site.yaml base_url: the QR code of ${shown(url)} needs ${modules} modules across ${printedMm.toFixed(1)} mm (${moduleMm.toFixed(2)} mm each, under the ${minMm} mm a phone reads); shorten base_url or the ids in the address`,
   pageCollision: (page: string, first: string, second: string): string =>
     `two cards would share the page ${shown(page)}: ${shown(first)} and ${shown(second)}; rename one of the ids`,
 } as const;

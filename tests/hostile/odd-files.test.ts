@@ -3,7 +3,7 @@
  * skipped with a note, `.YAML` and CR-only files are read, links out of the content folder
  * are not followed, values are shown cut and escaped, and a huge error report is capped.
  */
-import { mkdtemp, readFile, rename, rm, symlink, writeFile } from 'node:fs/promises';
+import { cp, mkdtemp, readFile, rename, rm, symlink, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -160,4 +160,29 @@ describe('base_url', () => {
       expect(run.stderr).toContain(contentWords.badBaseUrl(problem, 100).problem);
     }, 60_000);
   }
+});
+
+describe('QR codes too dense for their printed size', () => {
+  it('a 99-character base_url and a 43-character pot id: refused before planning, naming the module size', async () => {
+    const base = `https://cards.example/${'a'.repeat(99 - 'https://cards.example/'.length - 1)}/`;
+    expect(base).toHaveLength(99);
+    const pot = 'three-cup-aluminium-pot-for-the-bar-counter';
+    const dir = await content(async (d) => {
+      const site = path.join(d, 'site.yaml');
+      const text = await readFile(site, 'utf8');
+      await writeFile(
+        site,
+        text
+          .replace('base_url: https://cards.brindlemoss.example/', `base_url: '${base}'`)
+          .replace('pot: three-cup,', `pot: ${pot},`),
+      );
+      await cp(path.join(d, 'pots', 'three-cup.yaml'), path.join(d, 'pots', `${pot}.yaml`));
+    });
+    const run = await build(dir);
+    expectCleanFailure(run, 'dense QR');
+    // A 178-byte address: over 8-M's 152 bytes (ISO/IEC 18004 Table 7), so version 9 and
+    // 53 modules; over 0.25 mm a module allows at most 50 across 12.6 mm.
+    expect(run.stderr).toMatch(/needs 53 modules across 12\.6 mm \(0\.24 mm each/);
+    expect(run.stderr).toContain('shorten base_url');
+  }, 60_000);
 });
