@@ -6,8 +6,16 @@ import { fileURLToPath } from 'node:url';
 const projectRoot = path.dirname(fileURLToPath(import.meta.url));
 
 export default async function (eleventyConfig) {
-  await import('tsx/esm');
-  const { filters, passthroughCopies } = await import('./generator/render/eleventy-setup.ts');
+  // bin/stovecard.js runs the compiled generator (dist/) and says so; from the sources
+  // (tsx, vitest) the TypeScript is loaded through tsx.
+  let setup;
+  if (process.env.STOVECARD_COMPILED === '1') {
+    setup = await import('./dist/generator/render/eleventy-setup.js');
+  } else {
+    await import('tsx/esm');
+    setup = await import('./generator/render/eleventy-setup.ts');
+  }
+  const { filters, passthroughCopies } = setup;
   for (const [name, filter] of Object.entries(filters)) eleventyConfig.addFilter(name, filter);
   eleventyConfig.addPassthroughCopy(passthroughCopies());
   // Every value from YAML is escaped; only our own SVG strings are marked | safe.

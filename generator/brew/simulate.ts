@@ -1,5 +1,7 @@
 /**
- * The sealed-boiler brew simulation (../shared/design/brew-model.md).
+ * The sealed-boiler brew simulation: a lumped model built from published laws (ideal-gas
+ * law, IF97 saturation pressure, Darcy's law, Hagen–Poiseuille, an energy balance);
+ * DEVELOPERS.md, "The brew model", lists its modelling choices.
  *
  * State (SI), integrated by Dormand–Prince 5(4) with dense output and event location:
  *   y[T]      water (and base metal) temperature, K

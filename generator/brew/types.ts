@@ -1,7 +1,7 @@
 /**
  * The brew simulation's inputs and outputs. Everything here is SI (K, Pa, m, m³, kg, s, W);
  * trade units (°C, mL, g, bar, mm) appear only in generator/content and generator/render.
- * See ../shared/design/brew-model.md for the model these quantities feed.
+ * The model these quantities feed is generator/brew/simulate.ts (DEVELOPERS.md, "The brew model").
  */
 
 export type BaseMaterial = 'aluminium' | 'stainless-steel';

@@ -73,6 +73,7 @@ export async function run(argv: string[]): Promise<number> {
     out: { type: 'string' },
     serve: { type: 'boolean' },
     port: { type: 'string' },
+    host: { type: 'string' },
   });
   if (help) {
     process.stdout.write(buildWords.help);
@@ -111,6 +112,7 @@ export async function run(argv: string[]): Promise<number> {
       contentDir,
       outDir,
       port,
+      ...(typeof values.host === 'string' && values.host !== '' ? { host: values.host } : {}),
       extraSteps: [sitePdfStep],
       describe: summaryLine,
       log: (line) => process.stderr.write(`${line}\n`),

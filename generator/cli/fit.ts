@@ -12,6 +12,7 @@ import { randomBytes } from 'node:crypto';
 import { readdir, readFile, rename, stat, unlink, writeFile } from 'node:fs/promises';
 import { basename, dirname, extname, join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
+import { nearestOption } from './options.ts';
 import { BrewNotSimulatedError } from '../calibration/errors.ts';
 import { fitLog, type FitInput } from '../calibration/fit.ts';
 import type { Observation } from '../calibration/observations.ts';
@@ -133,7 +134,9 @@ function argumentProblem(error: unknown): string {
   const code = (error as NodeJS.ErrnoException).code;
   const message = error instanceof Error ? error.message : String(error);
   const option = /'(-[^' ]*)/.exec(message)?.[1] ?? '';
-  if (code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION') return fitWords.unknownOption(option);
+  if (code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION') {
+    return fitWords.unknownOption(option, nearestOption(option, ['content', 'write', 'json', 'help']));
+  }
   if (code === 'ERR_PARSE_ARGS_INVALID_OPTION_VALUE') {
     return option === '--content'
       ? fitWords.optionNeedsValue(option)

@@ -3,8 +3,17 @@
  * `run(argv): Promise<number>` (the exit code). Bad input is a one-line error and exit 2,
  * never a stack trace.
  */
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { cliWords } from '../words/cli.ts';
 import { UsageError, reportError } from './errors.ts';
+import { nearest } from '../content/nearest.ts';
+import { PROJECT_ROOT } from '../project-root.ts';
+
+function packageVersion(): string {
+  const text = readFileSync(path.join(PROJECT_ROOT, 'package.json'), 'utf8');
+  return (JSON.parse(text) as { version: string }).version;
+}
 
 const commands: Record<string, () => Promise<{ run: (argv: string[]) => Promise<number> }>> = {
   simulate: () => import('./simulate.ts'),
@@ -14,14 +23,21 @@ const commands: Record<string, () => Promise<{ run: (argv: string[]) => Promise<
 };
 
 export async function main(argv: string[]): Promise<number> {
-  const [name, ...rest] = argv;
+  let [name, ...rest] = argv;
+  if (name === '--version' || name === '-V' || name === 'version') {
+    process.stdout.write(cliWords.version(packageVersion()));
+    return 0;
+  }
+  // `stovecard help build` is `stovecard build --help`.
+  if (name === 'help' && rest[0] !== undefined) [name, rest] = [rest[0], ['--help']];
   if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
     process.stdout.write(cliWords.mainHelp(Object.keys(commands)));
     return name === undefined ? 2 : 0;
   }
   const load = commands[name];
   if (!load) {
-    process.stderr.write(cliWords.unknownCommand(name, Object.keys(commands)) + '\n');
+    const names = Object.keys(commands);
+    process.stderr.write(cliWords.unknownCommand(name, names, nearest(name, names)) + '\n');
     return 2;
   }
   try {

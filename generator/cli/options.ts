@@ -2,6 +2,7 @@
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { UsageError } from './errors.ts';
 import { cliWords } from '../words/cli.ts';
+import { nearest } from '../content/nearest.ts';
 
 export type Options = Record<string, string | boolean | undefined>;
 
@@ -18,8 +19,22 @@ export function parseOptions(
     });
     return { values: values as Options, help: values.help === true };
   } catch (error) {
-    throw new UsageError(error instanceof Error ? error.message : String(error));
+    const message = error instanceof Error ? error.message : String(error);
+    if ((error as NodeJS.ErrnoException).code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION') {
+      const option = /'(-[^' ]*)/.exec(message)?.[1] ?? '';
+      const names = [...Object.keys(options), 'help'];
+      throw new UsageError(
+        cliWords.unknownOption(option, names.map((n) => `--${n}`), nearestOption(option, names)),
+      );
+    }
+    throw new UsageError(message);
   }
+}
+
+/** `--levl` → `--level`: the option nearest to a mistyped one (content/nearest.ts), if close. */
+export function nearestOption(typed: string, names: readonly string[]): string | undefined {
+  const found = nearest(typed.replace(/^-+/, '').split('=')[0]!, names);
+  return found === undefined ? undefined : `--${found}`;
 }
 
 export function numberOption(values: Options, name: string): number | undefined {

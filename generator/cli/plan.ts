@@ -6,6 +6,7 @@ import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
 import { cliWords } from '../words/cli.ts';
 import { faultWords } from '../words/build-faults.ts';
+import { pressure, pressureRough } from '../render/format.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
 import { allEntries } from './load-entries.ts';
@@ -57,7 +58,9 @@ export async function run(argv: string[]): Promise<number> {
     const limit = maxSafeFill(pot.model, room.ambientK, roomModel(room).ambientPa);
     throw new InputError(cliWords.fillAboveValve(fillMl, Math.floor(toMl(limit.maxFillM3))));
   }
-  process.stdout.write(values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan));
+  process.stdout.write(
+    values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan, pot.valveOpeningAssumed),
+  );
   return plan.refused ? 3 : 0;
 }
 
@@ -128,9 +131,11 @@ export function planJson(plan: CardPlan) {
   };
 }
 
-export function planSummary(plan: CardPlan): string {
+export function planSummary(plan: CardPlan, valveAssumed: boolean): string {
   const j = planJson(plan);
-  if (plan.refused) return `REFUSED: ${plan.refused.reason}\nFix: ${plan.refused.suggestion}\n`;
+  const cautions = cliWords.planCautions().join('\n') + '\n';
+  if (plan.refused)
+    return `REFUSED: ${plan.refused.reason}\nFix: ${plan.refused.suggestion}\n${cautions}`;
   const p = j as Exclude<ReturnType<typeof planJson>, { refused: object }>;
   if (!('fillMl' in p)) return '';
   return [
@@ -144,6 +149,12 @@ export function planSummary(plan: CardPlan): string {
         : faultWords.coldStartNoCoffee
     })`,
     `pressure  peak ${p.peakGaugeBar} bar gauge`,
+    `valve     ${cliWords.planValve(valveText(plan.valveOpeningGaugePa, valveAssumed), valveAssumed)}`,
     ...p.warnings.map((w) => `warning   ${w}`),
-  ].join('\n') + '\n';
+  ].join('\n') + '\n' + cautions;
+}
+
+/** An assumed valve pressure is shown to two significant figures (nobody measured it). */
+function valveText(pa: number, assumed: boolean): string {
+  return (assumed ? pressureRough(pa, 'metric') : pressure(pa, 'metric')).text;
 }

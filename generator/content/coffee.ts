@@ -10,7 +10,7 @@ import type { CoffeeEntry, GrindClass } from './types.ts';
 import { celsiusToK, gramsPerGramToKgPerKg, gramsPerMlToKgPerM3 } from './units.ts';
 import { issueAt, refAt, type YamlSource } from './yaml-source.ts';
 
-/** Extraction band when the file gives none, °C: the SCA Golden Cup range as the design notes give it (93 ± 3 °C). */
+/** Extraction band when the file gives none, °C: SCA Golden Cup Standard (revised 2015), 93.0 °C ± 3 °C (200 °F ± 5 °F) at the point of contact. */
 export const DEFAULT_TARGET_C: readonly [number, number] = [90, 96];
 
 /** The coffee file as written, once it matches schemas/coffee.schema.json. */

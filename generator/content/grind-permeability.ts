@@ -7,8 +7,8 @@
  * - fine: 1e-13 m², the top of the 1e-14–1e-13 m² range measured for espresso-fine packed
  *   beds by Corrochano, Melrose, Bentley, Fryer & Bakalis, J. Food Eng. 150 (2015)
  *   106–116. A looser, untamped stovetop bed sits at the top of that range.
- * - medium: 1e-12 m², the order of magnitude given for a coarser stovetop bed in
- *   physics-of-coffee lecture notes (an order of magnitude, not a measurement).
+ * - medium: 1e-12 m², from memory: the order of magnitude usually quoted for a looser,
+ *   coarser stovetop bed (no published measurement found; an order of magnitude only).
  * - medium-fine 5e-13, medium-coarse 2e-12, coarse 4e-12 m²: interpolated by us between
  *   and beyond those two values (roughly ×2 per class); no published source.
  */

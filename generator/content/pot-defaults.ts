@@ -22,7 +22,7 @@ export function defaultHeatLossWPerK(sealedVolumeM3: number, diameterM: number):
 
 /**
  * Gauge opening pressure of the safety valve when the entry gives none, bar. No published
- * source states it (check-values.md, "Not found in any source"): it is an assumption, and
+ * source we know of states it (makers do not publish it): it is an assumption, and
  * every card that relies on it says so (PotEntry.valveOpeningAssumed).
  */
 export const ASSUMED_VALVE_OPENING_BAR = 1.5;

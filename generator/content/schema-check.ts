@@ -5,8 +5,10 @@
  * ../words/content.ts.
  */
 import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
 import { contentWords, type ValueSpec, type Wording } from '../words/content.ts';
+import { PROJECT_ROOT } from '../project-root.ts';
 import { ID_PATTERN, idLike } from './ids.ts';
 import { ContentIssue, type ContentIssueCode, wholeFile } from './issues.ts';
 import { nearest } from './nearest.ts';
@@ -37,7 +39,8 @@ const compiled = new Map<SchemaName, ValidateFunction>();
 function validator(name: SchemaName): ValidateFunction {
   let validate = compiled.get(name);
   if (!validate) {
-    const url = new URL(`./schemas/${name}.schema.json`, import.meta.url);
+    // The sources' folder, also when running compiled from dist/ (tsc copies no JSON).
+    const url = path.join(PROJECT_ROOT, 'generator', 'content', 'schemas', `${name}.schema.json`);
     validate = ajv.compile(JSON.parse(readFileSync(url, 'utf8')) as object);
     compiled.set(name, validate);
   }

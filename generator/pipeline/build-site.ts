@@ -72,7 +72,7 @@ export type BuildStep = (context: BuildContext) => Promise<void>;
 export interface BuildOptions {
   readonly contentDir: string;
   readonly outDir: string;
-  /** Default `.stovecard-cache` in the working folder. */
+  /** Default `.stovecard-cache` beside the content folder (defaultCacheDir). */
   readonly cacheDir?: string;
   /** Run in order on the temporary folder after the HTML is written, before the swap. */
   readonly extraSteps?: readonly BuildStep[];
@@ -116,12 +116,20 @@ export interface BuildResult {
 
 const noProgress: ProgressListener = () => {};
 
+/**
+ * `.stovecard-cache` beside the content folder (content/ → ./.stovecard-cache), so a build
+ * started from any working folder finds the same cache, and none is left where it ran.
+ */
+export function defaultCacheDir(contentDir: string): string {
+  return path.join(path.dirname(path.resolve(contentDir)), '.stovecard-cache');
+}
+
 /** Loads, plans, renders and writes the site; <out> changes only when all of it succeeded. */
 export async function buildSite(options: BuildOptions): Promise<BuildResult> {
   const started = performance.now();
   const onProgress = options.onProgress ?? noProgress;
   const outDir = path.resolve(options.outDir);
-  const cacheDir = path.resolve(options.cacheDir ?? '.stovecard-cache');
+  const cacheDir = path.resolve(options.cacheDir ?? defaultCacheDir(options.contentDir));
   const env = options.env ?? process.env;
   const stats = emptyStats();
   const workers = options.workers ?? availableParallelism();

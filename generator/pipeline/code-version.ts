@@ -15,9 +15,9 @@
 import { createHash } from 'node:crypto';
 import { readdir, readFile } from 'node:fs/promises';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { PROJECT_ROOT } from '../project-root.ts';
 
-const projectDir = path.dirname(path.dirname(path.dirname(fileURLToPath(import.meta.url))));
+const projectDir = PROJECT_ROOT;
 
 /** Folders and files under generator/ whose source makes up the plan's code version. */
 export const PLAN_SOURCES: readonly string[] = [

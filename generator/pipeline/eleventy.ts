@@ -5,10 +5,13 @@
  */
 import Eleventy from '@11ty/eleventy';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { COMPILED, PROJECT_ROOT } from '../project-root.ts';
 import type { SiteData } from '../render/site-view.ts';
 
-export const PROJECT_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
+export { PROJECT_ROOT };
+
+// .eleventy.js loads the filters from dist/ when the generator runs compiled, else through tsx.
+if (COMPILED) process.env.STOVECARD_COMPILED = '1';
 export const TEMPLATES_DIR = path.join(PROJECT_ROOT, 'templates');
 export const ELEVENTY_CONFIG = path.join(PROJECT_ROOT, '.eleventy.js');
 

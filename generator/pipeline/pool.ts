@@ -16,6 +16,7 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
+import { COMPILED } from '../project-root.ts';
 import {
   WORKER_ROLE,
   type TaskRequest,
@@ -25,7 +26,8 @@ import {
 
 export type { TaskRequest, TaskResult } from './build-worker.ts';
 
-const WORKER_URL = new URL('./build-worker.mjs', import.meta.url);
+// Compiled (dist/), the worker is plain JavaScript; from the sources it goes through tsx.
+const WORKER_URL = new URL(COMPILED ? './build-worker.js' : './build-worker.mjs', import.meta.url);
 
 /** Profiling flags of this process passed on, so `node --cpu-prof` also profiles workers. */
 function inheritedFlags(): string[] {

@@ -3,15 +3,21 @@
  * content folder and the templates, rebuilds through the same buildSite (so the plan cache
  * makes a one-coffee edit quick) and tells open pages to reload. The reload hook is a
  * one-line EventSource script added to HTML responses as they are served; the files in
- * the site folder never contain it.
+ * the site folder never contain it. When a rebuild fails, the pages show an overlay with
+ * the error over the last good site (sent to open pages, and added to pages loaded while the
+ * error stands) until a rebuild succeeds.
+ *
+ * The watcher is chokidar 4's, as Eleventy's own (@11ty/chokidar-with-glob-support; Node's recursive fs.watch loses a file an editor saves by
+ * writing a temporary file and renaming it over the old one); the server binds 127.0.0.1
+ * unless a host is given.
  */
-import { watch, type FSWatcher } from 'node:fs';
+import { watch, type FSWatcher } from '@11ty/chokidar-with-glob-support';
 import { readFile, stat } from 'node:fs/promises';
 import http from 'node:http';
 import path from 'node:path';
 import { ContentErrors, formatContentErrors } from '../content/index.ts';
 import { buildWords } from '../words/card.ts';
-import { buildSite, type BuildResult, type BuildStep } from './build-site.ts';
+import { buildSite, defaultCacheDir, type BuildResult, type BuildStep } from './build-site.ts';
 import {
   forgetCodeVersions,
   pageCodeVersion,
@@ -25,6 +31,8 @@ export interface ServeOptions {
   readonly contentDir: string;
   readonly outDir: string;
   readonly port: number;
+  /** Address to bind, default 127.0.0.1 (this machine only). */
+  readonly host?: string;
   readonly cacheDir?: string;
   /** Each rebuild's extra steps, as the first build had them (e.g. the PDFs). */
   readonly extraSteps?: readonly BuildStep[];
@@ -41,7 +49,20 @@ export interface SiteServer {
 }
 
 const RELOAD_PATH = '/__stovecard/reload';
-const RELOAD_SCRIPT = `<script>new EventSource(${JSON.stringify(RELOAD_PATH)}).onmessage=()=>location.reload()</script>`;
+const OVERLAY_ID = '__stovecard-overlay';
+/** The page's side: reload on `data: reload`; show the overlay on an `event: failed` (data: JSON text). */
+const CLIENT_SCRIPT = `(function(){var es=new EventSource(${JSON.stringify(RELOAD_PATH)});es.onmessage=function(){location.reload()};es.addEventListener('failed',function(e){show(JSON.parse(e.data))});function show(text){var d=document.getElementById('${OVERLAY_ID}');if(!d){d=document.createElement('pre');d.id='${OVERLAY_ID}';d.setAttribute('role','alert');d.style.cssText='position:fixed;left:0;right:0;bottom:0;max-height:60vh;overflow:auto;margin:0;padding:1em 1.5em;background:#fff4f2;color:#5a0a00;border-top:4px solid #b3261e;font:14px/1.45 monospace;white-space:pre-wrap;z-index:2147483647;box-shadow:0 -4px 16px rgba(0,0,0,.25)';document.body.appendChild(d)}d.textContent=text}window.__stovecardOverlay=show;})()`;
+
+/** What is added before </body>: the live-reload hook and, while a rebuild has failed, its overlay. */
+function injected(failure: string | null): string {
+  const show = failure === null ? '' : `__stovecardOverlay(${scriptJson(failure)});`;
+  return `<script>${CLIENT_SCRIPT};${show}</script>`;
+}
+
+/** JSON safe inside a <script> element (no `</script>` or `<!--` can close it). */
+function scriptJson(value: unknown): string {
+  return JSON.stringify(value).replace(/</g, '\\u003c').replace(/\u2028/g, '\\u2028').replace(/\u2029/g, '\\u2029');
+}
 const DEBOUNCE_MS = 200;
 
 const TYPES: Record<string, string> = {
@@ -99,11 +120,14 @@ async function fileFor(root: string, clean: string): Promise<string | null> {
 export async function serveSite(options: ServeOptions): Promise<SiteServer> {
   const root = path.resolve(options.outDir);
   const clients = new Set<http.ServerResponse>();
+  /** The overlay's text while the last rebuild failed, else null. */
+  let failure: string | null = null;
   const server = http.createServer(async (req, res) => {
     if (req.url === RELOAD_PATH) {
       res.writeHead(200, { 'content-type': 'text/event-stream', 'cache-control': 'no-cache' });
       res.write(': connected\n\n');
       clients.add(res);
+      if (failure !== null) res.write(`event: failed\ndata: ${JSON.stringify(failure)}\n\n`);
       req.on('close', () => clients.delete(res));
       return;
     }
@@ -120,7 +144,7 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
       const type = TYPES[path.extname(found.file)] ?? 'application/octet-stream';
       let body: Buffer | string = found.body;
       if (type.startsWith('text/html'))
-        body = body.toString('utf8').replace('</body>', `${RELOAD_SCRIPT}</body>`);
+        body = body.toString('utf8').replace('</body>', `${injected(failure)}</body>`);
       res.writeHead(200, { 'content-type': type, 'cache-control': 'no-store' }).end(body);
     } catch {
       // Whatever one request meets, the server goes on serving the others.
@@ -130,7 +154,7 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
   });
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
-    server.listen(options.port, '127.0.0.1', () => resolve());
+    server.listen(options.port, options.host ?? '127.0.0.1', () => resolve());
   });
   const address = server.address();
   const url = `http://localhost:${typeof address === 'object' && address ? address.port : options.port}/`;
@@ -174,6 +198,7 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
               options.describe ? options.describe(result) : `${result.pages} pages`,
             ),
           );
+          failure = null;
           for (const client of clients) client.write('data: reload\n\n');
         } catch (error) {
           const message =
@@ -183,6 +208,9 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
                 ? error.message
                 : String(error);
           options.log(buildWords.rebuildFailed(message));
+          failure = `${buildWords.overlayHeading}\n\n${message}`;
+          const event = `event: failed\ndata: ${JSON.stringify(failure)}\n\n`;
+          for (const client of clients) client.write(event);
         }
       } while (again);
     })();
@@ -196,16 +224,23 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => void rebuild(), DEBOUNCE_MS);
   };
-  const watchers: FSWatcher[] = [options.contentDir, TEMPLATES_DIR].map((dir) =>
-    watch(dir, { recursive: true }, schedule),
-  );
+  // Every add, change, unlink (an atomic save is an unlink and an add of the same path, or a
+  // rename over it; chokidar reports the path either way). The site and cache folders are
+  // not under the watched ones unless a user put them there: ignore them then.
+  const ignoredRoots = [root, path.resolve(options.cacheDir ?? defaultCacheDir(options.contentDir))];
+  const watcher: FSWatcher = watch([options.contentDir, TEMPLATES_DIR], {
+    ignoreInitial: true,
+    ignored: (file: string) => ignoredRoots.some((r) => file === r || file.startsWith(r + path.sep)),
+  });
+  watcher.on('all', schedule);
+  await new Promise<void>((resolve) => watcher.once('ready', () => resolve()));
 
   return {
     url,
     rebuild,
     async close() {
       if (timer) clearTimeout(timer);
-      for (const w of watchers) w.close();
+      await watcher.close();
       for (const client of clients) client.end();
       await running?.catch(() => {});
       await pool?.workers.close();

@@ -12,6 +12,7 @@ import { createHash } from 'node:crypto';
 import type { Catalogue, CardRequest } from '../content/types.ts';
 import type { AcceptedPlan } from '../planning/types.ts';
 import {
+  cautions,
   insertCardView,
   stationCardView,
   type CardViewOptions,
@@ -249,6 +250,7 @@ export async function renderSite(
     troubleshooting: troubleshootingView(
       example ? sensitivityMoves(example.plan, catalogue) : null,
     ),
+    cautions: cautions('full'),
   };
   return { data, viewTexts };
 }

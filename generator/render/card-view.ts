@@ -30,6 +30,7 @@ import {
   length,
   lengthDown,
   pressure,
+  pressureRough,
   share,
   temperature,
   temperatureBand,
@@ -72,9 +73,14 @@ export interface PageSetup {
   readonly compact: boolean;
 }
 
+/** The usual cautions (full, or compact where space is short) and the deferral to the maker. */
 export interface Cautions {
   readonly heading: string;
+  readonly form: 'full' | 'compact';
+  /** One line per caution (cardWords.cautions.full or .compact). */
   readonly items: readonly string[];
+  /** "Follow the maker’s instructions and local rules.", printed after the list. */
+  readonly deferral: string;
 }
 
 export interface Warnings {
@@ -304,8 +310,15 @@ export function pageSetup(units: UnitSystem, paper: PaperSize): PageSetup {
   };
 }
 
-export function cautions(): Cautions {
-  return { heading: cardWords.cautions.heading, items: cardWords.cautions.items };
+/** The cautions every page carries: the compact list where space is short (A6). */
+export function cautions(form: 'full' | 'compact' = 'full'): Cautions {
+  const words = cardWords.cautions;
+  return {
+    heading: words.heading,
+    form,
+    items: form === 'full' ? words.full : words.compact,
+    deferral: words.deferral,
+  };
 }
 
 function warnings(items: readonly string[]): Warnings | null {
@@ -401,11 +414,15 @@ async function recipe(
     { label: words.expect.inBand(band), value: words.expect.inBandValue(planShare, coldShare) },
     {
       label: words.expect.peakPressure,
-      value: words.expect.peakPressureValue(
-        pressure(plan.peakGaugePa, units).text,
-        pressure(plan.valveOpeningGaugePa, units).text,
-        e.pot.valveOpeningAssumed,
-      ),
+      value: e.pot.valveOpeningAssumed
+        ? words.expect.peakPressureAssumedValue(
+            pressure(plan.peakGaugePa, units).text,
+            pressureRough(plan.valveOpeningGaugePa, units).text,
+          )
+        : words.expect.peakPressureValue(
+            pressure(plan.peakGaugePa, units).text,
+            pressure(plan.valveOpeningGaugePa, units).text,
+          ),
     },
   ];
   if (Math.abs(plan.altitudeM) >= 0.5) {
@@ -510,7 +527,7 @@ export async function stationCardView(
     recipe: plan.refused === null ? await recipe(plan, e, catalogue, units) : null,
     refusal: plan.refused === null ? null : refusal(plan),
     warnings: warnings(plan.warnings),
-    cautions: cautions(),
+    cautions: cautions(pageSetup(units, paper).compact ? 'compact' : 'full'),
     footer: await footer(catalogue, paths, options),
   };
 }
@@ -617,7 +634,7 @@ export async function insertCardView(
     page: pageSetup(units, paper),
     paths,
     warnings: insertWarnings(rows, input.rows),
-    cautions: cautions(),
+    cautions: cautions(pageSetup(units, paper).compact ? 'compact' : 'full'),
     footer: await footer(catalogue, paths, options),
   };
 }

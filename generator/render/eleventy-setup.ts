@@ -3,12 +3,10 @@
  * as they are (stylesheet, fonts and their licence). Kept here so .eleventy.js stays wiring.
  */
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { PROJECT_ROOT as projectRoot } from '../project-root.ts';
 import { FONT_FACES, FONT_LICENSE_PATH, fontFileName, fontPath } from './fonts.ts';
 import { relativeHref } from './paths.ts';
 import { FONTS_DIR } from './site-view.ts';
-
-const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 
 /** Template filters, by name. */
 export const filters = {

@@ -11,6 +11,7 @@
  *   dose           metric 0.1 g           us 0.01 oz
  *   length         metric 1 mm            us 0.01 in
  *   pressure       metric 0.01 bar        us 0.1 psi
+ *   assumed valve  2 significant figures (pressureRough: nobody measured it)
  *   altitude       metric 1 m             us 1 ft
  *   share          1 %
  *   time ranges    5 s, the low end rounded down and the high end up (never narrower
@@ -129,6 +130,16 @@ export function length(m: number, units: UnitSystem): Quantity {
 
 export function pressure(pa: number, units: UnitSystem): Quantity {
   return units === 'us' ? quantity(toPsi(pa), 1, 'psi') : quantity(toBar(pa), 2, 'bar');
+}
+
+/**
+ * A pressure nobody measured (the valve's assumed opening pressure): two significant
+ * figures, so it never reads as more precise than it is ("1.5 bar", "22 psi").
+ */
+export function pressureRough(pa: number, units: UnitSystem): Quantity {
+  const value = units === 'us' ? toPsi(pa) : toBar(pa);
+  const digits = Math.max(0, 1 - Math.floor(Math.log10(Math.abs(value) || 1)));
+  return quantity(Number(value.toPrecision(2)), digits, units === 'us' ? 'psi' : 'bar');
 }
 
 export function altitude(m: number, units: UnitSystem): Quantity {

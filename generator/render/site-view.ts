@@ -6,7 +6,7 @@
 import type { Catalogue } from '../content/types.ts';
 import type { AcceptedPlan } from '../planning/types.ts';
 import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
-import type { InsertCardView, PageSetup, StationCardView } from './card-view.ts';
+import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
 import { pageSetup } from './card-view.ts';
 import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts';
 import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './format.ts';
@@ -114,6 +114,8 @@ export interface SiteData {
   readonly insertCards: readonly InsertCardView[];
   readonly method: MethodView;
   readonly troubleshooting: TroubleshootingView;
+  /** The full cautions and the deferral, on the index, set, method and troubleshooting pages. */
+  readonly cautions: Cautions;
 }
 
 /** What the build knows about a set: its id, title, layout and card slugs in order. */

@@ -98,8 +98,11 @@ export const cardWords = {
     inBand: (band: string): string => `Brewed at ${band}`,
     inBandValue: (plan: string, cold: string): string => `${plan} of the cup (cold start: ${cold})`,
     peakPressure: 'Highest pressure in the base',
-    peakPressureValue: (peak: string, valve: string, assumed: boolean): string =>
-      `${peak}; the valve opens at ${valve}${assumed ? ' (assumed, the maker does not state it)' : ''}`,
+    peakPressureValue: (peak: string, valve: string): string =>
+      `${peak}; the valve opens at ${valve}`,
+    /** The valve's opening pressure when the pot's entry gives none: `valve` is "about 1.5 bar". */
+    peakPressureAssumedValue: (peak: string, valve: string): string =>
+      `${peak}; the valve opens at about ${valve} (assumed: no value was given; ask the maker)`,
     boiling: 'Water boils here at',
     boilingValue: (boiling: string, altitude: string): string =>
       `${boiling} (altitude ${altitude})`,
@@ -127,17 +130,39 @@ export const cardWords = {
     change: 'What to change',
     note: 'This pot, coffee and stove were not given a recipe because it would not be safe or would not brew well.',
   },
+  /**
+   * The usual cautions of a stovetop pressure pot, in our own words. `full` and `compact`
+   * are parallel lists (the same caution at the same index); `compact` is for pages where
+   * space is short (A6 cards, the running foot of the binder's text pages). Every page a
+   * customer, barista or trainee reads carries one of them and the deferral.
+   */
   cautions: {
     heading: 'Safety',
-    items: [
-      'Scalding water and hot metal: hold the handle only and use a cloth on the base.',
+    full: [
+      'Scalding water, steam and hot metal: hold the handle only; use a cloth on the base.',
+      'Before closing, check that the gasket and filter plate are whole and in place; wipe the basket rim clean.',
       'Never fill above the valve.',
       'Never tamp the coffee.',
       'Never heat the pot empty.',
-      'Do not open the pot while it is hot.',
-      'Keep the safety valve clean and free to move.',
-      'Follow the maker’s instructions and local rules.',
+      'Keep the flame no wider than the base and the handle away from it.',
+      'Never leave the pot unattended on the heat; keep children away.',
+      'When it sputters, keep your face and hands away from the spout and the lid.',
+      'Never block the safety valve or point it at anyone; keep it clean and free to move. Do not use a pot whose valve or gasket is damaged.',
+      'Before opening, let the base cool, or cool it under the cold tap holding only the handle.',
     ] as readonly string[],
+    compact: [
+      'Hot water, steam and metal: hold the handle only.',
+      'Check gasket and filter plate; wipe the basket rim.',
+      'Never fill above the valve.',
+      'Never tamp.',
+      'Never heat it empty.',
+      'Flame no wider than the base, handle clear of it.',
+      'Never leave it on the heat alone; keep children away.',
+      'Face and hands away from spout and lid.',
+      'Never block the valve or aim it at anyone; never use a damaged valve or gasket.',
+      'Cool the base (under the tap, by the handle) before opening.',
+    ] as readonly string[],
+    deferral: 'Follow the maker’s instructions and local rules.',
   },
   footer: {
     printedBy: (business: string, contact: string): string => `From ${business} · ${contact}`,
@@ -322,18 +347,21 @@ export const troubleshootingWords = {
 /** Words of `stovecard build`: help, progress and the summary (kept with the site's words). */
 export const buildWords = {
   help: [
-    'Usage: stovecard build [--content DIR] [--out DIR] [--serve] [--port N]',
+    'Usage: stovecard build [--content DIR] [--out DIR] [--serve] [--port N] [--host ADDR]',
     '',
     'Builds the site of brew cards: plans every pot × coffee × stove the sets name (cached',
-    'in .stovecard-cache/, so only changed entries are planned again), renders the station',
-    'cards, the bag inserts, the index, set, method and troubleshooting pages, and swaps',
-    'the new site into place only when everything succeeded.',
+    'in .stovecard-cache/ beside the content folder, so only changed entries are planned',
+    'again), renders the station cards, the bag inserts, the index, set, method and',
+    'troubleshooting pages, and swaps the new site into place only when everything',
+    'succeeded.',
     '',
     '  --content DIR   the content folder (default: content)',
     '  --out DIR       the site folder to write (default: site)',
     '  --serve         build, then serve the site with live reload and rebuild when',
     '                  the content or the templates change',
     '  --port N        port of the server (default 8080)',
+    '  --host ADDR     address the server listens on (default 127.0.0.1, this machine',
+    '                  only; 0.0.0.0 lets other machines of the network in)',
     '',
     'SOURCE_DATE_EPOCH, when set, is the date printed on the cards (reproducible builds).',
     '',
@@ -374,6 +402,8 @@ export const buildWords = {
   serving: (url: string, contentDir: string): string =>
     `serving ${url} (Ctrl-C to stop); rebuilding when ${contentDir} or the templates change`,
   rebuilt: (summary: string): string => `rebuilt: ${summary}`,
+  /** Heading of the browser's overlay when a rebuild failed (the page under it is the last good one). */
+  overlayHeading: 'The last rebuild failed; this page is the last good build. Fix the problem below and save:',
   rebuildFailed: (message: string): string =>
     `rebuild failed, still serving the last good site:\n${message}`,
   badPort: (raw: string): string => `--port expects a whole number from 1 to 65535, got "${raw}"`,

@@ -1,17 +1,36 @@
 /** User-facing words of the command line: help texts, summaries, errors. */
+import { cardWords } from './card.ts';
+
 export const cliWords = {
+  /** The valve line of `stovecard plan`: "opens at 1.50 bar", or the assumed value and why. */
+  planValve: (valve: string, assumed: boolean): string =>
+    assumed
+      ? `taken to open at about ${valve}, assumed because no opening pressure was given (ask the maker for it)`
+      : `opens at ${valve}`,
+  /** The cautions and the deferral `stovecard plan` prints after every recipe or refusal. */
+  planCautions: (): string[] => [
+    `${cardWords.cautions.heading}:`,
+    ...cardWords.cautions.full.map((line) => `  - ${line}`),
+    `  ${cardWords.cautions.deferral}`,
+  ],
   mainHelp: (commands: string[]): string =>
     [
       'stovecard — printable stovetop brew cards computed by a physics simulation',
       '',
-      'Usage: stovecard <command> [options]   (stovecard <command> --help for each)',
+      'Usage: stovecard <command> [options]   (stovecard help <command>, or <command> --help)',
+      '       stovecard --version',
       '',
       'Commands:',
       ...commands.map((c) => `  ${c.padEnd(10)} ${commandSummaries[c] ?? ''}`),
       '',
     ].join('\n'),
-  unknownCommand: (name: string, commands: string[]): string =>
-    `stovecard: unknown command "${name}"; the commands are ${commands.join(', ')} (stovecard --help)`,
+  unknownCommand: (name: string, commands: string[], suggestion?: string): string =>
+    `stovecard: unknown command "${name}"${suggestion ? `; did you mean "${suggestion}"?` : ''} ` +
+    `The commands are ${commands.join(', ')} (stovecard --help)`,
+  unknownOption: (option: string, options: string[], suggestion?: string): string =>
+    `unknown option ${option}${suggestion ? `; did you mean ${suggestion}?` : ''} ` +
+    `The options are ${options.join(', ')} (add --help for what each does)`,
+  version: (version: string): string => `stovecard ${version}\n`,
   simulateHelp: [
     'Usage: stovecard simulate --pot FILE --coffee FILE (--stove FILE --level LABEL | --power-w W)',
     '                          [--fill-ml V] [--start-c T] [--ambient-c T] [--altitude-m H]',

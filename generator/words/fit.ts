@@ -114,8 +114,9 @@ export const fitWords = {
     'fit needs a brew log: stovecard fit LOGFILE [--content DIR] [--write] [--json] (see stovecard fit --help)',
   tooManyLogs: (given: readonly string[]): string =>
     `fit takes one brew log, got ${given.length}: ${given.join(' ')}; run it once per log`,
-  unknownOption: (option: string): string =>
-    `fit has no option ${option}; its options are --content DIR, --write, --json (see stovecard fit --help)`,
+  unknownOption: (option: string, suggestion?: string): string =>
+    `fit has no option ${option}${suggestion ? `; did you mean ${suggestion}?` : ''} ` +
+    `Its options are --content DIR, --write, --json (see stovecard fit --help)`,
   optionNeedsValue: (option: string): string =>
     `${option} needs a folder after it, e.g. ${option} content`,
   optionTakesNoValue: (option: string): string => `${option} takes no value; write it alone`,

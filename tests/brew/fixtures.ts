@@ -1,7 +1,8 @@
 /**
- * Test setups for the brew model. These are the seed document's reference situation
- * (about 100 mL of air over about 150 mL of water, a permeable stovetop grind, moderate
- * heat), not demo content: their numbers are chosen to match that description.
+ * Test setups for the brew model: a reference situation of our own (about 100 mL of air
+ * over about 150 mL of water in a three-cup-sized base, a permeable stovetop grind,
+ * moderate heat), not demo content. Its proportions are common practice, no source: a
+ * three-cup pot filled to just under its valve.
  */
 import type { BedModel, BrewSetup, PotModel } from '../../generator/brew/types.ts';
 
@@ -24,7 +25,7 @@ export const referencePot: PotModel = {
   heatLossWPerK: 0.12,
 };
 
-/** "A permeable stovetop grind": k around 1e-12 m² (check-values.md, order of magnitude). */
+/** "A permeable stovetop grind": k around 1e-12 m² (from memory, an order of magnitude). */
 export const permeableBed: BedModel = {
   permeabilityM2: 1e-12,
   bulkDensityKgM3: 380,
@@ -36,7 +37,8 @@ export const seaLevelRoom = { ambientK: 20 + C, ambientPa: 101325 };
 
 /**
  * 150 mL of cold water (100 mL of air above it), 250 W reaching the pot ("moderate heat":
- * a medium ring of about 700 W at a gas burner's 0.32–0.40 efficiency, check-values.md).
+ * a medium ring of about 700 W at a gas burner's 0.32–0.40 efficiency, ENERGY STAR
+ * Emerging Technology Award, residential induction cooktops, 2021–2022).
  */
 export function referenceSetup(overrides: Partial<BrewSetup> = {}): BrewSetup {
   return {

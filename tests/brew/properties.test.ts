@@ -1,7 +1,7 @@
 /**
  * Property-based checks of the brew model (fast-check): random valid pots, beds, heats and
  * starts always finish, never give NaN or Infinity, and keep the model's invariants
- * (brew-model.md, "Checks that hold whatever the inputs").
+ * (closed form: conservation of mass and energy, event order).
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
@@ -99,6 +99,7 @@ function allFinite(r: BrewResult): boolean {
 }
 
 describe('simulateBrew over random valid setups (fast-check, seeded)', () => {
+  // closed form: conservation of mass and energy, event order, yield bound
   it('always finishes with finite numbers and keeps mass, energy, order and yield bounds', () => {
     fc.assert(
       fc.property(setupArb, (setup) => {

@@ -30,7 +30,7 @@ describe('facts of the trade (common practice, no source)', () => {
   });
 
   it('with cold water about half of the cup is delivered below 70 °C, mean near 69 °C (±5 °C)', () => {
-    // Common practice, no source (seed document's reference situation). "About half" is
+    // Common practice, no source (the reference situation of fixtures.ts). "About half" is
     // read as a third to two thirds: the model gives about 0.34–0.40 here, because the
     // grounds hold back the first (coolest) ~17 mL during the wet-up.
     const below70 = shareBelow(cold.cupCurve, 70 + C);
@@ -71,7 +71,7 @@ describe('directions that must hold', () => {
   });
 
   it('taking the heat away leaves a slow tail in which the last millilitres take longest', () => {
-    // Seed document: "the last millilitres take minutes". In this lumped model the tail is
+    // Common practice, no source: "the last millilitres take minutes". In this lumped model the tail is
     // a decay with time constant R·V_gas/p_air: for the permeable reference bed it lasts
     // about 20 s and its last tenth takes several times longer than its first tenth; for a
     // finer bed (3e-13 m²) it lasts over a minute. Both are checked.
@@ -97,7 +97,7 @@ describe('directions that must hold', () => {
   });
 });
 
-describe('invariants (brew-model.md, "Checks that hold whatever the inputs")', () => {
+describe('invariants (closed form: conservation of mass and energy, event order)', () => {
   const runs: [string, BrewResult][] = [
     ['cold', cold],
     ['preheated', preheated],
@@ -138,7 +138,7 @@ describe('invariants (brew-model.md, "Checks that hold whatever the inputs")', (
   });
 });
 
-describe('quasi-static limit (brew-model.md): very permeable bed, very gentle heat', () => {
+describe('quasi-static limit (closed form: ideal-gas law with IF97 p_sat): very permeable bed, very gentle heat', () => {
   /**
    * Closed form: the gas volume gained when the water reaches T_f is
    *   V_air0·[(T_f/T_0)·(p_amb − p_sat(T_0)) / (p_amb + ρ·g·h − p_sat(T_f)) − 1].

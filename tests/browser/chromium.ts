@@ -22,7 +22,7 @@ export const CHROMIUM_CANDIDATES: readonly string[] = process.env.STOVECARD_CHRO
 
 export const CHROMIUM: string | undefined = CHROMIUM_CANDIDATES.find((p) => existsSync(p));
 
-/** As the brief for the print checks asks: headless, no sandbox (containers), nothing phoning home. */
+/** Headless, no sandbox (containers), nothing phoning home: the print checks run offline. */
 export const CHROMIUM_ARGS: readonly string[] = [
   '--headless',
   '--no-sandbox',

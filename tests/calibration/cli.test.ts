@@ -65,6 +65,7 @@ describe('stovecard fit content/logs/first-morning.yaml', () => {
     }
   });
 
+  // own rule: the fit recovers the synthetic truth it was given, not an outside value
   it('recovers the true values the demo log was made from (permeability 10 %, heat 5 %)', async () => {
     const { code, stdout } = await fit(DEMO_LOG, '--json');
     expect(code).toBe(0);

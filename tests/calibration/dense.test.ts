@@ -29,6 +29,7 @@ describe('inverseSpd', () => {
     ).toBeNull();
   });
 
+  // closed form: A·A⁻¹ = I
   it('A·A⁻¹ = I for a 4 × 4 normal matrix', () => {
     const a = normalMatrix([
       [1, 2, 0, 1, 3],

@@ -38,6 +38,7 @@ function estimate(report: FitReport, id: string): Estimate {
 }
 
 describe('fitLog(exact synthetic readings)', () => {
+  // own rule: the fit recovers the synthetic truth it was given, not an outside value
   it('recovers every value to 0.1 % when the readings are the model itself', async () => {
     const input = await syntheticInput(dir, 'exact', WELL_OBSERVED, { exact: true });
     const report = fitLog(input);
@@ -64,6 +65,7 @@ describe('fitLog(seeded stopwatch, scale and probe noise)', () => {
   // rounded to 1 s, 1 g, 0.1 °C, 1 mL. With this log the fit's own 1-σ is about 5 % on the
   // permeability and 0.4 % on the heat, so 10 % and 5 % are 2σ and > 10σ.
   for (const seed of [1, 2, 3, 4]) {
+    // own rule: the fit recovers the synthetic truth it was given, not an outside value
     it(`recovers permeability within 10 % and heat within 5 % (seed ${seed})`, async () => {
       const input = await syntheticInput(dir, `seed-${seed}`, WELL_OBSERVED, {
         noise: { random: mulberry32(seed) },
@@ -99,6 +101,7 @@ describe('fitLog(a first-coffee time alone)', () => {
 });
 
 describe('fitLog: U·A', () => {
+  // own rule: the fit recovers the synthetic truth it was given, not an outside value
   it('is identifiable from probe readings through a long, gentle brew', async () => {
     // A draughty room: U·A 3 × the pot's default, which the log must find from 0.124 W/K.
     const truth = { ...TRUTH, heatLossWPerK: 3 * TRUTH.heatLossWPerK };
@@ -117,6 +120,7 @@ describe('fitLog: U·A', () => {
     expectRelative(ua.value, truth.heatLossWPerK, 0.35, 'U·A from probe readings');
   });
 
+  // own rule: the fit recovers the synthetic truth it was given, not an outside value
   it('is not identifiable from short brews without a probe', async () => {
     const input = await syntheticInput(dir, 'unprobed', SHORT_UNPROBED, {
       noise: { random: mulberry32(7) },
@@ -132,6 +136,7 @@ describe('fitLog: U·A', () => {
 });
 
 describe('fitLog: the residuals', () => {
+  // own rule: the fit recovers the synthetic truth it was given, not an outside value
   it('lists every observation once, with difference = seen − model', async () => {
     const input = await syntheticInput(dir, 'residuals', SHORT_UNPROBED, {
       noise: { random: mulberry32(3) },

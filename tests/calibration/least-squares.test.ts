@@ -25,6 +25,7 @@ describe('leastSquares (ml-levenberg-marquardt, one iteration at a time, in ln �
     expectRelative(Math.exp(result.theta[1]!), b, 1e-4, 'intercept');
   });
 
+  // closed form: exact points of 5·exp(−t/τ) give back τ = 7
   it('recovers an exponential decay 5·exp(−t/τ), τ = 7, from exact points', () => {
     const t = [0, 2, 4, 6, 8, 10, 12];
     const result = leastSquares({
@@ -39,6 +40,7 @@ describe('leastSquares (ml-levenberg-marquardt, one iteration at a time, in ln �
     expectRelative(Math.exp(result.theta[0]!), 5, 1e-5, 'amplitude');
   });
 
+  // closed form: one parameter, one observation
   it('fits one parameter to one observation', () => {
     const result = leastSquares({
       data: Float64Array.of(3),
@@ -50,6 +52,7 @@ describe('leastSquares (ml-levenberg-marquardt, one iteration at a time, in ln �
     expectRelative(Math.exp(result.theta[0]!), 3, 1e-6, 'single value');
   });
 
+  // own rule: a model that throws is a rejected step, not an outside value
   it('treats a model that throws as a rejected step, not a crash', () => {
     const result = leastSquares({
       data: Float64Array.of(1, 2),

@@ -54,6 +54,7 @@ const observation = (kind: Observation['kind'], atS?: number): Observation => ({
 });
 
 describe('predictObservations', () => {
+  // own rule: how readings are compared with a run, not an outside value
   it('takes the end of the run for a first coffee or sputter the model never reached', () => {
     const values = predictObservations(result({ endS: 140 }), [
       observation('first-coffee'),
@@ -62,6 +63,7 @@ describe('predictObservations', () => {
     expect(values).toEqual([140, 140]);
   });
 
+  // own rule: how readings are compared with a run, not an outside value
   it('interpolates readings linearly between samples and holds them after the run', () => {
     const series = [point(0, 300, 0), point(1, 302, 0), point(2, 306, 0)];
     const values = predictObservations(result({ series }), [
@@ -74,6 +76,7 @@ describe('predictObservations', () => {
 });
 
 describe('logObservations', () => {
+  // own rule: the assumed reading uncertainties are our choice, not an outside value
   it('gives each reading its assumed σ (2 s, 1 g, 1 °C, 3 mL) and its place in the file', async () => {
     const text = [
       'pot: p', //                               1

@@ -31,6 +31,7 @@ describe('loadCatalogue(content/), the demo', () => {
     catalogue = await loadCatalogue(DEMO_CONTENT);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('reads every demo file', () => {
     expect([...catalogue.pots.keys()]).toEqual([
       'four-cup-steel',
@@ -48,6 +49,7 @@ describe('loadCatalogue(content/), the demo', () => {
     ]);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('keeps the station cards between 20 and 40', () => {
     const station = catalogue.site.sets.filter((set) => set.layout === 'station');
     const cards = station.reduce((sum, set) => sum + set.cards.length, 0);
@@ -55,12 +57,14 @@ describe('loadCatalogue(content/), the demo', () => {
     expect(cards).toBeLessThanOrEqual(40);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('expands the bar set: four gas cards, then every coffee with every pot on induction', () => {
     const bar = catalogue.site.sets[0]!;
     expect(bar.cards).toHaveLength(4 + catalogue.pots.size * catalogue.coffees.size);
     expect(bar.cards.slice(4).every((card) => card.stoveId === 'bar-induction')).toBe(true);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('plans the inserts over all coffees × pots × stoves', () => {
     const inserts = catalogue.site.sets[2]!;
     expect(inserts.coffeeIds).toHaveLength(4);
@@ -76,6 +80,7 @@ describe('loadCatalogue(content/), the demo', () => {
     ).toEqual(['four-cup-steel', 'six-cup']);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('names each entry’s source relative to the content folder, with the file’s sha256', () => {
     const pot = catalogue.pots.get('three-cup')!;
     expect(pot.source.file).toBe('pots/three-cup.yaml');
@@ -126,6 +131,7 @@ describe('loadCatalogue(a broken copy of the content)', () => {
     });
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('a truncated flow mapping is a YAML error too', async () => {
     await put(
       dir,
@@ -256,6 +262,7 @@ describe('loadCatalogue(a broken copy of the content)', () => {
     });
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('a 2 MiB file is refused without being parsed', async () => {
     const huge = `${POT}\n${'# padding padding padding padding\n'.repeat(62_000)}`;
     expect(huge.length).toBeGreaterThan(2 * 1024 * 1024);

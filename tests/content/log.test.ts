@@ -4,6 +4,7 @@ import { contentWords } from '../../generator/words/content.ts';
 import { expectIssue, LOG, rejection, tempFile, withLine, withoutLine } from './helpers.ts';
 
 describe('loadLogFile', () => {
+  // source: NIST SP 811, Appendix B (°C, mL, g to SI)
   it('converts each brew to SI with its own source', async () => {
     const path = await tempFile('first-morning.yaml', LOG);
     const log = await loadLogFile(path);
@@ -31,6 +32,7 @@ describe('loadLogFile', () => {
     expect(brew!.sputterS).toBeUndefined();
   });
 
+  // source: NIST SP 811, Appendix B (°C to K)
   it('reads probe readings in K and the off-heat time', async () => {
     const text = `${LOG}\n    off_heat_s: 150\n    yield_ml: 104\n    water_c: [[60, 48.5]]`;
     const [brew] = (await loadLogFile(await tempFile('first-morning.yaml', text))).brews;

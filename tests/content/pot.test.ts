@@ -15,6 +15,7 @@ async function potIssues(text: string) {
 }
 
 describe('loadPotFile converts to SI', () => {
+  // source: NIST SP 811, Appendix B (mm, mL, g, bar to SI)
   it('loadPotFile(three-cup) gives the model in m, m³, kg and Pa', async () => {
     const pot = await loadPotFile(await tempFile('three-cup.yaml', POT));
     expect(pot).toMatchObject({
@@ -45,6 +46,7 @@ describe('loadPotFile converts to SI', () => {
     expect(pot.hash).toBe(createHash('sha256').update(POT).digest('hex'));
   });
 
+  // own rule: an assumed valve pressure (no source publishes one), flagged on the card
   it('without valve_opening_bar assumes 1.5 bar and flags it', async () => {
     const pot = await loadPotFile(await tempFile('three-cup.yaml', POT));
     expect(ASSUMED_VALVE_OPENING_BAR).toBe(1.5);
@@ -52,6 +54,7 @@ describe('loadPotFile converts to SI', () => {
     expect(pot.valveOpeningAssumed).toBe(true);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('with valve_opening_bar uses it and does not flag it', async () => {
     const text = withLine(
       POT,
@@ -63,6 +66,7 @@ describe('loadPotFile converts to SI', () => {
     expect(pot.valveOpeningAssumed).toBe(false);
   });
 
+  // source: Incropera & DeWitt, Table 1.1: free convection to gases 2–25 W/(m²·K); 10 lies inside it
   it('without heat_loss_w_per_k uses 10 W/(m²·K) × the side area π·d·H', async () => {
     const pot = await loadPotFile(await tempFile('three-cup.yaml', POT));
     // h × π·d·H with H = V/(π d²/4): 10 × π × 0.084 × 0.046915 = 0.123810 W/K.
@@ -70,9 +74,13 @@ describe('loadPotFile converts to SI', () => {
     const closedForm = ROOM_AIR_CONVECTION_W_PER_M2K * Math.PI * 0.084 * heightM;
     expect(Math.abs(pot.model.heatLossWPerK - closedForm) / closedForm).toBeLessThan(1e-12);
     expect(pot.model.heatLossWPerK).toBeCloseTo(0.12381, 5);
+    // Incropera & DeWitt, Table 1.1: free convection to gases, 2–25 W/(m²·K).
+    expect(ROOM_AIR_CONVECTION_W_PER_M2K).toBeGreaterThanOrEqual(2);
+    expect(ROOM_AIR_CONVECTION_W_PER_M2K).toBeLessThanOrEqual(25);
     expect(defaultHeatLossWPerK(2.6e-4, 0.084)).toBe(pot.model.heatLossWPerK);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('with heat_loss_w_per_k (written by calibration) uses it', async () => {
     const text = withLine(POT, 'mass_g', '  mass_g: 180\n  heat_loss_w_per_k: 0.15');
     const pot = await loadPotFile(await tempFile('three-cup.yaml', text));

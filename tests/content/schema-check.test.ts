@@ -33,6 +33,7 @@ describe('schemaIssues on the tests’ valid files', () => {
 });
 
 describe('schemaIssues words each kind of mistake', () => {
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('a number written with its unit ("32mm") asks for the number alone', () => {
     const issues = issuesOf('pot', withLine(POT, 'valve_height_mm', '  valve_height_mm: 32mm'));
     const issue = expectIssue(issues, {
@@ -47,6 +48,7 @@ describe('schemaIssues words each kind of mistake', () => {
     expect(issue.fix).toMatch(/^Write 32\b/);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('a unit other than the key’s ("3.2cm") is not silently converted', () => {
     const issues = issuesOf('pot', withLine(POT, 'valve_height_mm', '  valve_height_mm: 3.2cm'));
     const issue = expectIssue(issues, { file: FILE, line: 6, field: 'base.valve_height_mm' });
@@ -192,6 +194,7 @@ describe('schemaIssues words each kind of mistake', () => {
     expect(issue.problem).toContain('`aluminium`, `stainless-steel`');
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('a percentage for a share suggests the fraction', () => {
     const issues = issuesOf('stove', withLine(STOVE, 'kind', 'kind: gas\nefficiency: 38%'));
     const issue = expectIssue(issues, {
@@ -263,6 +266,7 @@ describe('schemaIssues words each kind of mistake', () => {
     expectIssue(issues, { file: FILE, line: 1, field: '', code: 'wrong-type' });
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('reports every mistake of a file at once', () => {
     let text = withLine(POT, 'cups', 'cups: three');
     text = withLine(text, 'material', '  material: aluminum');

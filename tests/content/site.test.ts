@@ -21,6 +21,7 @@ describe('site.yaml', () => {
     await removeCopy(dir);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('expands every_coffee_with_every_pot sorted by pot then coffee', async () => {
     const { site } = await loadCatalogue(dir);
     const [bar] = site.sets;
@@ -58,6 +59,7 @@ describe('site.yaml', () => {
     ]);
   });
 
+  // source: NIST SP 811, Appendix B (°C to K)
   it('converts the room and sorts the kettle presets in K; adds the final / of the base URL', async () => {
     await put(
       dir,

@@ -4,7 +4,7 @@ import { DEFAULT_STOVE_EFFICIENCY } from '../../generator/content/stove-efficien
 import { contentWords } from '../../generator/words/content.ts';
 import { expectIssue, rejection, STOVE, tempFile, withLine } from './helpers.ts';
 
-// Mid-points of the boil-test ranges in check-values.md (ENERGY STAR Emerging Technology
+// Mid-points of the boil-test ranges (ENERGY STAR Emerging Technology
 // Award, residential induction cooktops 2021–2022; US DOE cooking-product test data).
 describe('DEFAULT_STOVE_EFFICIENCY', () => {
   it.each([
@@ -18,6 +18,7 @@ describe('DEFAULT_STOVE_EFFICIENCY', () => {
 });
 
 describe('loadStoveFile', () => {
+  // source: ENERGY STAR Emerging Technology Award, residential induction cooktops (2021–2022), boil-test mid-points
   it('uses the kind’s efficiency when none is given, and flags it', async () => {
     const stove = await loadStoveFile(await tempFile('bar-gas.yaml', STOVE));
     expect(stove).toMatchObject({
@@ -32,6 +33,7 @@ describe('loadStoveFile', () => {
     expect(stove.levels.every((level) => !level.fitted)).toBe(true);
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('uses a fitted heat_to_pot_w where calibration wrote one', async () => {
     const text = withLine(
       withLine(STOVE, 'kind', 'kind: gas\nefficiency: 0.38'),
@@ -44,6 +46,7 @@ describe('loadStoveFile', () => {
     expect(stove.levels[2]).toEqual({ label: 'high', powerW: 1500, heatToPotW: 590, fitted: true });
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('reads numbered levels as labels', async () => {
     const text = [
       'name: Radiant',
@@ -89,6 +92,7 @@ describe('loadStoveFile', () => {
     });
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('a power out of range is refused', async () => {
     const path = await tempFile(
       'bar-gas.yaml',

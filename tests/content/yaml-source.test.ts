@@ -47,6 +47,7 @@ describe('positionAt', () => {
 });
 
 describe('nodeAt and rangeAt', () => {
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('nodeAt finds the scalar; rangeAt its text', () => {
     const node = nodeAt(source, ['levels', 1, 'power_w']);
     expect(isScalar(node) && node.value).toBe(1500);
@@ -54,6 +55,7 @@ describe('nodeAt and rangeAt', () => {
     expect(TEXT.slice(start, end)).toBe('1500');
   });
 
+  // own rule: stovecard's handling of its own YAML input, not an outside value
   it('nodeAt(a path not in the file) is undefined', () => {
     expect(nodeAt(source, ['levels', 7])).toBeUndefined();
   });

@@ -42,8 +42,8 @@ export async function runMain(argv: readonly string[]): Promise<CliRun> {
 }
 
 /**
- * main(argv) with the working folder set to `cwd` for the call, so a build's plan cache
- * (`.stovecard-cache` in the working folder) lands there and not in the checkout. Needs
+ * main(argv) with the working folder set to `cwd` for the call (relative --content and --out
+ * are taken from there; the cache goes beside the content folder). Needs
  * vitest's default `forks` pool: worker threads cannot change the working folder.
  */
 export async function runMainIn(cwd: string, argv: readonly string[]): Promise<CliRun> {

@@ -43,7 +43,7 @@ describe('a cold start that delivers no coffee', () => {
     if (plan.refused) throw new Error('the demo plan is refused');
     // What the planner records when the cold start delivers nothing (plan-cache.ts).
     const nothing = { ...plan, coldStart: { ...plan.coldStart, meanK: Number.NaN, inBandShare: 0 } };
-    const text = planSummary(nothing);
+    const text = planSummary(nothing, false);
     expect(text).not.toContain('NaN');
     expect(text).toContain(faultWords.coldStartNoCoffee);
   });

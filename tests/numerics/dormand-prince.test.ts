@@ -234,6 +234,7 @@ describe('integrate — events', () => {
   // State error at rtol 1e-12 moves the root by ≲ 1e-11; the bracket adds ≤ eventTimeTolerance.
   const EVENT_SLACK = 1e-9 + 1e-11;
 
+  // closed form: x = cos t is zero at π/2 and 3π/2
   it('integrate(x = cos t, event x = 0 downward) stops at π/2 within eventTimeTolerance', () => {
     const o = oscillate(0, [1, 0], 10, [x(-1)]);
     expectKind(o, 'event');
@@ -243,6 +244,7 @@ describe('integrate — events', () => {
     expectWithin(o.y[1]!, -1, 1e-10, 'v at the event vs −sin(π/2)');
   });
 
+  // closed form: x = cos t is zero at π/2 and 3π/2
   it('integrate(x = cos t, event x = 0 upward) ignores π/2 and stops at 3π/2', () => {
     const o = oscillate(0, [1, 0], 10, [x(1)]);
     expectKind(o, 'event');
@@ -271,6 +273,7 @@ describe('integrate — events', () => {
     expect(spans, 'onStep ends at the event time').toEqual([[0, o.t]]);
   });
 
+  // closed form: x = cos t is zero at π/2
   it('integrate(from x(π/2) = 0 exactly, event x = 0 either way) does not fire at t0', () => {
     const o = oscillate(Math.PI / 2, [0, -1], 10, [x(0)]);
     expectKind(o, 'event');
@@ -298,6 +301,7 @@ describe('integrate — events', () => {
 });
 
 describe('integrate — outcomes', () => {
+  // own rule: the integrator's contract, not an outside value
   it('integrate(maxSteps 3) returns step-limit with a consistent state', () => {
     const o = integrate(decay.f, 0, Float64Array.of(1), 10, {
       rtol: 1e-8,
@@ -310,6 +314,7 @@ describe('integrate — outcomes', () => {
     expectWithin(o.y[0]!, Math.exp(-0.7 * o.t), 1e-7, `y(${o.t}) vs e^(−0.7t)`);
   });
 
+  // own rule: the integrator's contract, not an outside value
   it('integrate(tEnd = 10.3) finishes at tEnd exactly', () => {
     const tEnd = 0.1 * 103;
     const o = integrate(decay.f, 0, Float64Array.of(1), tEnd, { rtol: 1e-6, atol: 1e-12 });
@@ -318,12 +323,14 @@ describe('integrate — outcomes', () => {
     expectWithin(o.y[0]! / Math.exp(-0.7 * tEnd), 1, END_FACTOR * 1e-6, 'y(tEnd)/e^(−0.7·tEnd)');
   });
 
+  // own rule: the integrator's contract, not an outside value
   it('integrate(t0 = tEnd) finishes at once with y0', () => {
     const o = integrate(decay.f, 3, Float64Array.of(2), 3, { rtol: 1e-6, atol: 1e-9 });
     expectKind(o, 'finished');
     expect([o.t, o.y[0], o.steps, o.evaluations]).toEqual([3, 2, 0, 0]);
   });
 
+  // own rule: the integrator's contract, not an outside value
   it('integrate(f = NaN past t = 2) ends in step-underflow just before 2, without throwing', () => {
     const f: Derivative = (t, y, dy) => {
       dy[0] = t > 2 ? NaN : -0.7 * y[0]!;
@@ -345,6 +352,7 @@ describe('integrate — outcomes', () => {
     expect([o.t, o.y[0], o.steps]).toEqual([0, 1, 0]);
   });
 
+  // own rule: the integrator's contract, not an outside value
   it('integrate(maxStep 0.25) never takes a longer step', () => {
     let longest = 0;
     const o = integrate(decay.f, 0, Float64Array.of(1), 10, {
@@ -358,6 +366,7 @@ describe('integrate — outcomes', () => {
     expect(o.lastStep, 'lastStep vs maxStep 0.25').toBeLessThanOrEqual(0.25);
   });
 
+  // own rule: the integrator's contract, not an outside value
   it('integrate(atol per component) takes a Float64Array and refuses one of the wrong length', () => {
     const atol = Float64Array.of(1e-12, 1e-12);
     const o = integrate(oscillator.f, 0, Float64Array.of(1, 0), 20, { rtol: 1e-8, atol });
@@ -369,6 +378,7 @@ describe('integrate — outcomes', () => {
     );
   });
 
+  // own rule: the integrator's contract, not an outside value
   it('integrate(tEnd < t0) throws IntegrateArgumentError (a programming error, not an outcome)', () => {
     expect(() => integrate(decay.f, 1, Float64Array.of(1), 0, { rtol: 1e-6, atol: 1e-9 })).toThrow(
       IntegrateArgumentError,
@@ -394,7 +404,8 @@ describe('integrate — stiff-ish sanity', () => {
     );
     expectKind(o, 'finished');
     expectWithin(o.y[0]!, exact(10), END_FACTOR * (rtol * Math.abs(exact(10)) + 1e-9), 'y(10)');
-    // DOPRI5 is stable for hλ ≳ −3.3 on the real axis: at least 10·50/3.4 ≈ 147 steps.
+    // source: Hairer, Nørsett & Wanner, Solving Ordinary Differential Equations I, §II.5 / §IV.2
+    // (DOPRI5's stability region reaches about −3.3 on the real axis): at least 10·50/3.4 ≈ 147 steps.
     expect(o.steps, 'accepted steps').toBeGreaterThanOrEqual(147);
   });
 });

@@ -1,10 +1,12 @@
 /**
  * poppler-utils (pdfinfo, pdftotext, pdftoppm) and qpdf run on PDF files, for tests that
- * check our PDFs with a reader that is not ours and not pdfjs. CI installs poppler-utils
- * (.ci/run); qpdf is used only where it happens to be installed.
+ * check our PDFs with a reader that is not ours and not pdfjs. They are Debian packages, not
+ * npm ones: where one is missing its checks are skipped with a notice, except under CI=true,
+ * where a missing tool is a failing test (.ci/run installs poppler-utils and qpdf).
  */
 import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
 
 export interface ToolRun {
   readonly stdout: string;
@@ -20,6 +22,35 @@ export function runTool(tool: string, args: readonly string[]): ToolRun {
 
 export function onPath(tool: string): boolean {
   return spawnSync('sh', ['-c', `command -v ${tool}`]).status === 0;
+}
+
+const IN_CI = process.env.CI === 'true' || process.env.CI === '1';
+
+/** Why `tools` cannot run here (the missing ones named), or undefined when all are on PATH. */
+export function missingTools(tools: readonly string[]): string | undefined {
+  const missing = tools.filter((tool) => !onPath(tool));
+  if (missing.length === 0) return undefined;
+  return `${missing.join(', ')} not on PATH (Debian: poppler-utils for pdfinfo/pdftotext/pdftoppm, qpdf; .ci/run installs them)`;
+}
+
+/**
+ * describe(name, body) when every tool is on PATH. Without one: a failing test under
+ * CI=true, elsewhere a skipped suite whose name says why, and a warning on the console.
+ */
+export function describeWithTools(tools: readonly string[], name: string, body: () => void): void {
+  const missing = missingTools(tools);
+  if (missing === undefined) {
+    describe(name, body);
+  } else if (IN_CI) {
+    describe(name, () => {
+      it(`has ${tools.join(', ')} to run`, () => {
+        expect.fail(missing);
+      });
+    });
+  } else {
+    console.warn(`stovecard suite "${name}" skipped: ${missing}`);
+    describe.skip(`${name} (skipped: ${missing})`, body);
+  }
 }
 
 /** pdfinfo's page sizes, pt, of pages 1 … `pages`. */

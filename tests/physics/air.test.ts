@@ -13,7 +13,7 @@ import { expectAbsolute, expectRelative, halfUnitOfLastDigit } from '../helpers/
 /** J/(mol·K) → kJ/(kg·K) with the dry-air molar mass of Lemmon et al. (2000). */
 const perMass = (molar: number) => molar / AIR_MOLAR_MASS_KG_PER_MOL / 1e3;
 
-describe('Air c_p and c_v — NBS Circular 564 tables (values in check-values.md)', () => {
+describe('Air c_p and c_v — NBS Circular 564 tables', () => {
   // Printed to 1e-3 kJ/(kg·K); held to half of that. The NASA polynomial describes air of
   // M = 28.9651159 g/mol; converting with Lemmon's 28.96546 g/mol shifts it by 1.2e-5
   // relative (0.012 J/(kg·K)), far inside the tolerance.

@@ -93,10 +93,12 @@ describe('region1 out of range', () => {
       'IAPWS-IF97 Region 1: temperature 700 K is outside 273.15–623.15 K',
     );
   });
+  // source: IAPWS R7-97(2012), Region 1 range of validity (p_sat(T) ≤ p ≤ 100 MPa)
   it('throws OutOfRangeError below p_sat(T) (steam) and above 100 MPa', () => {
     expect(() => region1(373.15, 100e3)).toThrow(OutOfRangeError); // p_sat = 101.418 kPa
     expect(() => region1(300, 100.1e6)).toThrow(OutOfRangeError);
   });
+  // source: NIST Chemistry WebBook (IAPWS-95), saturated liquid at 100 °C: 958.34 kg/m³
   it('accepts the saturated liquid itself, p = p_sat(T)', () => {
     expect(region1(373.15, saturationPressurePa(373.15)).densityKgM3).toBeGreaterThan(958);
   });

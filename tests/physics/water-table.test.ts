@@ -48,6 +48,7 @@ describe('water tables against the exact correlations', () => {
     expect(worst).toBeLessThan(1e-8);
   });
 
+  // own rule: the tables against the correlations they tabulate, not an outside value
   it('give enthalpy to 1e-3 J/kg and expansivity to 1e-10 /K (both pass through zero)', () => {
     let worstH = 0;
     let worstAlpha = 0;
@@ -61,6 +62,7 @@ describe('water tables against the exact correlations', () => {
     expect(worstAlpha).toBeLessThan(1e-10);
   });
 
+  // own rule: the tables against the correlations they tabulate, not an outside value
   it('give the saturated liquid’s viscosity and h_fg to a relative 1e-8', () => {
     for (const { t } of sample.slice(0, 5_000)) {
       const mu = waterViscosityPaS(t, saturatedLiquidDensityKgM3(t));
@@ -70,6 +72,7 @@ describe('water tables against the exact correlations', () => {
     }
   });
 
+  // source: IAPWS R7-97(2012) range of validity (the correlations answer outside the tables)
   it('hand states outside the tables to the correlations, range checks included', () => {
     const hot = 480;
     const p = saturationPressurePa(hot) + 1e5;

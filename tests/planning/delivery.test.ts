@@ -19,11 +19,13 @@ describe('the default delivery window', () => {
     expect(deliveryWindowS(byDefault, { cups: 2 })).toEqual([40, 100]);
   });
 
+  // own rule: the delivery window scales with the cups (our choice), not an outside value
   it('scales the coffee’s own window the same way', () => {
     expect(deliveryWindowS({ deliveryWindowS: [70, 160] }, { cups: 4 })).toEqual([70, 160]);
     expect(deliveryWindowS({ deliveryWindowS: [72, 159] }, { cups: 1 })).toEqual([24, 53]);
   });
 
+  // own rule: the delivery window scales with the cups (our choice), not an outside value
   it('lets a one-cup pot start hot (with the three-cup window it could only start cold)', () => {
     // A one-cup base: 100 mL sealed, 60 mm across, valve 24 mm up (the demo's measurements).
     const oneCup = potEntry(

@@ -1,5 +1,5 @@
 /**
- * Entries for planner tests, built from the brew-model reference fixtures (not demo
+ * Entries for planner tests, built from the brew reference fixtures (tests/brew/fixtures.ts; not demo
  * content): a typical three-cup aluminium pot, a permeable stovetop grind, and stoves whose
  * levels span gentle to strong heat.
  */

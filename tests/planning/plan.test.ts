@@ -27,6 +27,7 @@ const typical = accepted(
 );
 
 describe('planCard on a typical three-cup pot with a permeable grind', () => {
+  // own rule: the planner's own limits and search, not an outside value
   it('re-simulating the plan’s own choices gives the plan’s numbers', () => {
     const again = simulateBrew(
       brewSetup(potEntry().model, coffeeEntry().bed, roomModel(seaLevel), {
@@ -42,16 +43,18 @@ describe('planCard on a typical three-cup pot with a permeable grind', () => {
     expect(again.extraction!.meanK).toBeCloseTo(typical.extraction.meanK, 6);
   });
 
-  it('chooses a start near 70 °C (seed rule of thumb: common practice, no source)', () => {
+  it('chooses a start near 70 °C (hot-water rule of thumb: common practice, no source)', () => {
     expect(typical.startK - C).toBeGreaterThanOrEqual(60);
     expect(typical.startK - C).toBeLessThanOrEqual(80);
   });
 
+  // common practice, no source: a hot start brews far more of the cup in band than a cold one
   it('puts far more of the cup in band than a cold start', () => {
     expect(typical.extraction.inBandShare).toBeGreaterThan(typical.coldStart.inBandShare + 0.25);
     expect(typical.extraction.meanK).toBeGreaterThan(typical.coldStart.meanK + 10);
   });
 
+  // own rule: the planner's own limits and search, not an outside value
   it('keeps the delivery phase inside the coffee’s window and before the sputter', () => {
     const delivery = typical.offHeatS.midS - typical.firstCoffeeS.midS;
     expect(delivery).toBeGreaterThanOrEqual(60 - 1e-6);
@@ -67,6 +70,7 @@ describe('planCard on a typical three-cup pot with a permeable grind', () => {
     }
   });
 
+  // own rule: the planner's own limits and search, not an outside value
   it('fills below the valve with the stated margin once the water is at its hottest', () => {
     expect(typical.belowValveM).toBeGreaterThan(typical.expansionMarginM);
     expect(typical.peakGaugePa).toBeLessThanOrEqual(0.5 * potEntry().model.valveOpeningGaugePa);
@@ -133,6 +137,7 @@ describe('planCard refusals (a reason and a fix, never a recipe)', () => {
     expect(plan.refused?.suggestion).toContain('coarser');
   });
 
+  // common practice, no source: aluminium is not magnetic, so an induction hob does not heat it.
   it('refuses an aluminium pot on induction, and accepts it with an induction plate', () => {
     const induction = stoveEntry([100, 150, 200, 300], 'induction');
     const plan = planCard({
@@ -167,6 +172,7 @@ describe('planCard’s coarse-to-fine start search', () => {
     ),
   );
 
+  // own rule: the planner's own limits and search, not an outside value
   it('never chooses a plan worse than a tie with the exhaustive search’s, and mostly the same', () => {
     let same = 0;
     let accepted = 0;
@@ -195,6 +201,7 @@ describe('firstPrintable: the printed run keeps the limits the search saw', () =
   const byShare = (a: { share: number }, b: { share: number }) => a.share > b.share;
   const limitPa = 5e4;
 
+  // own rule: the planner's own limits and search, not an outside value
   it('takes the heat off 4 s earlier when the best choice’s printed run sputters', () => {
     const tried: number[] = [];
     const result = firstPrintable(
@@ -210,6 +217,7 @@ describe('firstPrintable: the printed run keeps the limits the search saw', () =
     expect(result?.chosen.offS).toBe(96);
   });
 
+  // own rule: the planner's own limits and search, not an outside value
   it('moves to the next best choice when retries do not help, and refuses when none passes', () => {
     const choices = [
       { share: 0.5, offS: 80 },

@@ -62,14 +62,32 @@ describe('stationCardView(accepted plan, metric)', () => {
     const all = e.rows.map((row) => `${row.label} ${row.value}`).join('\n');
     expect(all).toContain(`${fixed(accepted.extraction.inBandShare * 100, 0)}${NBSP}%`);
     expect(all).toContain(`${fixed(accepted.coldStart.inBandShare * 100, 0)}${NBSP}%`);
-    expect(all).toContain(`${fixed(accepted.valveOpeningGaugePa / 1e5, 2)}${NBSP}bar`);
     const pot = catalogue.pots.get(accepted.potId)!;
     expect(all.includes('assumed')).toBe(pot.valveOpeningAssumed);
+    if (pot.valveOpeningAssumed) {
+      // Nobody measured it: two significant figures, why it is assumed, and whom to ask.
+      expect(all).toContain(`about ${Number((accepted.valveOpeningGaugePa / 1e5).toPrecision(2))}${NBSP}bar`);
+      expect(all).not.toContain(`${fixed(accepted.valveOpeningGaugePa / 1e5, 2)}${NBSP}bar`);
+      expect(all).toContain('no value was given');
+      expect(all).toContain('ask the maker');
+    } else {
+      expect(all).toContain(`${fixed(accepted.valveOpeningGaugePa / 1e5, 2)}${NBSP}bar`);
+    }
+  });
+
+  it('carries the compact cautions and the deferral on A6, the full ones elsewhere', async () => {
+    const a6 = await stationCardView(accepted, catalogue, { ...OPTIONS, paper: 'A6' });
+    expect(a6.cautions.form).toBe('compact');
+    expect(a6.cautions.items).toEqual(cardWords.cautions.compact);
+    expect(a6.cautions.deferral).toBe(cardWords.cautions.deferral);
+    const a4 = await stationCardView(accepted, catalogue, { ...OPTIONS, paper: 'A4' });
+    expect(a4.cautions.form).toBe('full');
   });
 
   it('always carries the cautions and the footer', async () => {
     const view = await stationCardView(accepted, catalogue, OPTIONS);
-    expect(view.cautions.items).toEqual(cardWords.cautions.items);
+    expect(view.cautions.items).toEqual(cardWords.cautions.full);
+    expect(view.cautions.deferral).toBe(cardWords.cautions.deferral);
     expect(view.footer.built).toContain('2024-05-01');
     expect(view.footer.built).toContain('abcdef12');
     expect(view.footer.printedBy).toContain(catalogue.site.business.name);
@@ -124,7 +142,14 @@ describe('stationCardView(accepted plan, us)', () => {
       `${fixed((accepted.fillHeightM * 1e3) / MM_PER_IN, 2)}${NBSP}in`,
     );
     const all = r.expect.rows.map((row) => row.value).join('\n');
-    expect(all).toContain(`${fixed(accepted.valveOpeningGaugePa / 6894.757293168, 1)}${NBSP}psi`);
+    // 1 psi = 6894.757293168 Pa (NIST SP 811); an assumed valve to two significant figures.
+    const valvePsi = accepted.valveOpeningGaugePa / 6894.757293168;
+    const pot = catalogue.pots.get(accepted.potId)!;
+    expect(all).toContain(
+      pot.valveOpeningAssumed
+        ? `about ${Number(valvePsi.toPrecision(2))}${NBSP}psi`
+        : `${fixed(valvePsi, 1)}${NBSP}psi`,
+    );
     expect(r.chart.svg).toContain('fl oz');
     expect(r.chart.svg).toContain('°F');
   });
@@ -191,7 +216,8 @@ describe('insertCardView', () => {
       }
     }
     expect(view.rows.some((row) => row.refused)).toBe(true);
-    expect(view.cautions.items).toEqual(cardWords.cautions.items);
+    expect(view.cautions.items).toEqual(cardWords.cautions.full);
+    expect(view.cautions.deferral).toBe(cardWords.cautions.deferral);
     expect(view.webLine === null).toBe(catalogue.site.baseUrl === undefined);
   });
 });

@@ -13,6 +13,7 @@ import {
   length,
   lengthDown,
   pressure,
+  pressureRough,
   share,
   temperature,
   temperatureBand,
@@ -45,6 +46,14 @@ describe('NIST SP 811 Appendix B definitions', () => {
     expect(length(0.0254, 'us').text).toBe(`1.00${NBSP}in`);
     expect(length(0.0254, 'metric').text).toBe(`25${NBSP}mm`);
   });
+  it('pressureRough: two significant figures, never more (an assumed value)', () => {
+    expect(pressureRough(1.5e5, 'metric').text).toBe(`1.5${NBSP}bar`);
+    expect(pressureRough(1.5e5, 'us').text).toBe(`22${NBSP}psi`); // 21.76 psi, NIST SP 811
+    expect(pressureRough(1.234e5, 'metric').text).toBe(`1.2${NBSP}bar`);
+    expect(pressureRough(0.8e5, 'metric').text).toBe(`0.80${NBSP}bar`);
+    expect(pressureRough(1.0e5, 'metric').text).toBe(`1.0${NBSP}bar`);
+  });
+
   it('pressure(1 psi = 6894.757293168 Pa) and bar', () => {
     expect(pressure(6894.757293168, 'us').text).toBe(`1.0${NBSP}psi`);
     expect(pressure(1.5e5, 'metric').text).toBe(`1.50${NBSP}bar`);

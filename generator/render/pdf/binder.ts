@@ -13,7 +13,7 @@
  * to draw. pdfkit draws only what is the set's own: the front matter, and on each card's
  * placeholder page its page number (an artifact) and its bookmark.
  */
-import type { PageSetup, StationCardView } from '../card-view.ts';
+import { cautions as cautionsView, type Cautions, type PageSetup, type StationCardView } from '../card-view.ts';
 import type { MethodView, SetView, TroubleshootingView } from '../site-view.ts';
 import { cardWords } from '../../words/card.ts';
 import { pdfWords } from '../../words/pdf.ts';
@@ -196,6 +196,29 @@ function troubleshootingItems(view: TroubleshootingView, st: TextPageStyle): Flo
   return items;
 }
 
+/**
+ * The cautions at the foot of every text page (compact form), over a rule: the heading,
+ * the cautions run together, and the deferral to the maker. A running foot, so a
+ * pagination artifact (the cards' own cautions are the tagged ones); pdftotext and any
+ * reader of the page see it on every page.
+ */
+function cautionsFoot(cautions: Cautions, st: TextPageStyle): Block {
+  const text = cautions.items.join(' · ');
+  return (pen, x, y, w) => {
+    const rule = 0.8;
+    let h = rule + st.gap * 0.4;
+    const draw = () => {
+      if (pen.drawing) pen.doc.rect(x, y, w, rule).fill(INK);
+      h += pen.write(cautions.heading, x, y + h, w, st.cautionHeading);
+      h += pen.write(text, x, y + h, w, st.caution);
+      h += pen.write(cautions.deferral, x, y + h, w, st.cautionStrong);
+    };
+    if (pen.drawing) pen.artifact(draw, 'Pagination');
+    else draw();
+    return h;
+  };
+}
+
 /** A contents line: the entry's text, dot leaders, its page number on the right. */
 function contentsLine(text: string, page: number, st: TextPageStyle): Block {
   return (pen, x, y, w) => {
@@ -278,7 +301,7 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   const [widthPt, heightPt] = pageSizePt(input.page.widthMm, input.page.heightMm);
   const textPage: PageBox = { widthPt, heightPt };
   const st = textPageStyle(input.page.paper);
-  const frame: FlowFrame = { page: textPage, marginPt: st.marginPt, gap: st.gap };
+  const foot = cautionsFoot(cautionsView('compact'), st);
   const open = openPdf({
     title: pdfWords.setTitle(input.set.title),
     author: input.author,
@@ -288,6 +311,13 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   });
   const { doc } = open;
   const measure = new Pen(doc, false);
+  const footH = foot(measure, st.marginPt, 0, widthPt - 2 * st.marginPt);
+  const frame: FlowFrame = {
+    page: textPage,
+    marginPt: st.marginPt,
+    gap: st.gap,
+    footPt: footH + st.gap,
+  };
 
   // Front matter is measured first: the contents needs every part's first page.
   let parts: { title: string; items: FlowItem[]; pages: number }[] = [];
@@ -328,6 +358,7 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
     doc.addPage({ size: [widthPt, heightPt], margin: 0 });
     pageNo += 1;
     drawPageNumber(pen, textPage, st.marginPt, pdfWords.pageNumber(pageNo, total), st.pageNumber);
+    foot(pen, st.marginPt, heightPt - st.marginPt - footH, widthPt - 2 * st.marginPt);
   };
   if (input.frontMatter) {
     pen.group('Sect', () => flowPages(pen, frame, contents, newTextPage), {

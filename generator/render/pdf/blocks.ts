@@ -170,17 +170,23 @@ export function warningsBlock(warnings: Warnings | null, st: CardStyle): Block {
   );
 }
 
-/** The safety cautions: a rule, the heading in the valve's red, the list. */
+/** The safety cautions: a rule, the heading in the valve's red, the list, the deferral to the maker. */
 export function cautionsBlock(cautions: Cautions, st: CardStyle): Block {
   const columns = st.compact ? 1 : st.listColumns;
-  const list = listBlock(cautions.items, st.caution, st, { columns });
+  // The compact form (small paper) runs on as one paragraph: a list's line per item is the room it lacks.
+  const list: Block =
+    cautions.form === 'compact'
+      ? (pen, x, y, w) => pen.para('P', cautions.items.join(' · '), x, y, w, st.caution)
+      : listBlock(cautions.items, st.caution, st, { columns });
   return (pen, x, y, w) =>
     pen.group('Sect', () => {
       const rule = st.ruleHeavy * 0.75;
       pen.rule(x, y, w, rule, INK);
       let h = rule + st.padding;
       h += stepHeading(pen, null, cautions.heading, null, x, y + h, w, st, st.cautionHeading);
-      return h + list(pen, x, y + h, w);
+      h += list(pen, x, y + h, w);
+      h += st.caution.size * 0.3;
+      return h + pen.para('P', cautions.deferral, x, y + h, w, { ...st.caution, bold: true });
     });
 }
 

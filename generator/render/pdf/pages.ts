@@ -18,6 +18,8 @@ export interface FlowFrame {
   readonly page: PageBox;
   readonly marginPt: number;
   readonly gap: number;
+  /** Room kept free above the bottom margin of every page (a running foot), pt. */
+  readonly footPt?: number;
 }
 
 /**
@@ -33,7 +35,7 @@ export function flowPages(
   const x = frame.marginPt;
   const width = frame.page.widthPt - 2 * frame.marginPt;
   const top = frame.marginPt;
-  const bottom = frame.page.heightPt - frame.marginPt;
+  const bottom = frame.page.heightPt - frame.marginPt - (frame.footPt ?? 0);
   const available = bottom - top;
   const measure = pen.measuring();
   const heights = items.map((item) => item.block(measure, x, top, width));

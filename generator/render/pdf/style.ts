@@ -180,6 +180,10 @@ export interface TextPageStyle {
   readonly table: TextFont;
   readonly tableHead: TextFont;
   readonly pageNumber: TextFont;
+  /** The running cautions at the foot of every text page. */
+  readonly caution: TextFont;
+  readonly cautionStrong: TextFont;
+  readonly cautionHeading: TextFont;
 }
 
 /** The print sizes of the site's text pages (card.css: 10.5 pt body) scaled by the paper's k. */
@@ -203,5 +207,8 @@ export function textPageStyle(paper: PaperSize): TextPageStyle {
     table: f(7.8),
     tableHead: f(7, true),
     pageNumber: f(6.5, false, SOFT),
+    caution: f(7),
+    cautionStrong: f(7, true),
+    cautionHeading: f(7.5, true, VALVE),
   };
 }
