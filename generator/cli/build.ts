@@ -1,11 +1,12 @@
 /** `stovecard build [--content DIR] [--out DIR] [--serve]`: the site of cards. */
 import { buildSite, type BuildResult } from '../pipeline/build-site.ts';
 import { terminalProgress } from '../pipeline/progress.ts';
-import { serveSite } from '../pipeline/serve.ts';
+import { checkPort, serveSite } from '../pipeline/serve.ts';
 import { sitePdfStep } from '../pipeline/pdf-step.ts';
 import { ContentErrors } from '../content/index.ts';
 import { formatContentErrors } from '../words/content.ts';
 import { buildWords } from '../words/card.ts';
+import { faultWords } from '../words/build-faults.ts';
 import { UsageError } from './errors.ts';
 import { checkOutFolder } from './out-folder.ts';
 import { parseOptions } from './options.ts';
@@ -34,6 +35,31 @@ export function warningLines(result: BuildResult): string {
     .join('');
 }
 
+/** What the build did besides the site: leftovers removed, cache files made again, a previous site kept. */
+export function noteLines(result: BuildResult): string {
+  const notes: string[] = [];
+  if ((result.skippedFiles ?? []).length > 0) notes.push(faultWords.skippedFiles(result.skippedFiles));
+  if (result.sweptLeftovers.length > 0) notes.push(faultWords.sweptLeftovers(result.sweptLeftovers));
+  if (Object.keys(result.damagedCache).length > 0)
+    notes.push(faultWords.damagedCache(result.damagedCache));
+  const kept = result.swap.notRemoved;
+  if (kept) notes.push(faultWords.previousNotRemoved(kept.folder, kept.code));
+  return notes.map((note) => `${note}\n`).join('');
+}
+
+/** The port --serve will listen on is free now, or a UsageError says what to change. */
+async function portFree(port: number): Promise<void> {
+  try {
+    await checkPort(port);
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code === 'EADDRINUSE')
+      throw new UsageError(faultWords.portInUse(port));
+    if ((error as NodeJS.ErrnoException).code === 'EACCES')
+      throw new UsageError(faultWords.portNotAllowed(port));
+    throw error;
+  }
+}
+
 function portOption(raw: string | boolean | undefined): number {
   if (raw === undefined || typeof raw === 'boolean') return 8080;
   const port = Number(raw);
@@ -58,6 +84,7 @@ export async function run(argv: string[]): Promise<number> {
   const outDir = typeof values.out === 'string' ? values.out : 'site';
   const port = portOption(values.port);
   await checkOutFolder(contentDir, outDir);
+  if (values.serve) await portFree(port);
   const progress = terminalProgress(process.stderr);
   let result: BuildResult;
   try {
@@ -80,6 +107,7 @@ export async function run(argv: string[]): Promise<number> {
   progress.finish();
   process.stderr.write(warningLines(result));
   process.stderr.write(`${summaryLine(result)}\n`);
+  process.stderr.write(noteLines(result));
   if (values.serve) {
     await serveSite({
       contentDir,

@@ -4,6 +4,12 @@ import { BrewSetupError } from '../brew/errors.ts';
 import { brewWords } from '../words/brew.ts';
 import { issueLine } from '../words/content.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
+import { PageCollisionError } from '../pipeline/cards.ts';
+import { OutFolderError } from '../pipeline/swap.ts';
+import { MIN_MODULE_MM, QR_PRINTED_MM, QrTooDenseError } from '../render/qr-density.ts';
+import { faultWords } from '../words/build-faults.ts';
+import { shown } from '../words/shown.ts';
+import { outFolderMessage } from './out-folder.ts';
 
 /** Wrong flags or arguments: the message says what to type instead. */
 export class UsageError extends Error {
@@ -38,9 +44,39 @@ export function reportError(error: unknown): number {
     process.stderr.write(`stovecard: ${error.message}\n`);
     return 2;
   }
+  if (error instanceof PageCollisionError) {
+    process.stderr.write(
+      `stovecard: ${faultWords.pageCollision(error.page, error.first, error.second)}\n`,
+    );
+    return 2;
+  }
+  if (error instanceof QrTooDenseError) {
+    const d = error.density;
+    process.stderr.write(
+      `stovecard: ${faultWords.qrTooDense(error.url, d.modules, d.moduleMm, QR_PRINTED_MM, MIN_MODULE_MM)}\n`,
+    );
+    return 2;
+  }
+  if (error instanceof OutFolderError) {
+    process.stderr.write(`stovecard: ${outFolderMessage(error.folder, error)}\n`);
+    return 2;
+  }
+  const fsMessage = fileSystemMessage(error);
+  if (fsMessage !== null) {
+    process.stderr.write(`stovecard: ${fsMessage}\n`);
+    return 2;
+  }
   const message = error instanceof Error ? error.message : String(error);
-  process.stderr.write(`stovecard: internal error: ${message}\n`);
+  process.stderr.write(`stovecard: internal error: ${shown(message, 400)}\n`);
   if (process.env.STOVECARD_DEBUG && error instanceof Error)
     process.stderr.write(`${error.stack}\n`);
   return 1;
+}
+
+/** The words for a file-system failure the user can fix (disk full, permissions, …), or null. */
+export function fileSystemMessage(error: unknown): string | null {
+  if (!(error instanceof Error)) return null;
+  const { code, path: file, dest } = error as NodeJS.ErrnoException & { dest?: string };
+  if (typeof code !== 'string' || !faultWords.knownFileSystemCode(code)) return null;
+  return faultWords.fileSystem(code, file ?? dest);
 }

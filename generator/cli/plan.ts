@@ -7,6 +7,7 @@ import type { CardPlan } from '../planning/types.ts';
 import { refusalText, warningText } from '../render/plan-text.ts';
 import { cliWords } from '../words/cli.ts';
 import { bindingCauseText } from '../render/card-view.ts';
+import { faultWords } from '../words/build-faults.ts';
 import { pressure, pressureRough } from '../render/format.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
@@ -33,8 +34,8 @@ export async function run(argv: string[]): Promise<number> {
     coffee: requiredString(values, 'coffee', cliWords.planHelp),
     stove: requiredString(values, 'stove', cliWords.planHelp),
   };
-  const ambientC = numberOption(values, 'ambient-c');
-  const altitudeM = numberOption(values, 'altitude-m');
+  const ambientC = rangedOption(numberOption(values, 'ambient-c'), '--ambient-c', AMBIENT_C);
+  const altitudeM = rangedOption(numberOption(values, 'altitude-m'), '--altitude-m', ALTITUDE_M);
   const presets = typeof values['presets-c'] === 'string' ? parsePresets(values['presets-c']) : undefined;
   const fillMl = numberOption(values, 'fill-ml');
   const [pot, coffee, stove] = await allEntries([
@@ -63,6 +64,20 @@ export async function run(argv: string[]): Promise<number> {
     values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan, pot.valveOpeningAssumed),
   );
   return plan.refused ? 3 : 0;
+}
+
+/** The ranges site.yaml allows for the room (site.schema.json), the flags' too. */
+const AMBIENT_C = { min: 1, max: 45, unit: '°C' } as const;
+const ALTITUDE_M = { min: -500, max: 5000, unit: 'm' } as const;
+
+function rangedOption(
+  value: number | undefined,
+  flag: string,
+  range: { readonly min: number; readonly max: number; readonly unit: string },
+): number | undefined {
+  if (value !== undefined && (value < range.min || value > range.max))
+    throw new UsageError(faultWords.flagOutOfRange(flag, value, range.min, range.max, range.unit));
+  return value;
 }
 
 function parsePresets(raw: string): number[] {
@@ -129,7 +144,7 @@ export function planJson(plan: CardPlan) {
   };
 }
 
-function planSummary(plan: CardPlan, valveAssumed: boolean): string {
+export function planSummary(plan: CardPlan, valveAssumed: boolean): string {
   const j = planJson(plan);
   const cautions = cliWords.planCautions().join('\n') + '\n';
   if (plan.refused) {
@@ -143,7 +158,11 @@ function planSummary(plan: CardPlan, valveAssumed: boolean): string {
     `coffee    ${p.doseG} g, level basket, do not tamp`,
     `heat      ${p.level}`,
     `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
-    `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %)`,
+    `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (${
+      Number.isFinite(p.coldStart.meanC)
+        ? `cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %`
+        : faultWords.coldStartNoCoffee
+    })`,
     `pressure  peak ${p.peakGaugeBar} bar gauge (${p.peakGaugeRangeBar.low}–${p.peakGaugeRangeBar.high} if the inputs are off)`,
     `valve     ${cliWords.planValve(valveText(plan.valveOpeningGaugePa, valveAssumed), valveAssumed)}`,
     ...(plan.bindingCause ? [`why       ${bindingCauseText(plan, 'metric')}`] : []),

@@ -6,8 +6,8 @@
  *     ─▶ logs and site.yaml: the same, plus the ids and levels they name
  *     ─▶ Catalogue, or one ContentErrors listing every issue of every file
  */
-import { readdir, stat } from 'node:fs/promises';
-import { extname, join } from 'node:path';
+import { readdir, realpath, stat } from 'node:fs/promises';
+import { extname, join, relative, isAbsolute } from 'node:path';
 import { message } from './messages.ts';
 import { buildCoffee } from './coffee.ts';
 import { idOfFile, loadEntry, type Checked, type ValidFile } from './entry-file.ts';
@@ -36,6 +36,35 @@ interface ListedFile {
 interface Listing {
   readonly files: readonly ListedFile[];
   readonly issues: readonly ContentIssue[];
+  /** Editor lock and backup files and dotfiles, passed over (relative paths). */
+  readonly skipped: readonly string[];
+}
+
+/** An entry file's extension, in any case: `.yaml`, `.YAML`, `.yml`. */
+function isYamlName(name: string): boolean {
+  return ['.yaml', '.yml'].includes(extname(name).toLowerCase());
+}
+
+/**
+ * Files an editor or a file system leaves beside the real ones: dotfiles (`.x.yaml.swp`,
+ * Emacs locks `.#x.yaml`, macOS `._x.yaml`), backups `x.yaml~`, Emacs autosaves `#x.yaml#`.
+ */
+function isEditorFile(name: string): boolean {
+  return name.startsWith('.') || name.endsWith('~') || (name.startsWith('#') && name.endsWith('#'));
+}
+
+/** True when the real place of `file` is inside the content folder `root` (real path). */
+async function staysInside(root: string, file: string): Promise<boolean> {
+  try {
+    const rel = relative(root, await realpath(file));
+    return rel !== '' && !rel.startsWith('..') && !isAbsolute(rel);
+  } catch {
+    return true; // a broken link: reported as unreadable where it is read
+  }
+}
+
+function linkOutside(file: string): ContentIssue {
+  return new ContentIssue('link-outside', wholeFile(file), message('linkOutside'));
 }
 
 function unreadable(file: string, error: unknown): ContentIssue {
@@ -46,29 +75,42 @@ function unreadable(file: string, error: unknown): ContentIssue {
 const compare = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
 
 /** The entry files of one folder (none when it does not exist), and problems with their names. */
-async function listFolder(contentDir: string, kind: FolderKind): Promise<Listing> {
+async function listFolder(contentDir: string, kind: FolderKind, root: string): Promise<Listing> {
   const folder = FOLDERS[kind];
   let names: string[];
   const issues: ContentIssue[] = [];
+  const skipped: string[] = [];
   try {
     const entries = await readdir(join(contentDir, folder), { withFileTypes: true });
-    names = entries.filter((entry) => entry.isFile()).map((entry) => entry.name);
-    // A link to a shared entry file counts as that file; a broken or looping link is an issue.
-    for (const entry of entries.filter((each) => each.isSymbolicLink())) {
-      if (!['.yaml', '.yml'].includes(extname(entry.name))) continue;
+    for (const entry of entries) {
+      if (isEditorFile(entry.name) && (entry.isFile() || entry.isSymbolicLink())) {
+        if (entry.name.toLowerCase().includes('.y')) skipped.push(`${folder}/${entry.name}`);
+      }
+    }
+    const listed = entries.filter((entry) => !isEditorFile(entry.name));
+    names = listed.filter((entry) => entry.isFile()).map((entry) => entry.name);
+    // A link to a shared entry file inside the content folder counts as that file; a link
+    // that leaves the folder is not followed; a broken or looping link is an issue.
+    for (const entry of listed.filter((each) => each.isSymbolicLink())) {
+      if (!isYamlName(entry.name)) continue;
+      const full = join(contentDir, folder, entry.name);
+      if (!(await staysInside(root, full))) {
+        issues.push(linkOutside(`${folder}/${entry.name}`));
+        continue;
+      }
       try {
-        if ((await stat(join(contentDir, folder, entry.name))).isFile()) names.push(entry.name);
+        if ((await stat(full)).isFile()) names.push(entry.name);
       } catch (error) {
         issues.push(unreadable(`${folder}/${entry.name}`, error));
       }
     }
   } catch (error) {
-    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return { files: [], issues: [] };
-    return { files: [], issues: [unreadable(folder, error)] };
+    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return { files: [], issues: [], skipped };
+    return { files: [], issues: [unreadable(folder, error)], skipped };
   }
   const files: ListedFile[] = [];
   const fileOfId = new Map<string, string>();
-  const yamlNames = names.filter((each) => ['.yaml', '.yml'].includes(extname(each)));
+  const yamlNames = names.filter(isYamlName);
   // By id, then by name: ids come out sorted even where `a-b.yaml` sorts before `a.yaml`.
   const listing = yamlNames
     .map((name) => ({
@@ -100,7 +142,7 @@ async function listFolder(contentDir: string, kind: FolderKind): Promise<Listing
       files.push(listed);
     }
   }
-  return { files, issues };
+  return { files, issues, skipped };
 }
 
 interface Loaded<E> {
@@ -129,12 +171,14 @@ export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
   } catch (error) {
     throw new ContentErrors([unreadable(contentDir, error)]);
   }
+  const root = await realpath(contentDir).catch(() => contentDir);
   const [pots, coffees, stoves, logs] = await Promise.all([
-    listFolder(contentDir, 'pot'),
-    listFolder(contentDir, 'coffee'),
-    listFolder(contentDir, 'stove'),
-    listFolder(contentDir, 'log'),
+    listFolder(contentDir, 'pot', root),
+    listFolder(contentDir, 'coffee', root),
+    listFolder(contentDir, 'stove', root),
+    listFolder(contentDir, 'log', root),
   ]);
+  const siteLeaves = rootNames.includes(SITE_FILE) && !(await staysInside(root, join(contentDir, SITE_FILE)));
   const idsOf = (listing: Listing): string[] => listing.files.map((each) => each.id);
   const known: KnownIds = { pot: idsOf(pots), coffee: idsOf(coffees), stove: idsOf(stoves) };
 
@@ -151,7 +195,9 @@ export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
   };
   const [logEntries, site] = await Promise.all([
     loadAll('log', logs.files, (file: ValidFile<LogYaml>) => buildLog(file, references)),
-    rootNames.includes(SITE_FILE)
+    siteLeaves
+      ? { issues: [linkOutside(SITE_FILE)] }
+      : rootNames.includes(SITE_FILE)
       ? loadEntry('site', join(contentDir, SITE_FILE), SITE_FILE, (file: ValidFile<SiteYaml>) =>
           buildSite(file, known),
         )
@@ -171,5 +217,6 @@ export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
     coffees: coffeeEntries.entries,
     stoves: stoveEntries.entries,
     logs: logEntries.entries,
+    skipped: [pots, coffees, stoves, logs].flatMap((each) => each.skipped),
   };
 }

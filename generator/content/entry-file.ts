@@ -30,6 +30,35 @@ export function idOfFile(path: string): string {
   return basename(path, extname(path));
 }
 
+/**
+ * Control characters (but tab and line ends) and the bidirectional overrides, embeddings
+ * and isolates (U+202A–U+202E, U+2066–U+2069; UAX #9) in keys or text: they would print
+ * raw on a terminal or reorder a card's text (a right-to-left override turns a footer
+ * around), so each is an issue at its place. At most MAX_UNSAFE per file.
+ */
+const UNSAFE_TEXT = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
+const MAX_UNSAFE = 20;
+
+function unsafeTextIssues(value: unknown, source: YamlSource): ContentIssue[] {
+  const issues: ContentIssue[] = [];
+  const visit = (node: unknown, path: (string | number)[]): void => {
+    if (issues.length >= MAX_UNSAFE) return;
+    if (typeof node === 'string') {
+      const found = UNSAFE_TEXT.exec(node);
+      if (found) issues.push(issueAt(source, path, 'bad-value', message('unsafeCharacter', found[0].codePointAt(0)!)));
+    } else if (Array.isArray(node)) node.forEach((item, i) => visit(item, [...path, i]));
+    else if (node && typeof node === 'object')
+      for (const [key, item] of Object.entries(node)) {
+        const found = UNSAFE_TEXT.exec(key);
+        if (found)
+          issues.push(issueAt(source, [...path, key], 'bad-value', message('unsafeCharacter', found[0].codePointAt(0)!), 'key'));
+        else visit(item, [...path, key]);
+      }
+  };
+  visit(value, []);
+  return issues;
+}
+
 /** Read `path` (named `file` in messages) and check it against the `schema` schema. */
 async function readValidFile<T>(
   schema: SchemaName,
@@ -38,16 +67,32 @@ async function readValidFile<T>(
 ): Promise<Checked<ValidFile<T>>> {
   const read = await readContentText(path, file);
   if (!read.ok) return { issues: [read.issue] };
+  return validText<T>(schema, read.text, read.hash, idOfFile(path), file);
+}
+
+/** Text already read (named `file`, its entry `id`) checked against the `schema` schema. */
+export function validText<T>(
+  schema: SchemaName,
+  text: string,
+  hash: string,
+  id: string,
+  file: string,
+): Checked<ValidFile<T>> {
+  const read = { text, hash };
   const parsed = parseYamlSource(read.text, file);
   if (parsed.value === undefined && parsed.issues.length > 0) return { issues: parsed.issues };
   if (parsed.value === null || parsed.value === undefined) {
     return { issues: [issueAt(parsed.source, [], 'empty-file', message('emptyFile', schema))] };
   }
-  const issues = [...parsed.issues, ...schemaIssues(schema, parsed.value, parsed.source)];
+  const issues = [
+    ...parsed.issues,
+    ...unsafeTextIssues(parsed.value, parsed.source),
+    ...schemaIssues(schema, parsed.value, parsed.source),
+  ];
   if (issues.length > 0) return { issues };
   const data = parsed.value as T;
   return {
-    value: { id: idOfFile(path), hash: read.hash, source: parsed.source, data },
+    value: { id, hash: read.hash, source: parsed.source, data },
     issues: [],
   };
 }

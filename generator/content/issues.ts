@@ -29,7 +29,10 @@ export type ContentIssueCode =
   | 'repeated'
   | 'unknown-id'
   | 'unknown-level'
-  | 'layout';
+  | 'layout'
+  | 'more-problems'
+  | 'skipped-file'
+  | 'link-outside';
 
 export interface IssueLocation {
   /** As shown to the person: relative to the content folder, or the path as given. */

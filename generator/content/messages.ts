@@ -26,6 +26,10 @@ export type ContentKindName = 'pot' | 'coffee' | 'stove' | 'log' | 'site';
 /** Every content message: its key and the facts its words take. */
 export interface ContentMessageArgs {
   readonly fileTooLarge: readonly [sizeBytes: number, limitBytes: number];
+  readonly unsafeCharacter: readonly [codePoint: number];
+  readonly badBaseUrl: readonly [problem: string, maxLength: number];
+  readonly linkOutside: readonly [];
+  readonly moreProblems: readonly [count: number];
   readonly notUtf8: readonly [];
   readonly unreadable: readonly [reason: string];
   readonly missingSiteFile: readonly [];

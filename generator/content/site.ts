@@ -208,6 +208,11 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
       source: refAt(source, path),
     };
   });
+  if (data.base_url !== undefined) {
+    const problem = baseUrlProblem(data.base_url);
+    if (problem !== null)
+      issues.push(issueAt(source, ['base_url'], 'bad-value', message('badBaseUrl', problem, MAX_BASE_URL)));
+  }
   if (issues.length > 0) return { issues };
   const baseUrl =
     data.base_url === undefined || data.base_url.endsWith('/')
@@ -227,4 +232,31 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
     sets,
   };
   return { value: entry, issues: [] };
+}
+
+/**
+ * At most this many characters: a card's address adds `cards/<pot>--<coffee>--<stove>/`,
+ * and the QR code of a longer address needs more, smaller modules on the same 13 mm.
+ */
+export const MAX_BASE_URL = 100;
+
+export type BaseUrlProblem = 'not-a-url' | 'scheme' | 'query' | 'fragment' | 'credentials' | 'too-long';
+
+/**
+ * What is wrong with a base address, or null. A `?query` or `#fragment` would follow every
+ * card's path (so every QR code would open the same page); user:password would be printed.
+ */
+export function baseUrlProblem(raw: string): BaseUrlProblem | null {
+  if (raw.length > MAX_BASE_URL) return 'too-long';
+  let url: URL;
+  try {
+    url = new URL(raw);
+  } catch {
+    return 'not-a-url';
+  }
+  if (url.protocol !== 'https:' && url.protocol !== 'http:') return 'scheme';
+  if (raw.includes('?')) return 'query';
+  if (raw.includes('#')) return 'fragment';
+  if (url.username !== '' || url.password !== '') return 'credentials';
+  return null;
 }

@@ -143,4 +143,6 @@ export interface Catalogue {
   readonly coffees: ReadonlyMap<string, CoffeeEntry>;
   readonly stoves: ReadonlyMap<string, StoveEntry>;
   readonly logs: ReadonlyMap<string, LogEntry>;
+  /** Files passed over: editor lock and backup files, dotfiles (relative paths; catalogue.ts). */
+  readonly skipped?: readonly string[];
 }

@@ -16,6 +16,8 @@ import {
   type Node,
   type Pair,
   type YAMLError,
+  visit,
+  YAMLParseError,
 } from 'yaml';
 import { message, type ContentMessage } from './messages.ts';
 import { ContentIssue, type ContentIssueCode, type IssueLocation } from './issues.ts';
@@ -59,6 +61,24 @@ function tooDeepAt(source: YamlSource, offset: number): ContentIssue {
   return new ContentIssue('too-deep', at, message('nestedTooDeeply'));
 }
 
+/** A repeated key in any mapping of the document, as the yaml package's own error for it. */
+function duplicateKeyErrors(doc: Document.Parsed): YAMLError[] {
+  const errors: YAMLError[] = [];
+  visit(doc, {
+    Map(_key, map) {
+      const seen = new Set<unknown>();
+      for (const pair of map.items) {
+        const key = isScalar(pair.key) ? pair.key.value : pair.key;
+        if (seen.has(key)) {
+          const range = (pair.key as Node | null)?.range ?? [0, 0, 0];
+          errors.push(new YAMLParseError([range[0], range[1]], 'DUPLICATE_KEY', 'Map keys must be unique'));
+        } else seen.add(key);
+      }
+    },
+  });
+  return errors;
+}
+
 /** The same problem at the same place once (the yaml package can repeat an error per level). */
 function uniqueIssues(issues: readonly ContentIssue[]): ContentIssue[] {
   const seen = new Set<string>();
@@ -76,9 +96,14 @@ function uniqueIssues(issues: readonly ContentIssue[]): ContentIssue[] {
  */
 export function parseYamlSource(text: string, file: string): ParsedYaml {
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter, prettyErrors: true, uniqueKeys: true });
-  const source: YamlSource = { file, text, doc, lineCounter };
-  const problems = [...doc.errors, ...doc.warnings];
+  // CR-only line ends (old Mac editors) as the line feeds YAML 1.2 reads (§5.4); the
+  // offsets do not move, so lines and columns stay the file's.
+  const yamlText = text.includes('\r') && !text.includes('\n') ? text.replaceAll('\r', '\n') : text;
+  // uniqueKeys compares every key with every earlier one (quadratic: a 1 MiB file of
+  // 76,000 keys took minutes); duplicateKeyErrors finds the same keys with a Set.
+  const doc = parseDocument(yamlText, { lineCounter, prettyErrors: true, uniqueKeys: false });
+  const source: YamlSource = { file, text: yamlText, doc, lineCounter };
+  const problems = [...doc.errors, ...doc.warnings, ...duplicateKeyErrors(doc)];
   // Nesting deep enough to overflow the parser's stack (10,000 `[`) makes the yaml package
   // report the overflow, and often hundreds of follow-on errors at the same place: one
   // issue says it instead.

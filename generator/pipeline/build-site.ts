@@ -19,18 +19,28 @@ import path from 'node:path';
 import { loadCatalogue } from '../content/index.ts';
 import type { Catalogue } from '../content/types.ts';
 import type { SiteData } from '../render/site-view.ts';
+import { insertPaths, stationPaths } from '../render/paths.ts';
+import { checkQrDensity } from '../render/qr-density.ts';
 import { buildDate } from './build-date.ts';
 import { expandCards, type CardJobs } from './cards.ts';
 import { writePages } from './pages.ts';
 import { planAll, type PlannedCard } from './plan-all.ts';
-import { sweepCacheFolders } from './file-cache.ts';
+import { damagedCounts, sweepCacheFolders } from './file-cache.ts';
 import { PlanCache } from './plan-cache.ts';
 import { WorkerPool } from './pool.ts';
 import type { ProgressListener } from './progress.ts';
 import { RenderCache } from './render-cache.ts';
 import { renderSite, type ViewText } from './site-data.ts';
 import { emptyStats, timedPhase, type BuildStats } from './stats.ts';
-import { discard, freshTempDir, swapIn } from './swap.ts';
+import {
+  checkReplaceable,
+  discard,
+  freshTempDir,
+  recoverLeftovers,
+  resolveOut,
+  swapIn,
+  type SwapReport,
+} from './swap.ts';
 
 export { planAll, type PlannedCard, type PlanOptions } from './plan-all.ts';
 export { siteData, renderSite, type RenderOptions, type ViewText } from './site-data.ts';
@@ -94,6 +104,14 @@ export interface BuildResult {
   readonly durationMs: number;
   readonly data: SiteData;
   readonly stats: BuildStats;
+  /** What the swap did (the folder now in place, the previous one if it could not go). */
+  readonly swap: SwapReport;
+  /** Names of what killed builds had left beside <out>, removed by this one. */
+  readonly sweptLeftovers: readonly string[];
+  /** Content files passed over (editor lock and backup files, dotfiles). */
+  readonly skippedFiles: readonly string[];
+  /** Cached files that failed their hash check and were made again, by cache folder. */
+  readonly damagedCache: Readonly<Record<string, number>>;
 }
 
 const noProgress: ProgressListener = () => {};
@@ -118,10 +136,22 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
   const ownPool = options.pool === undefined && workers > 0;
   const pool = options.pool ?? (ownPool ? new WorkerPool({ size: workers }) : null);
   try {
+    // Before any work: a folder that is not ours is refused now, not after the build.
+    const out = await resolveOut(outDir);
+    const sweptLeftovers = await recoverLeftovers(out);
+    await checkReplaceable(out);
+    damagedCounts(cacheDir); // counted from here: this build's damaged files
     onProgress({ phase: 'load', done: 0, total: 0 });
     const { catalogue, jobs } = await timedPhase(stats, 'load', async () => {
       const catalogue = await loadCatalogue(options.contentDir);
-      return { catalogue, jobs: expandCards(catalogue) };
+      const jobs = expandCards(catalogue);
+      const baseUrl = catalogue.site.baseUrl;
+      if (baseUrl)
+        checkQrDensity([
+          ...jobs.stations.map((job) => stationPaths(job.request, baseUrl).webUrl!),
+          ...jobs.inserts.map((job) => insertPaths(job.slug, baseUrl).webUrl!),
+        ]);
+      return { catalogue, jobs };
     });
     const plans = await timedPhase(stats, 'plan', () =>
       planAll(catalogue, jobs, new PlanCache(cacheDir), onProgress, { pool, stats }),
@@ -132,7 +162,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
       renderSite(catalogue, jobs, plans, builtOn, onProgress, { pool, renderCache, stats }),
     );
 
-    const siteDir = await freshTempDir(outDir);
+    const siteDir = await freshTempDir(out);
+    let swap: SwapReport;
     try {
       onProgress({ phase: 'write', done: 0, total: 0 });
       await timedPhase(stats, 'write', () =>
@@ -158,7 +189,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
         await timedPhase(stats, 'steps', () => step(context));
       }
       onProgress({ phase: 'swap', done: 0, total: 0 });
-      await timedPhase(stats, 'swap', () => swapIn(siteDir, outDir));
+      swap = await timedPhase(stats, 'swap', () => swapIn(siteDir, out));
     } catch (error) {
       await discard(siteDir);
       throw error;
@@ -183,6 +214,10 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
       durationMs: performance.now() - started,
       data,
       stats,
+      swap,
+      sweptLeftovers,
+      skippedFiles: catalogue.skipped ?? [],
+      damagedCache: damagedCounts(cacheDir),
     };
   } finally {
     if (ownPool) await pool?.close();

@@ -10,7 +10,7 @@
  */
 import type { CardRequest, Catalogue } from '../content/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
-import { stationSlug } from '../render/paths.ts';
+import { insertPaths, insertSlug, setPaths, stationPaths, stationSlug } from '../render/paths.ts';
 
 export interface StationCardJob {
   readonly slug: string;
@@ -81,7 +81,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
     for (const coffeeId of set.coffeeIds) {
       const rows = insertRows(catalogue, set.cards, coffeeId);
       for (const row of rows) addStation(row, null);
-      const slug = insertSlugs.has(coffeeId) ? `${coffeeId}--${set.id}` : coffeeId;
+      const slug = insertSlug(coffeeId, insertSlugs.has(insertSlug(coffeeId, null)) ? set.id : null);
       insertSlugs.add(slug);
       inserts.push({ setId: set.id, coffeeId, slug, rows });
       slugs.push(slug);
@@ -94,11 +94,53 @@ export function expandCards(catalogue: Catalogue): CardJobs {
       cardSlugs: slugs,
     });
   }
-  return {
+  const jobs = {
     sets,
     stations: [...stations.entries()].map(([slug, job]) => ({ slug, ...job })),
     inserts,
   };
+  checkPageNames(jobs);
+  return jobs;
+}
+
+/** Two cards or sets that would be written to one page (pagePart makes it impossible). */
+export class PageCollisionError extends Error {
+  override readonly name = 'PageCollisionError';
+  constructor(
+    readonly page: string,
+    readonly first: string,
+    readonly second: string,
+  ) {
+    super(`page collision: ${page}`);
+  }
+}
+
+/** Throws PageCollisionError naming both entries when two jobs share a page file. */
+export function checkPageNames(jobs: CardJobs): void {
+  const owners = new Map<string, string>();
+  const claim = (page: string, owner: string) => {
+    const key = page.toLowerCase(); // one file on a case-insensitive disk, too
+    const first = owners.get(key);
+    if (first !== undefined && first !== owner) throw new PageCollisionError(page, first, owner);
+    owners.set(key, owner);
+  };
+  for (const { request } of jobs.stations) {
+    const owner = `pot ${request.potId} × coffee ${request.coffeeId} × stove ${request.stoveId}`;
+    const paths = stationPaths(request);
+    claim(paths.pageFile, owner);
+    claim(paths.pdfFile, owner);
+  }
+  for (const job of jobs.inserts) {
+    const owner = `insert of coffee ${job.coffeeId} in set ${job.setId}`;
+    const paths = insertPaths(job.slug);
+    claim(paths.pageFile, owner);
+    claim(paths.pdfFile, owner);
+  }
+  for (const set of jobs.sets) {
+    const paths = setPaths(set.id);
+    claim(paths.pageFile, `set ${set.id}`);
+    claim(paths.pdfFile, `set ${set.id}`);
+  }
 }
 
 /** Rows of one coffee's insert: a pot × heat kind each, pots by size, then gas, electric, induction. */

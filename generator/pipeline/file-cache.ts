@@ -1,9 +1,10 @@
 /**
- * A folder of files named by a key (a hex sha256 of what made them): `<dir>/<key><ext>`.
+ * A folder of files named by a key (a hex sha256 of what made them): `<dir>/<key><ext>`,
+ * each with its own check file `<dir>/<key><ext>.sha256` ("<sha256 of the bytes> <size>").
  * The plan, view, page and PDF caches are each one of these. Writes go to a temporary
- * name and are renamed, so a crash never leaves half a file; a file that cannot be read
- * is a miss (and so is a copy of one that does not end as its kind must), so a damaged
- * cache only costs a re-render.
+ * name and are renamed, so a crash never leaves half a file; every read checks the bytes
+ * against the check file, and a file that fails (cut short or overwritten) is a miss that the build makes again and counts (damagedCounts), so a damaged
+ * cache costs a re-render and a line in the build's report, never a wrong site.
  *
  * Eviction (sweepCacheFolders, after each successful build): a file no cache of its folder
  * has read or written in this process since the folder's last sweep, and not written for
@@ -11,27 +12,23 @@
  * week (an undo rebuilds from the cache), then goes; so the cache holds the site plus a
  * week of edits, not every version ever built.
  */
-import { constants, readFileSync } from 'node:fs';
-import {
-  access,
-  copyFile,
-  mkdir,
-  open,
-  readdir,
-  readFile,
-  rename,
-  stat,
-  unlink,
-  writeFile,
-} from 'node:fs/promises';
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { access, mkdir, readdir, readFile, rename, stat, unlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 
 let writes = 0;
 
 export const CACHE_GRACE_DAYS = 7;
 
+/** The check file's extension, after the cached file's own. */
+export const CHECK_EXT = '.sha256';
+
 /** File names read or written since the last sweep, by folder (shared by its caches). */
 const usedNames = new Map<string, Set<string>>();
+
+/** Files that failed their check since the counts were last taken, by folder. */
+const damaged = new Map<string, number>();
 
 function usedIn(dir: string): Set<string> {
   let names = usedNames.get(dir);
@@ -42,44 +39,76 @@ function usedIn(dir: string): Set<string> {
   return names;
 }
 
+/** The check text of `data`: its sha256 and its length in bytes. */
+export function checkText(data: Uint8Array): string {
+  return `${createHash('sha256').update(data).digest('hex')} ${data.length}\n`;
+}
+
+/**
+ * Files that failed their check in the folders under `cacheDir` since the last call, by
+ * folder name ("plans", "pdfs", …); the counts start again from zero.
+ */
+export function damagedCounts(cacheDir: string): Record<string, number> {
+  const root = path.resolve(cacheDir);
+  const out: Record<string, number> = {};
+  for (const [dir, count] of damaged) {
+    if (path.dirname(dir) !== root || count === 0) continue;
+    out[path.basename(dir)] = count;
+    damaged.delete(dir);
+  }
+  return out;
+}
+
 export class FileCache {
   readonly dir: string;
   private made: Promise<unknown> | null = null;
 
   private readonly used: Set<string>;
 
-  /**
-   * `ending`: how every whole file of this cache ends (a PDF's `%%EOF`, a page's `</html>`);
-   * a file that does not is damaged, and copyTo treats it as a miss.
-   */
   constructor(
     dir: string,
     private readonly ext: string,
-    private readonly ending?: string,
   ) {
     this.dir = path.resolve(dir);
     this.used = usedIn(this.dir);
   }
 
-  /** The key's file, counted as used (a sweep keeps it). */
+  /** The key's file, counted as used with its check file (a sweep keeps them). */
   file(key: string): string {
     const name = `${key}${this.ext}`;
     this.used.add(name);
+    this.used.add(`${name}${CHECK_EXT}`);
     return path.join(this.dir, name);
   }
 
-  async getText(key: string): Promise<string | null> {
-    try {
-      return await readFile(this.file(key), 'utf8');
-    } catch {
-      return null;
-    }
+  /** The bytes when they pass their check; null when absent; a failed check counts. */
+  private verified(data: Buffer | null, check: string | null): Buffer | null {
+    // Either missing: not cached (a file from before checks were kept has none).
+    if (data === null || check === null) return null;
+    if (checkText(data) === check) return data;
+    damaged.set(this.dir, (damaged.get(this.dir) ?? 0) + 1);
+    return null;
   }
 
-  /** For callers that read the file later, and only if they need it. */
+  /** The key's bytes, checked; null when absent or damaged. */
+  async getBytes(key: string): Promise<Buffer | null> {
+    const file = this.file(key);
+    const [data, check] = await Promise.all([
+      readFile(file).catch(() => null),
+      readFile(`${file}${CHECK_EXT}`, 'latin1').catch(() => null),
+    ]);
+    return this.verified(data, check);
+  }
+
+  async getText(key: string): Promise<string | null> {
+    return (await this.getBytes(key))?.toString('utf8') ?? null;
+  }
+
+  /** For callers that read the file later, and only if they need it (reads check it). */
   async has(key: string): Promise<boolean> {
     try {
-      await access(this.file(key));
+      const file = this.file(key);
+      await Promise.all([access(file), access(`${file}${CHECK_EXT}`)]);
       return true;
     } catch {
       return false;
@@ -87,49 +116,42 @@ export class FileCache {
   }
 
   getTextSync(key: string): string | null {
-    try {
-      return readFileSync(this.file(key), 'utf8');
-    } catch {
-      return null;
-    }
+    const file = this.file(key);
+    const read = <T>(f: () => T): T | null => {
+      try {
+        return f();
+      } catch {
+        return null;
+      }
+    };
+    const data = read(() => readFileSync(file));
+    const check = read(() => readFileSync(`${file}${CHECK_EXT}`, 'latin1'));
+    return this.verified(data, check)?.toString('utf8') ?? null;
   }
 
   async put(key: string, data: string | Uint8Array): Promise<void> {
     this.made ??= mkdir(this.dir, { recursive: true });
     await this.made;
-    const tmp = `${this.file(key)}.tmp-${process.pid}-${writes++}`;
-    await writeFile(tmp, data);
-    await rename(tmp, this.file(key));
+    const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+    const file = this.file(key);
+    const tmp = `${file}.tmp-${process.pid}-${writes++}`;
+    // The check first: a crash between the two renames leaves a file that fails it.
+    await writeFile(tmp, checkText(bytes));
+    await rename(tmp, `${file}${CHECK_EXT}`);
+    await writeFile(tmp, bytes);
+    await rename(tmp, file);
   }
 
   /**
-   * Copies the cached file to `target` (a copy-on-write clone where the file system has
-   * them); false when the key is not cached. A copy, not a hard link: a site file edited
-   * in place must not change the cache.
+   * Writes the cached file's bytes to `target` when they pass their check; false when the
+   * key is not cached or its file is damaged. A copy of the bytes checked, so what lands
+   * in the site is what was verified.
    */
   async copyTo(key: string, target: string): Promise<boolean> {
-    try {
-      const file = this.file(key);
-      if (this.ending !== undefined && !(await endsWith(file, this.ending))) return false;
-      await copyFile(file, target, constants.COPYFILE_FICLONE);
-      return true;
-    } catch (error) {
-      if ((error as NodeJS.ErrnoException).code === 'ENOENT') return false;
-      throw error;
-    }
-  }
-}
-
-/** True when the file's last bytes, trailing white space aside, are `ending`. */
-async function endsWith(file: string, ending: string): Promise<boolean> {
-  const handle = await open(file, 'r');
-  try {
-    const { size } = await handle.stat();
-    const tail = Buffer.alloc(Math.min(size, ending.length + 16));
-    await handle.read(tail, 0, tail.length, size - tail.length);
-    return tail.toString('latin1').trimEnd().endsWith(ending);
-  } finally {
-    await handle.close();
+    const bytes = await this.getBytes(key);
+    if (bytes === null) return false;
+    await writeFile(target, bytes);
+    return true;
   }
 }
 
@@ -159,7 +181,10 @@ export async function sweepCacheFolders(
     } catch {
       continue;
     }
+    const present = new Set(names);
     for (const name of names) {
+      // A check file goes with its file (and alone only when its file is gone).
+      if (name.endsWith(CHECK_EXT) && present.has(name.slice(0, -CHECK_EXT.length))) continue;
       if (used.has(name)) {
         kept++;
         continue;
@@ -168,6 +193,8 @@ export async function sweepCacheFolders(
       try {
         if ((await stat(file)).mtimeMs < oldest) {
           await unlink(file);
+          if (present.has(`${name}${CHECK_EXT}`))
+            await unlink(`${file}${CHECK_EXT}`).catch(() => {});
           deleted++;
         } else kept++;
       } catch {

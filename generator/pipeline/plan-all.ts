@@ -75,7 +75,10 @@ class PlanText implements PlannedCard {
 
   /** A cache file damaged or removed since the lookup: the same plan, made here. */
   private replan(): string {
-    return planToJson(planCard(this.planRequest));
+    const text = planToJson(planCard(this.planRequest));
+    // Back into the cache, so the next build finds it whole (a failed write costs a re-plan).
+    void this.cache.putJson(this.key, text).catch(() => {});
+    return text;
   }
 }
 

@@ -77,8 +77,8 @@ export class RenderCache {
 
   constructor(cacheDir: string) {
     this.views = new FileCache(path.join(cacheDir, 'views'), '.json');
-    this.pages = new FileCache(path.join(cacheDir, 'pages'), '.html', '</html>');
-    this.pdfs = new FileCache(path.join(cacheDir, 'pdfs'), '.pdf', '%%EOF');
+    this.pages = new FileCache(path.join(cacheDir, 'pages'), '.html');
+    this.pdfs = new FileCache(path.join(cacheDir, 'pdfs'), '.pdf');
   }
 
   /** The cached view, or null when absent or unreadable. */

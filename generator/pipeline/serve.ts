@@ -76,8 +76,37 @@ const TYPES: Record<string, string> = {
   '.json': 'application/json',
 };
 
-async function fileFor(root: string, urlPath: string): Promise<string | null> {
-  const clean = decodeURIComponent(urlPath.split('?')[0] ?? '/');
+/** The URL path decoded, or null when it is not valid percent-encoding (`/%zz`). */
+function decodedPath(urlPath: string): string | null {
+  try {
+    const clean = decodeURIComponent(urlPath.split(/[?#]/)[0] ?? '/');
+    return clean.includes('\0') ? null : clean;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The bytes of the site's file for `url`, or null. A request that lands during a swap
+ * may find the file's version removed between the lookup and the read: it is looked up
+ * again through `<out>`, which by then names the new version.
+ */
+async function siteFile(root: string, url: string): Promise<{ file: string; body: Buffer } | null> {
+  const clean = decodedPath(url);
+  if (clean === null) return null;
+  for (let attempt = 0; attempt < 3; attempt++) {
+    const file = await fileFor(root, clean);
+    if (!file) return null;
+    try {
+      return { file, body: await readFile(file) };
+    } catch {
+      // Removed under us (a swap): try again.
+    }
+  }
+  return null;
+}
+
+async function fileFor(root: string, clean: string): Promise<string | null> {
   const target = path.resolve(root, `.${clean}`);
   if (target !== root && !target.startsWith(root + path.sep)) return null;
   try {
@@ -103,16 +132,26 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
       req.on('close', () => clients.delete(res));
       return;
     }
-    const file = await fileFor(root, req.url ?? '/');
-    if (!file) {
-      res.writeHead(404, { 'content-type': 'text/plain' }).end('not found');
-      return;
+    try {
+      if (decodedPath(req.url ?? '/') === null) {
+        res.writeHead(400, { 'content-type': 'text/plain' }).end('bad request');
+        return;
+      }
+      const found = await siteFile(root, req.url ?? '/');
+      if (!found) {
+        res.writeHead(404, { 'content-type': 'text/plain' }).end('not found');
+        return;
+      }
+      const type = TYPES[path.extname(found.file)] ?? 'application/octet-stream';
+      let body: Buffer | string = found.body;
+      if (type.startsWith('text/html'))
+        body = body.toString('utf8').replace('</body>', `${injected(failure)}</body>`);
+      res.writeHead(200, { 'content-type': type, 'cache-control': 'no-store' }).end(body);
+    } catch {
+      // Whatever one request meets, the server goes on serving the others.
+      if (!res.headersSent) res.writeHead(500, { 'content-type': 'text/plain' });
+      res.end('server error');
     }
-    const type = TYPES[path.extname(file)] ?? 'application/octet-stream';
-    let body: Buffer | string = await readFile(file);
-    if (type.startsWith('text/html'))
-      body = body.toString('utf8').replace('</body>', `${injected(failure)}</body>`);
-    res.writeHead(200, { 'content-type': type, 'cache-control': 'no-store' }).end(body);
   });
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
@@ -209,4 +248,17 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
       await new Promise<void>((resolve) => server.close(() => resolve()));
     },
   };
+}
+
+/**
+ * Throws an error with code EADDRINUSE (or EACCES) when `port` cannot be listened on at
+ * 127.0.0.1, so `build --serve` can say so before the build rather than after it.
+ */
+export async function checkPort(port: number): Promise<void> {
+  const probe = http.createServer();
+  await new Promise<void>((resolve, reject) => {
+    probe.once('error', reject);
+    probe.listen(port, '127.0.0.1', () => resolve());
+  });
+  await new Promise<void>((resolve) => probe.close(() => resolve()));
 }

@@ -5,6 +5,7 @@
  *   index.html                                  every card, by set
  *   sets/<set>/index.html                       one set
  *   cards/<pot>--<coffee>--<stove>/index.html   a station card   (+ cards/<…>.pdf)
+ *     (ids holding `--` are escaped so no two cards share a name: pagePart)
  *   inserts/<coffee>/index.html                 an insert card   (+ inserts/<coffee>.pdf)
  *   method/index.html, troubleshooting/index.html
  */
@@ -21,8 +22,31 @@ export interface CardPaths {
   readonly webUrl: string | null;
 }
 
+/**
+ * An id as a part of a page name that joins ids with `--`. Ids match
+ * `^[a-z0-9][a-z0-9-]*$`, so they may hold `--` themselves (pot `p--x` × coffee `c` and
+ * pot `p` × coffee `x--c` would both be `p--x--c`). A run of k ≥ 2 dashes is written as
+ * `-` followed by k − 1 times `_-` (`_` is never in an id), so a part never holds `--`
+ * and ends in at most one `-`, and a joined name splits back one way only: at each run
+ * of two dashes, or of three after a part ending in `-`. Ids without `--` (all the
+ * usual ones) are their own part, so their addresses do not change.
+ */
+export function pagePart(id: string): string {
+  return id.replace(/-{2,}/g, (run) => `-${'_-'.repeat(run.length - 1)}`);
+}
+
+/** The ids joined into one page name, collision-free (pagePart). The one naming function. */
+export function pageName(...ids: readonly string[]): string {
+  return ids.map(pagePart).join('--');
+}
+
 export function stationSlug(request: CardRequest): string {
-  return `${request.potId}--${request.coffeeId}--${request.stoveId}`;
+  return pageName(request.potId, request.coffeeId, request.stoveId);
+}
+
+/** An insert's page name: the coffee's, or coffee and set when an earlier set took it. */
+export function insertSlug(coffeeId: string, setId: string | null): string {
+  return setId === null ? pageName(coffeeId) : pageName(coffeeId, setId);
 }
 
 function paths(folder: string, baseUrl: string | undefined): CardPaths {
@@ -44,7 +68,7 @@ export function insertPaths(slug: string, baseUrl?: string): CardPaths {
 }
 
 export function setPaths(setId: string, baseUrl?: string): CardPaths {
-  return paths(`sets/${setId}`, baseUrl);
+  return paths(`sets/${pageName(setId)}`, baseUrl);
 }
 
 /** Joins the site's base address and a site-relative path with exactly one slash. */

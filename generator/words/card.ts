@@ -424,8 +424,6 @@ export const buildWords = {
     `--out ${outDir} is or contains the folder you are working in, and the build replaces the whole --out folder; choose a folder of its own (default: site)`,
   outNotAFolder: (outDir: string): string =>
     `--out ${outDir} is a file, not a folder; choose a folder for the site (default: site)`,
-  outNotASite: (outDir: string): string =>
-    `--out ${outDir} is a folder that holds other files (no index.html of an earlier build), and the build replaces the whole --out folder; choose a new or empty folder, or remove it first`,
   serving: (url: string, contentDir: string): string =>
     `serving ${url} (Ctrl-C to stop); rebuilding when ${contentDir} or the templates change`,
   rebuilt: (summary: string): string => `rebuilt: ${summary}`,

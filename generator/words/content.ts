@@ -15,6 +15,7 @@ import type {
 } from '../content/messages.ts';
 
 export type { ValueSpec } from '../content/messages.ts';
+import { escapeUnsafe, SHOWN_MAX, shown as shownText } from './shown.ts';
 
 export interface Wording {
   readonly problem: string;
@@ -142,8 +143,13 @@ export function expected(spec: ValueSpec): string {
 /** How a wrong value reads in a message: the user's own text where it helps. */
 export function shown(value: unknown, sourceText?: string): string {
   if (value === null || value === undefined) return 'nothing';
-  if (typeof value === 'string') return JSON.stringify(value);
-  if (typeof value === 'number') return sourceText ?? String(value);
+  if (typeof value === 'string') {
+    // At most SHOWN_MAX characters, controls and bidi controls as escapes (words/shown.ts).
+    const cut = value.length > SHOWN_MAX ? value.slice(0, SHOWN_MAX) : value;
+    const rest = value.length - cut.length;
+    return `${escapeUnsafe(JSON.stringify(cut))}${rest > 0 ? `…(+${rest} characters)` : ''}`;
+  }
+  if (typeof value === 'number') return sourceText === undefined ? String(value) : shownText(sourceText);
   if (typeof value === 'boolean') return String(value);
   if (Array.isArray(value)) return value.length === 0 ? 'an empty list' : 'a list';
   return 'a mapping';
@@ -584,6 +590,49 @@ const messageWords = {
       fix: 'Remove one of them.',
     };
   },
+  /** A control or bidirectional-control character in a key or text (entry-file.ts). */
+  unsafeCharacter(codePoint: number): Wording {
+    const hex = codePoint.toString(16).toUpperCase().padStart(4, '0');
+    const bidi = (codePoint >= 0x202a && codePoint <= 0x202e) || (codePoint >= 0x2066 && codePoint <= 0x2069);
+    return {
+      problem: bidi
+        ? `the text holds U+${hex}, an invisible direction control that would reorder the printed text`
+        : `the text holds U+${hex}, an invisible control character`,
+      fix: 'Delete it (retype the text if the character cannot be seen in your editor).',
+    };
+  },
+
+  /** base_url that would not give each card its own working address (site.ts). */
+  badBaseUrl(problem: string, maxLength: number): Wording {
+    const problems: Record<string, string> = {
+      'not-a-url': 'base_url is not a web address',
+      scheme: 'base_url must start with https:// or http://',
+      query: 'base_url holds a `?query`: every card’s address would end in it, and every QR code would open the same page',
+      fragment: 'base_url holds a `#fragment`: every card’s address would end in it, and every QR code would open the same page',
+      credentials: 'base_url holds a user name or password, which would be printed on every card',
+      'too-long': `base_url is longer than ${maxLength} characters, too long for a QR code a phone can read at the printed size`,
+    };
+    return {
+      problem: problems[problem] ?? 'base_url is not usable',
+      fix: 'Give the address the site is published at, e.g. `https://cards.roaster.example/` (a folder after the host is fine).',
+    };
+  },
+
+  /** A content file that is a link to a place outside the content folder (catalogue.ts). */
+  linkOutside(): Wording {
+    return {
+      problem: 'this is a link to a file outside the content folder, which the build does not follow',
+      fix: 'Copy the file into the content folder, or link to a file inside it.',
+    };
+  },
+
+  /** The last issue of a file whose schema problems were cut at the cap. */
+  moreProblems(count: number): Wording {
+    return {
+      problem: `and ${count} more problem${count === 1 ? '' : 's'} of the same kind in this file, not listed`,
+      fix: 'Fix the ones listed and build again to see the rest.',
+    };
+  },
 } satisfies MessageWords;
 
 /** The problem and fix of one content message. */
@@ -592,11 +641,17 @@ export function wording(message: ContentMessage): Wording {
   return say(...message.args);
 }
 
-/** One issue as one line of the error report. */
+/** One issue as one line of the error report; every part may carry the user's text, escaped and capped. */
 export function issueLine(issue: IssueAt): string {
   const { problem, fix } = wording(issue.message);
-  const field = issue.field === '' ? '' : ` ${issue.field}`;
-  return `${issue.file}:${issue.line}:${issue.column}${field} — ${problem}. ${fix}`;
+  const field = issue.field === '' ? '' : ` ${shownText(issue.field)}`;
+  const file = shownText(issue.file, 200);
+  return `${file}:${issue.line}:${issue.column}${field} — ${shownText(problem, 400)}. ${shownText(fix, 400)}`;
+}
+
+/** The report's last line when it lists only its first issues. */
+export function moreInReport(count: number): string {
+  return `… and ${count} more problem${count === 1 ? '' : 's'}, not listed: fix the ones above and build again to see them`;
 }
 
 export function errorsHeading(issueCount: number, fileCount: number): string {
@@ -605,10 +660,15 @@ export function errorsHeading(issueCount: number, fileCount: number): string {
   return `The content has ${problems} in ${files}; nothing was built:`;
 }
 
-/** The report a person reads: a heading, then one line per issue (issues sorted by place). */
+/** A report lists the first MAX_REPORTED issues, then how many more there are. */
+export const MAX_REPORTED = 50;
+
+/** The report a person reads: a heading, then one line per issue (the first MAX_REPORTED). */
 export function formatContentErrors(error: { readonly issues: readonly IssueAt[] }): string {
   const files = new Set(error.issues.map((issue) => issue.file)).size;
-  return [errorsHeading(error.issues.length, files), ...error.issues.map(issueLine)].join('\n');
+  const shown = error.issues.slice(0, MAX_REPORTED).map(issueLine);
+  const more = error.issues.length - shown.length;
+  return [errorsHeading(error.issues.length, files), ...shown, ...(more > 0 ? [moreInReport(more)] : [])].join('\n');
 }
 
-export const contentWords = { ...messageWords, wording, issueLine, errorsHeading };
+export const contentWords = { ...messageWords, wording, issueLine, errorsHeading, moreInReport };

@@ -24,6 +24,7 @@ import { MAX_CONTENT_FILE_BYTES } from '../../generator/content/file-bytes.ts';
 import { MAX_ALIAS_COUNT } from '../../generator/content/yaml-source.ts';
 import { buildWords } from '../../generator/words/card.ts';
 import { contentWords } from '../../generator/words/content.ts';
+import { faultWords } from '../../generator/words/build-faults.ts';
 import {
   DEMO_CONTENT,
   expectCleanFailure,
@@ -248,7 +249,7 @@ async function prepare(name: string, mutate: Mutation): Promise<{ content: strin
   const content = await demoCopy(path.join(root, `content-${slug}`));
   await mutate(content);
   const out = path.join(root, `out-${slug}`);
-  await cp(goodSite, out, { recursive: true });
+  await cp(goodSite, out, { recursive: true, dereference: true });
   return { content, out };
 }
 
@@ -326,7 +327,9 @@ describe('stovecard build with linked entry files', () => {
 
   it('a link to a shared pot file is that pot: its card is built', async () => {
     const content = await demoCopy(path.join(root, 'content-linked'));
-    const shared = path.join(root, 'shared-three-cup.yaml');
+    // Inside the content folder (a link that leaves it is refused: odd-files.test.ts).
+    await mkdir(path.join(content, 'shared'), { recursive: true });
+    const shared = path.join(content, 'shared', 'three-cup.yaml');
     await rename(path.join(content, 'pots', 'three-cup.yaml'), shared);
     await symlink(shared, path.join(content, 'pots', 'three-cup.yaml'));
     await edit(content, 'site.yaml', (text) =>
@@ -389,6 +392,6 @@ describe('stovecard build --out that must not be replaced', () => {
     const folder = path.join(root, 'photos');
     await mkdir(folder);
     await writeFile(path.join(folder, 'cat.jpg'), 'meow');
-    await refused(folder, DEMO_CONTENT, buildWords.outNotASite(folder));
+    await refused(folder, DEMO_CONTENT, faultWords.outNotASite(folder));
   });
 });

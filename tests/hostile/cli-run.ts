@@ -4,7 +4,7 @@
  * (`tsx generator/cli/main.ts …`), and checking that a failure reads as a person's error,
  * not a program's.
  */
-import { execFile } from 'node:child_process';
+import { execFile, spawn, type ChildProcess } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import path from 'node:path';
@@ -105,4 +105,29 @@ export function expectCleanFailure(run: CliRun, label: string): void {
 /** Non-empty stderr lines. */
 export function lines(text: string): string[] {
   return text.split('\n').filter((line) => line.trim() !== '');
+}
+
+const TSX_LOADER = path.join(PROJECT_ROOT, 'node_modules', 'tsx', 'dist', 'loader.mjs');
+
+/**
+ * `node --import tsx generator/cli/main.ts …` as ONE process (npx and the tsx launcher
+ * start a second one), so a test can kill the command itself at any moment.
+ */
+export function spawnCli(
+  argv: readonly string[],
+  options: { cwd: string; env?: NodeJS.ProcessEnv },
+): { child: ChildProcess; done: Promise<CliRun & { signal: NodeJS.Signals | null }> } {
+  const child = spawn(process.execPath, ['--import', TSX_LOADER, MAIN, ...argv], {
+    cwd: options.cwd,
+    env: { ...process.env, STOVECARD_DEBUG: '', ...options.env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let stdout = '';
+  let stderr = '';
+  child.stdout?.on('data', (chunk) => (stdout += String(chunk)));
+  child.stderr?.on('data', (chunk) => (stderr += String(chunk)));
+  const done = new Promise<CliRun & { signal: NodeJS.Signals | null }>((resolve) => {
+    child.on('close', (code, signal) => resolve({ code: code ?? -1, signal, stdout, stderr }));
+  });
+  return { child, done };
 }

@@ -3,7 +3,7 @@
  * temporary or old folders beside the output, and copies of the demo content to break.
  */
 import { createHash } from 'node:crypto';
-import { cp, readdir, readFile, stat } from 'node:fs/promises';
+import { cp, readdir, readFile, readlink, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { DEMO_CONTENT } from './cli-run.ts';
 
@@ -35,11 +35,24 @@ export async function treeHash(dir: string): Promise<string | null> {
   return hash.digest('hex');
 }
 
-/** Folders a build leaves beside `outDir` while it works (`<out>.tmp-<pid>`, `<out>.old-<pid>`). */
+/**
+ * What a build left beside `outDir` besides the site: its temporary, old and link names,
+ * and version folders (`<out>.v-…`) that `outDir` does not link to.
+ */
 export async function leftovers(outDir: string): Promise<string[]> {
   const base = path.basename(outDir);
+  let current: string | null = null;
+  try {
+    current = await readlink(outDir);
+  } catch {
+    current = null;
+  }
   const names = await readdir(path.dirname(outDir));
-  return names.filter((name) => name.startsWith(`${base}.tmp-`) || name.startsWith(`${base}.old-`));
+  return names.filter(
+    (name) =>
+      name !== current &&
+      ['tmp', 'old', 'link', 'v'].some((kind) => name.startsWith(`${base}.${kind}-`)),
+  );
 }
 
 /** A fresh copy of the demo content at `dir`. */

@@ -1,12 +1,12 @@
 /** The build's small parts: build date, plan cache, swap, progress, paths and the CLI flags. */
-import { mkdtemp, mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, mkdir, readFile, readdir, readlink, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildDate } from '../../generator/pipeline/build-date.ts';
 import { planFromJson, planToJson, stableJson } from '../../generator/pipeline/plan-cache.ts';
 import { terminalProgress } from '../../generator/pipeline/progress.ts';
-import { swapIn, tempDirFor } from '../../generator/pipeline/swap.ts';
+import { freshTempDir, SITE_MARKER, swapIn } from '../../generator/pipeline/swap.ts';
 import { run } from '../../generator/cli/build.ts';
 import { UsageError } from '../../generator/cli/errors.ts';
 import type { CardPlan } from '../../generator/planning/types.ts';
@@ -52,16 +52,23 @@ describe('plan cache files', () => {
 });
 
 describe('swapIn', () => {
-  it('puts the new folder in place of the old one and removes the old', async () => {
+  it('puts the new folder in place of the old one (a link to it) and removes the old', async () => {
     const out = path.join(root, 'site');
     await mkdir(out);
+    await writeFile(path.join(out, SITE_MARKER), '');
     await writeFile(path.join(out, 'old.txt'), 'old');
-    const tmp = tempDirFor(out);
-    await mkdir(tmp);
+    const tmp = await freshTempDir(out);
     await writeFile(path.join(tmp, 'new.txt'), 'new');
-    await swapIn(tmp, out);
-    expect(await readdir(out)).toEqual(['new.txt']);
-    expect((await readdir(root)).sort()).toEqual(['site']);
+    const report = await swapIn(tmp, out);
+    expect((await readdir(out)).sort()).toEqual([SITE_MARKER, 'new.txt']);
+    expect(await readlink(out)).toBe(path.basename(report.version));
+    expect((await readdir(root)).sort()).toEqual(['site', path.basename(report.version)]);
+    // The second swap flips the link and removes the first version.
+    const again = await freshTempDir(out);
+    await writeFile(path.join(again, 'newer.txt'), 'newer');
+    const second = await swapIn(again, out);
+    expect(second.previous).toBe(report.version);
+    expect((await readdir(root)).sort()).toEqual(['site', path.basename(second.version)]);
   });
 });
 
