@@ -13,6 +13,8 @@ import path from 'node:path';
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildWords } from '../../generator/words/card.ts';
+import { issueLine } from '../../generator/words/content.ts';
+import type { ContentIssue } from '../../generator/content/issues.ts';
 import { expectCleanFailure, lines, runMainIn, type CliRun } from './cli-run.ts';
 import { demoCopy, leftovers, treeHash } from './site-tree.ts';
 
@@ -288,7 +290,7 @@ describe('the loader on randomly damaged entry text (fast-check, in-process)', (
           outcomes.refused++;
           expect(built.issues.length).toBeGreaterThan(0);
           for (const issue of built.issues) {
-            const line = String(issue);
+            const line = issueLine(issue as ContentIssue);
             expect(line).toMatch(ISSUE_LINE);
             expect(line).not.toMatch(/[\u0000-\u0008\u000b-\u001f\u007f\u202a-\u202e\u2066-\u2069]/);
             expect(line.length).toBeLessThan(1_200);
