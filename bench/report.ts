@@ -107,7 +107,8 @@ export function formatTable(report: Report): string {
   const st = full.result.stats;
   const fullOverFloor = full.wallMs / floor.wallMs;
   // The cards an edit affects are the ones whose view is made again; all = the full build's.
-  const ideal = (m: Measured) => (m.result.stats.views.made / Math.max(1, st.views.made)) * full.wallMs;
+  const ideal = (m: Measured) =>
+    (m.result.stats.views.made / Math.max(1, st.views.made)) * full.wallMs;
   const rebuildOverIdeal = rebuild.wallMs / ideal(rebuild);
   const sessionOverIdeal = session.wallMs / ideal(session);
   const perCard = (ms: number, n: number) => (n > 0 ? ms / n : NaN);
@@ -145,7 +146,9 @@ export function formatTable(report: Report): string {
     `session rebuild = ${(session.wallMs / 1000).toFixed(2)} s (target ≤ ${TARGETS.sessionRebuildS} s on 1,000 cards: ${verdict(session.wallMs / 1000, TARGETS.sessionRebuildS)})`,
     `full/floor    = ${fullOverFloor.toFixed(2)}  (target ≤ ${TARGETS.fullOverFloor}: ${verdict(fullOverFloor, TARGETS.fullOverFloor)})`,
     `per card      plan ${planMs.toFixed(1)} ms (≤ ${TARGETS.planMs}: ${verdict(planMs, TARGETS.planMs)}), view ${viewMs.toFixed(1)} ms (≤ ${TARGETS.viewMs}: ${verdict(viewMs, TARGETS.viewMs)}), card PDF ${pdfMs.toFixed(1)} ms (≤ ${TARGETS.cardPdfMs}: ${verdict(pdfMs, TARGETS.cardPdfMs)})`,
-    `machine load  ${loadavg().map((l) => l.toFixed(1)).join(' / ')} (1, 5, 15 min) on ${availableParallelism()} cores at the end of the run`,
+    `machine load  ${loadavg()
+      .map((l) => l.toFixed(1))
+      .join(' / ')} (1, 5, 15 min) on ${availableParallelism()} cores at the end of the run`,
     `(${cpuRatios}; wall time is what the targets are about, CPU time moves less with the machine's load)`,
     '',
   ].join('\n');

@@ -22,7 +22,8 @@ export function summariseExtraction(
   if (curve.length < 2 || !(total > 0)) return null;
   let weighted = 0;
   for (let i = 1; i < curve.length; i++) {
-    const a = curve[i - 1]!, b = curve[i]!;
+    const a = curve[i - 1]!,
+      b = curve[i]!;
     weighted += ((a.extractionK + b.extractionK) / 2) * (b.cupM3 - a.cupM3);
   }
   const cdf = (x: number): number => volumeAtOrBelow(curve, x) / total;
@@ -43,7 +44,8 @@ export function summariseExtraction(
 function volumeAtOrBelow(curve: readonly CupPoint[], x: number): number {
   let v = 0;
   for (let i = 1; i < curve.length; i++) {
-    const a = curve[i - 1]!, b = curve[i]!;
+    const a = curve[i - 1]!,
+      b = curve[i]!;
     const dv = b.cupM3 - a.cupM3;
     const lo = Math.min(a.extractionK, b.extractionK);
     const hi = Math.max(a.extractionK, b.extractionK);
@@ -68,7 +70,9 @@ function quantile(xs: readonly number[], cdf: (x: number) => number, q: number):
     if (cdf(xs[mid]!) >= q) hi = mid;
     else lo = mid;
   }
-  const a = xs[lo]!, b = xs[hi]!;
-  const fa = cdf(a), fb = cdf(b);
+  const a = xs[lo]!,
+    b = xs[hi]!;
+  const fa = cdf(a),
+    fb = cdf(b);
   return fb > fa ? a + ((q - fa) / (fb - fa)) * (b - a) : b;
 }

@@ -42,7 +42,11 @@ import {
   STANDARD_GRAVITY,
   WATER_MOLAR_MASS_KG_PER_MOL,
 } from '../physics/constants.ts';
-import { saturationPressurePa, saturationPressureSlopePaPerK, saturationTemperatureK } from '../physics/if97-region4.ts';
+import {
+  saturationPressurePa,
+  saturationPressureSlopePaPerK,
+  saturationTemperatureK,
+} from '../physics/if97-region4.ts';
 import { region1 } from '../physics/if97-region1.ts';
 import { vaporisationEnthalpyJPerKg } from '../physics/saturation.ts';
 import {
@@ -467,16 +471,8 @@ function prepare(setup: BrewSetup): Constants {
   const boilingNow = saturationPressurePa(Math.min(setup.startK, 647)) >= room.ambientPa;
   check(!boilingNow, 'startK', 'boils-before-sealing');
   check(setup.startK >= 274.15, 'startK', 'freezes');
-  check(
-    setup.fillVolumeM3 > geometry.volumeAtTubeEndM3,
-    'fillVolumeM3',
-    'below-funnel-tube',
-  );
-  check(
-    setup.fillVolumeM3 < 0.98 * pot.sealedVolumeM3,
-    'fillVolumeM3',
-    'no-air-space',
-  );
+  check(setup.fillVolumeM3 > geometry.volumeAtTubeEndM3, 'fillVolumeM3', 'below-funnel-tube');
+  check(setup.fillVolumeM3 < 0.98 * pot.sealedVolumeM3, 'fillVolumeM3', 'no-air-space');
   check(setup.heatInputW >= 0, 'heatInputW', 'negative-heat');
   check(bed.permeabilityM2 > 0, 'permeabilityM2', 'non-positive-permeability');
 
@@ -755,12 +751,14 @@ export function spoutFlash(
   let flashedKg = 0;
   let aboveBoilingM3 = 0;
   for (let i = 1; i < cupCurve.length; i++) {
-    const a = cupCurve[i - 1]!, b = cupCurve[i]!;
+    const a = cupCurve[i - 1]!,
+      b = cupCurve[i]!;
     const k = (a.extractionK + b.extractionK) / 2;
     if (k <= boilingK) continue;
     const dv = b.cupM3 - a.cupM3;
     const liquid = region1(k, ambientPa + saturationPressurePa(k));
-    flashedKg += (dv * liquid.densityKgM3 * liquid.isobaricHeatCapacityJPerKgK * (k - boilingK)) / hfg;
+    flashedKg +=
+      (dv * liquid.densityKgM3 * liquid.isobaricHeatCapacityJPerKgK * (k - boilingK)) / hfg;
     aboveBoilingM3 += dv;
   }
   return { boilingK, flashedKg, aboveBoilingM3 };

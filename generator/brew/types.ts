@@ -144,7 +144,11 @@ export interface BrewResult {
    * Coffee reaching the spout hotter than the local boiling point flashes there: the
    * boiling point, the steam flashed (an upper bound, kg) and the cup volume concerned.
    */
-  readonly flash: { readonly boilingK: number; readonly flashedKg: number; readonly aboveBoilingM3: number };
+  readonly flash: {
+    readonly boilingK: number;
+    readonly flashedKg: number;
+    readonly aboveBoilingM3: number;
+  };
   /** Cumulative cup volume against extraction temperature, for charts: ascending cupM3. */
   readonly cupCurve: readonly { readonly cupM3: number; readonly extractionK: number }[];
   readonly peakGaugePa: number;

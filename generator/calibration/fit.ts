@@ -51,7 +51,10 @@ export const RETENTION_SIGMA_LN = 0.15;
 /** A held prior contributing more than this share of a fitted σ² is named beside it. */
 const ENTANGLED_SHARE = 0.25;
 
-export function fitLog(input: FitInput, options: { readonly leaveOneOut?: boolean } = {}): FitReport {
+export function fitLog(
+  input: FitInput,
+  options: { readonly leaveOneOut?: boolean } = {},
+): FitReport {
   const { log, pot, coffee, stove } = input;
   const observations = logObservations(log);
   const parameters = candidateParameters(log, pot, coffee, stove);
@@ -165,12 +168,19 @@ export function fitLog(input: FitInput, options: { readonly leaveOneOut?: boolea
     const retained = forwardModel(
       log,
       pot,
-      { ...coffee, bed: { ...coffee.bed, retentionKgPerKg: coffee.bed.retentionKgPerKg * Math.exp(step) } },
+      {
+        ...coffee,
+        bed: { ...coffee.bed, retentionKgPerKg: coffee.bed.retentionKgPerKg * Math.exp(step) },
+      },
       observations,
     ).scaledPredictions(modelValues(parameters, finalValues));
     const retentionColumn = Float64Array.from(retained, (v, n) => (v - centre[n]!) / step);
     const heldColumns = [
-      ...held.map((h) => ({ id: parameters[h]!.id, column: columns[h]!, sigmaLn: parameters[h]!.priorSigmaLn })),
+      ...held.map((h) => ({
+        id: parameters[h]!.id,
+        column: columns[h]!,
+        sigmaLn: parameters[h]!.priorSigmaLn,
+      })),
       { id: 'retention', column: retentionColumn, sigmaLn: RETENTION_SIGMA_LN },
     ];
     const inverse = inverseSpd(normalMatrix(free.map((i) => columns[i]!)));
@@ -178,7 +188,10 @@ export function fitLog(input: FitInput, options: { readonly leaveOneOut?: boolea
       const dot = (a: Float64Array, b: Float64Array) => a.reduce((sum, v, n) => sum + v * b[n]!, 0);
       free.forEach((_, k) => {
         const parts = heldColumns.map((h) => {
-          const gain = free.reduce((sum, fi, m) => sum + inverse[k]![m]! * dot(columns[fi]!, h.column), 0);
+          const gain = free.reduce(
+            (sum, fi, m) => sum + inverse[k]![m]! * dot(columns[fi]!, h.column),
+            0,
+          );
           return (gain * h.sigmaLn) ** 2;
         });
         heldVariance[k] = parts.reduce((a, b) => a + b, 0);
@@ -216,7 +229,12 @@ export function fitLog(input: FitInput, options: { readonly leaveOneOut?: boolea
   const misfit = misfitOf(residuals, chiSquare, dof, log.brews.length);
   const leaveOneOut =
     options.leaveOneOut !== false && log.brews.length >= 3
-      ? leaveOneBrewOut(input, parameters, (values) => forward.scaledPredictions(modelValues(parameters, values)), observations)
+      ? leaveOneBrewOut(
+          input,
+          parameters,
+          (values) => forward.scaledPredictions(modelValues(parameters, values)),
+          observations,
+        )
       : null;
   return {
     logId: log.id,
@@ -253,11 +271,15 @@ function misfitOf(
   if (dof <= 0 || chiSquare <= dof + MISFIT_SIGMAS * Math.sqrt(2 * dof)) return null;
   const perBrew = Array.from({ length: brewCount }, (_, brew) => {
     const own = residuals.filter((r) => r.observation.brew === brew);
-    const meanSquare = own.length ? own.reduce((sum, r) => sum + r.normalised ** 2, 0) / own.length : 0;
+    const meanSquare = own.length
+      ? own.reduce((sum, r) => sum + r.normalised ** 2, 0) / own.length
+      : 0;
     return { brew, meanSquare };
   });
   const worst = [...perBrew].sort((a, b) => b.meanSquare - a.meanSquare);
-  const disagreeing = worst.filter((b) => b.meanSquare > DISAGREEING_BREW_MEAN_SQUARE).map((b) => b.brew);
+  const disagreeing = worst
+    .filter((b) => b.meanSquare > DISAGREEING_BREW_MEAN_SQUARE)
+    .map((b) => b.brew);
   return { chiSquare, dof, brews: disagreeing.length > 0 ? disagreeing : [worst[0]!.brew] };
 }
 
@@ -275,13 +297,17 @@ function leaveOneBrewOut(
   const perBrew = input.log.brews.map((_, brew) => {
     const others = { ...input.log, brews: input.log.brews.filter((__, i) => i !== brew) };
     const sub = fitLog({ ...input, log: others }, { leaveOneOut: false });
-    const values = parameters.map((p) => sub.estimates.find((e) => e.parameter.id === p.id)?.value ?? p.prior);
+    const values = parameters.map(
+      (p) => sub.estimates.find((e) => e.parameter.id === p.id)?.value ?? p.prior,
+    );
     const scaled = predict(values);
     const normalised = observations
       .map((o, i) => ({ o, i }))
       .filter(({ o }) => o.brew === brew)
       .map(({ o, i }) => (o.seen - scaled[i]! * o.sigma) / o.sigma);
-    const rms = normalised.length ? Math.sqrt(normalised.reduce((s, v) => s + v * v, 0) / normalised.length) : 0;
+    const rms = normalised.length
+      ? Math.sqrt(normalised.reduce((s, v) => s + v * v, 0) / normalised.length)
+      : 0;
     return { brew, rmsNormalised: rms, count: normalised.length };
   });
   const all = perBrew.reduce((s, b) => s + b.rmsNormalised ** 2 * b.count, 0);

@@ -82,7 +82,13 @@ export function candidateParameters(
       priorSigmaLn: coffee.permeabilityAssumed ? Math.LN2 : 0.15,
     },
     ...heats,
-    { id: 'heat-loss', kind: 'heat-loss', prior: pot.model.heatLossWPerK, ...RANGE['heat-loss'], priorSigmaLn: 0.3 },
+    {
+      id: 'heat-loss',
+      kind: 'heat-loss',
+      prior: pot.model.heatLossWPerK,
+      ...RANGE['heat-loss'],
+      priorSigmaLn: 0.3,
+    },
   ];
 }
 

@@ -71,10 +71,18 @@ export interface FitReport {
   /** Relative 1-σ above which a parameter counts as not identifiable. */
   readonly relativeSigmaLimit: number;
   /** χ² far above its dof: the brews whose readings disagree most (log order, 0-based). */
-  readonly misfit: { readonly chiSquare: number; readonly dof: number; readonly brews: readonly number[] } | null;
+  readonly misfit: {
+    readonly chiSquare: number;
+    readonly dof: number;
+    readonly brews: readonly number[];
+  } | null;
   /** Logs of 3 or more brews: each brew predicted by a fit of the others, in units of its readings' σ. */
   readonly leaveOneOut: {
-    readonly perBrew: readonly { readonly brew: number; readonly rmsNormalised: number; readonly count: number }[];
+    readonly perBrew: readonly {
+      readonly brew: number;
+      readonly rmsNormalised: number;
+      readonly count: number;
+    }[];
     readonly rmsNormalised: number;
   } | null;
   readonly iterations: number;

@@ -133,7 +133,9 @@ function withNote(text: string, file: string, path: YamlPath, note: string): str
   let line = text.slice(range[1], at);
   line = line.replace(/ ?[#;] ?fitted ±[^#;]*$/u, '');
   const hasComment = /\s#/.test(line);
-  return text.slice(0, range[1]) + line + (hasComment ? `; ${note}` : ` # ${note}`) + text.slice(at);
+  return (
+    text.slice(0, range[1]) + line + (hasComment ? `; ${note}` : ` # ${note}`) + text.slice(at)
+  );
 }
 
 function endOf(pair: Pair): number {

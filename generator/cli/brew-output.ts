@@ -2,7 +2,8 @@
 import type { BrewResult } from '../brew/types.ts';
 import { round, toBar, toCelsius, toMl } from '../units.ts';
 
-const orNull = <T>(value: number | null, f: (v: number) => T): T | null => (value === null ? null : f(value));
+const orNull = <T>(value: number | null, f: (v: number) => T): T | null =>
+  value === null ? null : f(value);
 
 export function brewJson(r: BrewResult) {
   return {

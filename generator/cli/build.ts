@@ -38,8 +38,10 @@ export function warningLines(result: BuildResult): string {
 /** What the build did besides the site: leftovers removed, cache files made again, a previous site kept. */
 export function noteLines(result: BuildResult): string {
   const notes: string[] = [];
-  if ((result.skippedFiles ?? []).length > 0) notes.push(faultWords.skippedFiles(result.skippedFiles));
-  if (result.sweptLeftovers.length > 0) notes.push(faultWords.sweptLeftovers(result.sweptLeftovers));
+  if ((result.skippedFiles ?? []).length > 0)
+    notes.push(faultWords.skippedFiles(result.skippedFiles));
+  if (result.sweptLeftovers.length > 0)
+    notes.push(faultWords.sweptLeftovers(result.sweptLeftovers));
   if (Object.keys(result.damagedCache).length > 0)
     notes.push(faultWords.damagedCache(result.damagedCache));
   const kept = result.swap.notRemoved;

@@ -140,7 +140,10 @@ function argumentProblem(error: unknown): string {
   const message = error instanceof Error ? error.message : String(error);
   const option = /'(-[^' ]*)/.exec(message)?.[1] ?? '';
   if (code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION') {
-    return fitWords.unknownOption(option, nearestOption(option, ['content', 'write', 'json', 'help']));
+    return fitWords.unknownOption(
+      option,
+      nearestOption(option, ['content', 'write', 'json', 'help']),
+    );
   }
   if (code === 'ERR_PARSE_ARGS_INVALID_OPTION_VALUE') {
     return option === '--content'
@@ -247,7 +250,14 @@ export async function writeFitted(report: FitReport, loaded: LoadedFit): Promise
   const edits = plannedEdits(report, loaded.stove).map((edit) => {
     const e = report.estimates.find((x) => x.parameter.id === edit.parameterId);
     return e?.status === 'fitted'
-      ? { ...edit, note: fitWords.provenance(percent(e.relativeSigma), `logs/${basename(loaded.log.source.file)}`, date) }
+      ? {
+          ...edit,
+          note: fitWords.provenance(
+            percent(e.relativeSigma),
+            `logs/${basename(loaded.log.source.file)}`,
+            date,
+          ),
+        }
       : edit;
   });
   const byEntry = new Map<EntryKind, EntryEdit[]>();
@@ -432,7 +442,15 @@ export function fitText(
     const pct = percent(e.relativeSigma);
     switch (e.parameter.kind) {
       case 'heat':
-        return [fitWords.plainHeat(loaded.stove.name, e.parameter.level!, sig(e.value, 2), pct, e.entangledWith)];
+        return [
+          fitWords.plainHeat(
+            loaded.stove.name,
+            e.parameter.level!,
+            sig(e.value, 2),
+            pct,
+            e.entangledWith,
+          ),
+        ];
       case 'permeability':
         return [fitWords.plainPermeability(loaded.coffee.name, pct, e.entangledWith)];
       case 'heat-loss':
@@ -456,7 +474,9 @@ export function fitText(
     fitWords.plainHeading,
     ...(plain.length > 0 ? plain : [fitWords.plainNothing]),
     ...(report.misfit ? [fitWords.plainMisfit(report.misfit.brews)] : []),
-    ...(report.leaveOneOut ? [fitWords.plainPrediction(sig(report.leaveOneOut.rmsNormalised, 2))] : []),
+    ...(report.leaveOneOut
+      ? [fitWords.plainPrediction(sig(report.leaveOneOut.rmsNormalised, 2))]
+      : []),
     '',
     fitWords.heading(logPath, loaded.pot.id, loaded.coffee.id, loaded.stove.id),
     fitWords.counts(

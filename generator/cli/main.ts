@@ -50,7 +50,9 @@ export async function main(argv: string[]): Promise<number> {
 // Run when executed directly (tsx generator/cli/main.ts or bin/stovecard.js).
 const invokedDirectly =
   process.argv[1] !== undefined &&
-  (import.meta.url.endsWith(process.argv[1]) || process.argv[1].endsWith('stovecard.js') || process.argv[1].endsWith('stovecard'));
+  (import.meta.url.endsWith(process.argv[1]) ||
+    process.argv[1].endsWith('stovecard.js') ||
+    process.argv[1].endsWith('stovecard'));
 if (invokedDirectly) {
   main(process.argv.slice(2)).then(
     (code) => {

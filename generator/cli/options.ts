@@ -24,7 +24,11 @@ export function parseOptions(
       const option = /'(-[^' ]*)/.exec(message)?.[1] ?? '';
       const names = [...Object.keys(options), 'help'];
       throw new UsageError(
-        cliWords.unknownOption(option, names.map((n) => `--${n}`), nearestOption(option, names)),
+        cliWords.unknownOption(
+          option,
+          names.map((n) => `--${n}`),
+          nearestOption(option, names),
+        ),
       );
     }
     throw new UsageError(message);
@@ -41,12 +45,14 @@ export function numberOption(values: Options, name: string): number | undefined 
   const raw = values[name];
   if (raw === undefined || typeof raw === 'boolean') return undefined;
   const value = Number(raw);
-  if (!Number.isFinite(value) || raw.trim() === '') throw new UsageError(cliWords.badNumber(`--${name}`, raw));
+  if (!Number.isFinite(value) || raw.trim() === '')
+    throw new UsageError(cliWords.badNumber(`--${name}`, raw));
   return value;
 }
 
 export function requiredString(values: Options, name: string, help: string): string {
   const raw = values[name];
-  if (typeof raw !== 'string' || raw === '') throw new UsageError(cliWords.missingOption(`--${name}`, help));
+  if (typeof raw !== 'string' || raw === '')
+    throw new UsageError(cliWords.missingOption(`--${name}`, help));
   return raw;
 }

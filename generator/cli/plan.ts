@@ -36,7 +36,8 @@ export async function run(argv: string[]): Promise<number> {
   };
   const ambientC = rangedOption(numberOption(values, 'ambient-c'), '--ambient-c', AMBIENT_C);
   const altitudeM = rangedOption(numberOption(values, 'altitude-m'), '--altitude-m', ALTITUDE_M);
-  const presets = typeof values['presets-c'] === 'string' ? parsePresets(values['presets-c']) : undefined;
+  const presets =
+    typeof values['presets-c'] === 'string' ? parsePresets(values['presets-c']) : undefined;
   const fillMl = numberOption(values, 'fill-ml');
   const [pot, coffee, stove] = await allEntries([
     loadPotFile(files.pot),
@@ -61,7 +62,9 @@ export async function run(argv: string[]): Promise<number> {
     throw new InputError(cliWords.fillAboveValve(fillMl, Math.floor(toMl(limit.maxFillM3))));
   }
   process.stdout.write(
-    values.json ? JSON.stringify(planJson(plan)) + '\n' : planSummary(plan, pot.valveOpeningAssumed),
+    values.json
+      ? JSON.stringify(planJson(plan)) + '\n'
+      : planSummary(plan, pot.valveOpeningAssumed),
   );
   return plan.refused ? 3 : 0;
 }
@@ -83,7 +86,8 @@ function rangedOption(
 function parsePresets(raw: string): number[] {
   return raw.split(',').map((part) => {
     const value = Number(part.trim());
-    if (part.trim() === '' || !Number.isFinite(value)) throw new UsageError(cliWords.badNumber('--presets-c', part));
+    if (part.trim() === '' || !Number.isFinite(value))
+      throw new UsageError(cliWords.badNumber('--presets-c', part));
     return value;
   });
 }
@@ -104,7 +108,15 @@ export function planJson(plan: CardPlan) {
   };
   if (plan.refused) {
     const text = refusalText(plan.refused, 'metric');
-    return { ...context, refused: { code: text.code, reason: text.reason, suggestion: text.suggestion, facts: plan.refused.facts } };
+    return {
+      ...context,
+      refused: {
+        code: text.code,
+        reason: text.reason,
+        suggestion: text.suggestion,
+        facts: plan.refused.facts,
+      },
+    };
   }
   return {
     ...context,
@@ -128,7 +140,8 @@ export function planJson(plan: CardPlan) {
     coldStart: {
       meanC: round(toCelsius(plan.coldStart.meanK), 1),
       inBandShare: round(plan.coldStart.inBandShare, 3),
-      firstCoffeeS: plan.coldStart.firstCoffeeS === null ? null : round(plan.coldStart.firstCoffeeS),
+      firstCoffeeS:
+        plan.coldStart.firstCoffeeS === null ? null : round(plan.coldStart.firstCoffeeS),
     },
     peakGaugeBar: round(toBar(plan.peakGaugePa), 3),
     peakGaugeRangeBar: {
@@ -153,21 +166,25 @@ export function planSummary(plan: CardPlan, valveAssumed: boolean): string {
   }
   const p = j as Exclude<ReturnType<typeof planJson>, { refused: object }>;
   if (!('fillMl' in p)) return '';
-  return [
-    `water     ${p.fillMl} mL (${p.fillHeightMm} mm above the floor, ${p.belowValveMm} mm below the valve) at ${p.startC} °C`,
-    `coffee    ${p.doseG} g, level basket, do not tamp`,
-    `heat      ${p.level}`,
-    `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
-    `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (${
-      Number.isFinite(p.coldStart.meanC)
-        ? `cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %`
-        : faultWords.coldStartNoCoffee
-    })`,
-    `pressure  peak ${p.peakGaugeBar} bar gauge (${p.peakGaugeRangeBar.low}–${p.peakGaugeRangeBar.high} if the inputs are off)`,
-    `valve     ${cliWords.planValve(valveText(plan.valveOpeningGaugePa, valveAssumed), valveAssumed)}`,
-    ...(plan.bindingCause ? [`why       ${bindingCauseText(plan, 'metric')}`] : []),
-    ...p.warnings.map((w) => `warning   ${w}`),
-  ].join('\n') + '\n' + cautions;
+  return (
+    [
+      `water     ${p.fillMl} mL (${p.fillHeightMm} mm above the floor, ${p.belowValveMm} mm below the valve) at ${p.startC} °C`,
+      `coffee    ${p.doseG} g, level basket, do not tamp`,
+      `heat      ${p.level}`,
+      `timings   first coffee ${p.firstCoffeeS.low}–${p.firstCoffeeS.high} s, off the heat ${p.offHeatS.low}–${p.offHeatS.high} s`,
+      `cup       ${p.yieldMl} mL, mean ${p.extraction.meanC} °C, ${Math.round(p.extraction.inBandShare * 100)} % in band (${
+        Number.isFinite(p.coldStart.meanC)
+          ? `cold start: ${p.coldStart.meanC} °C, ${Math.round(p.coldStart.inBandShare * 100)} %`
+          : faultWords.coldStartNoCoffee
+      })`,
+      `pressure  peak ${p.peakGaugeBar} bar gauge (${p.peakGaugeRangeBar.low}–${p.peakGaugeRangeBar.high} if the inputs are off)`,
+      `valve     ${cliWords.planValve(valveText(plan.valveOpeningGaugePa, valveAssumed), valveAssumed)}`,
+      ...(plan.bindingCause ? [`why       ${bindingCauseText(plan, 'metric')}`] : []),
+      ...p.warnings.map((w) => `warning   ${w}`),
+    ].join('\n') +
+    '\n' +
+    cautions
+  );
 }
 
 /** An assumed valve pressure is shown to two significant figures (nobody measured it). */

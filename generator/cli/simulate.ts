@@ -34,8 +34,10 @@ export async function run(argv: string[]): Promise<number> {
   const stoveFile = typeof values.stove === 'string' ? values.stove : undefined;
   const powerW = numberOption(values, 'power-w');
   // Exactly one of the two ways to say the heat.
-  if ((stoveFile === undefined) === (powerW === undefined)) throw new UsageError(cliWords.levelOrPower);
-  const label = stoveFile !== undefined ? requiredString(values, 'level', cliWords.simulateHelp) : '';
+  if ((stoveFile === undefined) === (powerW === undefined))
+    throw new UsageError(cliWords.levelOrPower);
+  const label =
+    stoveFile !== undefined ? requiredString(values, 'level', cliWords.simulateHelp) : '';
   const [pot, coffee, stove] = await allEntries([
     loadPotFile(potFile),
     loadCoffeeFile(coffeeFile),
@@ -45,7 +47,14 @@ export async function run(argv: string[]): Promise<number> {
   let heatInputW: number;
   if (stove !== undefined) {
     const level = stove.levels.find((l) => l.label === label);
-    if (!level) throw new UsageError(cliWords.levelNotFound(label, stoveFile!, stove.levels.map((l) => l.label)));
+    if (!level)
+      throw new UsageError(
+        cliWords.levelNotFound(
+          label,
+          stoveFile!,
+          stove.levels.map((l) => l.label),
+        ),
+      );
     heatInputW = level.heatToPotW;
   } else {
     heatInputW = powerW!;
@@ -75,6 +84,10 @@ export async function run(argv: string[]): Promise<number> {
       collectSeries: true,
     }),
   });
-  process.stdout.write(values.json ? JSON.stringify(brewJson(result)) + '\n' : brewSummary(result, round(toMl(fillMl !== undefined ? fromMl(fillMl) : defaultFill))));
+  process.stdout.write(
+    values.json
+      ? JSON.stringify(brewJson(result)) + '\n'
+      : brewSummary(result, round(toMl(fillMl !== undefined ? fromMl(fillMl) : defaultFill))),
+  );
   return 0;
 }

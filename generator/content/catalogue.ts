@@ -105,7 +105,8 @@ async function listFolder(contentDir: string, kind: FolderKind, root: string): P
       }
     }
   } catch (error) {
-    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return { files: [], issues: [], skipped };
+    if ((error as NodeJS.ErrnoException).code === 'ENOENT')
+      return { files: [], issues: [], skipped };
     return { files: [], issues: [unreadable(folder, error)], skipped };
   }
   const files: ListedFile[] = [];
@@ -178,7 +179,8 @@ export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
     listFolder(contentDir, 'stove', root),
     listFolder(contentDir, 'log', root),
   ]);
-  const siteLeaves = rootNames.includes(SITE_FILE) && !(await staysInside(root, join(contentDir, SITE_FILE)));
+  const siteLeaves =
+    rootNames.includes(SITE_FILE) && !(await staysInside(root, join(contentDir, SITE_FILE)));
   const idsOf = (listing: Listing): string[] => listing.files.map((each) => each.id);
   const known: KnownIds = { pot: idsOf(pots), coffee: idsOf(coffees), stove: idsOf(stoves) };
 
@@ -189,19 +191,17 @@ export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
   ]);
   const references = { known, stoves: stoveEntries.entries };
   const noSite: Checked<SiteEntry> = {
-    issues: [
-      new ContentIssue('missing-file', wholeFile(SITE_FILE), message('missingSiteFile')),
-    ],
+    issues: [new ContentIssue('missing-file', wholeFile(SITE_FILE), message('missingSiteFile'))],
   };
   const [logEntries, site] = await Promise.all([
     loadAll('log', logs.files, (file: ValidFile<LogYaml>) => buildLog(file, references)),
     siteLeaves
       ? { issues: [linkOutside(SITE_FILE)] }
       : rootNames.includes(SITE_FILE)
-      ? loadEntry('site', join(contentDir, SITE_FILE), SITE_FILE, (file: ValidFile<SiteYaml>) =>
-          buildSite(file, known),
-        )
-      : noSite,
+        ? loadEntry('site', join(contentDir, SITE_FILE), SITE_FILE, (file: ValidFile<SiteYaml>) =>
+            buildSite(file, known),
+          )
+        : noSite,
   ]);
 
   const issues = [

@@ -36,7 +36,8 @@ export function idOfFile(path: string): string {
  * raw on a terminal or reorder a card's text (a right-to-left override turns a footer
  * around), so each is an issue at its place. At most MAX_UNSAFE per file.
  */
-const UNSAFE_TEXT = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
+const UNSAFE_TEXT =
+  /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
 const MAX_UNSAFE = 20;
 
 function unsafeTextIssues(value: unknown, source: YamlSource): ContentIssue[] {
@@ -45,13 +46,24 @@ function unsafeTextIssues(value: unknown, source: YamlSource): ContentIssue[] {
     if (issues.length >= MAX_UNSAFE) return;
     if (typeof node === 'string') {
       const found = UNSAFE_TEXT.exec(node);
-      if (found) issues.push(issueAt(source, path, 'bad-value', message('unsafeCharacter', found[0].codePointAt(0)!)));
+      if (found)
+        issues.push(
+          issueAt(source, path, 'bad-value', message('unsafeCharacter', found[0].codePointAt(0)!)),
+        );
     } else if (Array.isArray(node)) node.forEach((item, i) => visit(item, [...path, i]));
     else if (node && typeof node === 'object')
       for (const [key, item] of Object.entries(node)) {
         const found = UNSAFE_TEXT.exec(key);
         if (found)
-          issues.push(issueAt(source, [...path, key], 'bad-value', message('unsafeCharacter', found[0].codePointAt(0)!), 'key'));
+          issues.push(
+            issueAt(
+              source,
+              [...path, key],
+              'bad-value',
+              message('unsafeCharacter', found[0].codePointAt(0)!),
+              'key',
+            ),
+          );
         else visit(item, [...path, key]);
       }
   };

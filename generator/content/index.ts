@@ -4,11 +4,7 @@
  */
 export { loadCatalogue } from './catalogue.ts';
 export { loadCoffeeFile, loadLogFile, loadPotFile, loadStoveFile } from './load-file.ts';
-export {
-  ContentErrors,
-  ContentIssue,
-  type ContentIssueCode,
-} from './issues.ts';
+export { ContentErrors, ContentIssue, type ContentIssueCode } from './issues.ts';
 export {
   fieldName,
   nodeAt,

@@ -71,7 +71,12 @@ function inMillimetres(data: PotFileYaml, lengths: ReadonlyMap<string, WrittenLe
     }
     return out;
   };
-  return { ...data, base: part('base'), funnel: part('funnel'), upper: part('upper') } as unknown as PotYaml;
+  return {
+    ...data,
+    base: part('base'),
+    funnel: part('funnel'),
+    upper: part('upper'),
+  } as unknown as PotYaml;
 }
 
 /** The pot with every length in millimetres (the form the checks and the conversion read). */
@@ -133,15 +138,29 @@ function geometryIssues(
     rule(upper.spout_height_mm <= bedTopMm, 'upper', 'spout_height', (u, unit) =>
       message('spoutTooLow', u(upper.spout_height_mm), u(bedTopMm), unit),
     ),
-    rule(funnel.basket_diameter_mm >= base.inner_diameter_mm, 'funnel', 'basket_diameter', (u, unit) =>
-      message('basketWiderThanBase', u(funnel.basket_diameter_mm), u(base.inner_diameter_mm), unit),
+    rule(
+      funnel.basket_diameter_mm >= base.inner_diameter_mm,
+      'funnel',
+      'basket_diameter',
+      (u, unit) =>
+        message(
+          'basketWiderThanBase',
+          u(funnel.basket_diameter_mm),
+          u(base.inner_diameter_mm),
+          unit,
+        ),
     ),
     rule(
       funnel.tube_inner_diameter_mm >= funnel.basket_diameter_mm,
       'funnel',
       'tube_inner_diameter',
       (u, unit) =>
-        message('tubeWiderThanBasket', u(funnel.tube_inner_diameter_mm), u(funnel.basket_diameter_mm), unit),
+        message(
+          'tubeWiderThanBasket',
+          u(funnel.tube_inner_diameter_mm),
+          u(funnel.basket_diameter_mm),
+          unit,
+        ),
     ),
   ];
   return rules

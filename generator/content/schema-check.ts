@@ -50,8 +50,13 @@ function keyPairs(required: boolean) {
       if (written.length === 1 || (written.length === 0 && !required)) continue;
       errors.push({
         keyword: 'x-one-of-keys',
-        params: { pair: [first, second], both: written.length === 2, properties: parentSchema?.properties },
-        message: written.length === 2 ? `both ${first} and ${second}` : `neither ${first} nor ${second}`,
+        params: {
+          pair: [first, second],
+          both: written.length === 2,
+          properties: parentSchema?.properties,
+        },
+        message:
+          written.length === 2 ? `both ${first} and ${second}` : `neither ${first} nor ${second}`,
       });
     }
     (pairsCheck as { errors?: Partial<ErrorObject>[] }).errors = errors;
@@ -62,7 +67,13 @@ for (const [keyword, required] of [
   ['x-one-of-keys', true],
   ['x-at-most-one-of-keys', false],
 ] as const) {
-  ajv.addKeyword({ keyword, type: 'object', schemaType: 'array', errors: true, validate: keyPairs(required) });
+  ajv.addKeyword({
+    keyword,
+    type: 'object',
+    schemaType: 'array',
+    errors: true,
+    validate: keyPairs(required),
+  });
 }
 
 const compiled = new Map<SchemaName, ValidateFunction>();
@@ -77,7 +88,6 @@ function validator(name: SchemaName): ValidateFunction {
   }
   return validate;
 }
-
 
 function specOf(schema: Schema | undefined): ValueSpec {
   if (!schema) return {};
@@ -217,7 +227,9 @@ export function schemaIssues(name: SchemaName, data: unknown, source: YamlSource
   const issues = errors.slice(0, MAX_ISSUES_PER_FILE).map((error) => toIssue(error, source));
   if (errors.length > MAX_ISSUES_PER_FILE) {
     const more = errors.length - MAX_ISSUES_PER_FILE;
-    issues.push(new ContentIssue('more-problems', wholeFile(source.file), message('moreProblems', more)));
+    issues.push(
+      new ContentIssue('more-problems', wholeFile(source.file), message('moreProblems', more)),
+    );
   }
   return issues;
 }

@@ -134,7 +134,8 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
         firstLineOf.set(key, line);
         cards.push(request);
       } else {
-        const wording = message('repeatedCard', 
+        const wording = message(
+          'repeatedCard',
           request.potId,
           request.coffeeId,
           request.stoveId,
@@ -211,7 +212,9 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
   if (data.base_url !== undefined) {
     const problem = baseUrlProblem(data.base_url);
     if (problem !== null)
-      issues.push(issueAt(source, ['base_url'], 'bad-value', message('badBaseUrl', problem, MAX_BASE_URL)));
+      issues.push(
+        issueAt(source, ['base_url'], 'bad-value', message('badBaseUrl', problem, MAX_BASE_URL)),
+      );
   }
   if (issues.length > 0) return { issues };
   const baseUrl =
@@ -240,7 +243,8 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
  */
 export const MAX_BASE_URL = 100;
 
-export type BaseUrlProblem = 'not-a-url' | 'scheme' | 'query' | 'fragment' | 'credentials' | 'too-long';
+export type BaseUrlProblem =
+  'not-a-url' | 'scheme' | 'query' | 'fragment' | 'credentials' | 'too-long';
 
 /**
  * What is wrong with a base address, or null. A `?query` or `#fragment` would follow every

@@ -42,7 +42,8 @@ function levelIssues({ source, data }: ValidFile<StoveYaml>): ContentIssue[] {
     }
     const previous = data.levels[index - 1];
     if (previous && level.power_w <= previous.power_w) {
-      const wording = message('powerNotIncreasing', 
+      const wording = message(
+        'powerNotIncreasing',
         level.power_w,
         String(previous.label),
         previous.power_w,

@@ -81,9 +81,17 @@ export interface LoggedBrew {
   readonly heatOffS?: number;
   readonly yieldM3?: number;
   /** Scale readings: (time, cup mass). */
-  readonly cupMass?: readonly { readonly tS: number; readonly kg: number; readonly source: SourceRef }[];
+  readonly cupMass?: readonly {
+    readonly tS: number;
+    readonly kg: number;
+    readonly source: SourceRef;
+  }[];
   /** Probe readings of the water in the base: (time, temperature). */
-  readonly waterTemperature?: readonly { readonly tS: number; readonly k: number; readonly source: SourceRef }[];
+  readonly waterTemperature?: readonly {
+    readonly tS: number;
+    readonly k: number;
+    readonly source: SourceRef;
+  }[];
 }
 
 export interface LogEntry extends EntryBase {

@@ -71,7 +71,9 @@ function duplicateKeyErrors(doc: Document.Parsed): YAMLError[] {
         const key = isScalar(pair.key) ? pair.key.value : pair.key;
         if (seen.has(key)) {
           const range = (pair.key as Node | null)?.range ?? [0, 0, 0];
-          errors.push(new YAMLParseError([range[0], range[1]], 'DUPLICATE_KEY', 'Map keys must be unique'));
+          errors.push(
+            new YAMLParseError([range[0], range[1]], 'DUPLICATE_KEY', 'Map keys must be unique'),
+          );
         } else seen.add(key);
       }
     },

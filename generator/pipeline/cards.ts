@@ -81,7 +81,10 @@ export function expandCards(catalogue: Catalogue): CardJobs {
     for (const coffeeId of set.coffeeIds) {
       const rows = insertRows(catalogue, set.cards, coffeeId);
       for (const row of rows) addStation(row, null);
-      const slug = insertSlug(coffeeId, insertSlugs.has(insertSlug(coffeeId, null)) ? set.id : null);
+      const slug = insertSlug(
+        coffeeId,
+        insertSlugs.has(insertSlug(coffeeId, null)) ? set.id : null,
+      );
       insertSlugs.add(slug);
       inserts.push({ setId: set.id, coffeeId, slug, rows });
       slugs.push(slug);

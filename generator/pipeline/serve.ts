@@ -62,7 +62,10 @@ function injected(failure: string | null): string {
 
 /** JSON safe inside a <script> element (no `</script>` or `<!--` can close it). */
 function scriptJson(value: unknown): string {
-  return JSON.stringify(value).replace(/</g, '\\u003c').replace(/\u2028/g, '\\u2028').replace(/\u2029/g, '\\u2029');
+  return JSON.stringify(value)
+    .replace(/</g, '\\u003c')
+    .replace(/\u2028/g, '\\u2028')
+    .replace(/\u2029/g, '\\u2029');
 }
 const DEBOUNCE_MS = 200;
 
@@ -228,10 +231,14 @@ export async function serveSite(options: ServeOptions): Promise<SiteServer> {
   // Every add, change, unlink (an atomic save is an unlink and an add of the same path, or a
   // rename over it; chokidar reports the path either way). The site and cache folders are
   // not under the watched ones unless a user put them there: ignore them then.
-  const ignoredRoots = [root, path.resolve(options.cacheDir ?? defaultCacheDir(options.contentDir))];
+  const ignoredRoots = [
+    root,
+    path.resolve(options.cacheDir ?? defaultCacheDir(options.contentDir)),
+  ];
   const watcher: FSWatcher = watch([options.contentDir, TEMPLATES_DIR], {
     ignoreInitial: true,
-    ignored: (file: string) => ignoredRoots.some((r) => file === r || file.startsWith(r + path.sep)),
+    ignored: (file: string) =>
+      ignoredRoots.some((r) => file === r || file.startsWith(r + path.sep)),
   });
   watcher.on('all', schedule);
   await new Promise<void>((resolve) => watcher.once('ready', () => resolve()));

@@ -24,7 +24,18 @@
  * Faults for the tests: STOVECARD_FAULT_AT=<point> kills the process (SIGKILL) at one of
  * FAULT_POINTS, so a test can stop the build between any two steps of the swap.
  */
-import { lstat, mkdir, readdir, readlink, rename, rm, rmdir, stat, symlink, writeFile } from 'node:fs/promises';
+import {
+  lstat,
+  mkdir,
+  readdir,
+  readlink,
+  rename,
+  rm,
+  rmdir,
+  stat,
+  symlink,
+  writeFile,
+} from 'node:fs/promises';
 import path from 'node:path';
 
 /** The file every site the build makes holds at its root: its presence marks our folder. */
@@ -157,8 +168,7 @@ export async function recoverLeftovers(out: string): Promise<string[]> {
     .filter(
       ({ match }) =>
         match !== null &&
-        (!processRuns(Number(match[2])) ||
-          (match[1] === 'v' && Number(match[2]) === process.pid)),
+        (!processRuns(Number(match[2])) || (match[1] === 'v' && Number(match[2]) === process.pid)),
     );
   if ((await lstatOrNull(out)) === null) {
     // Killed between the two renames of a folder-to-link change: the old site goes back.

@@ -42,7 +42,10 @@ export function maxSafeFill(pot: PotModel, startK: number, ambientPa: number): F
 }
 
 /** Height of a fill above the floor and below the valve's lowest edge, m. */
-export function fillHeights(pot: PotModel, fillM3: number): { heightM: number; belowValveM: number } {
+export function fillHeights(
+  pot: PotModel,
+  fillM3: number,
+): { heightM: number; belowValveM: number } {
   const heightM = fillM3 / potGeometry(pot).baseAreaM2;
   return { heightM, belowValveM: pot.valveHeightM - heightM };
 }

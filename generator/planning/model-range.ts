@@ -21,7 +21,8 @@ export function modelRangeWarnings(request: PlanRequest, levelIndex: number | nu
   const warnings: PlanWarning[] = [];
   const outside = (what: keyof typeof CHECKED, value: number): void => {
     const [lo, hi] = CHECKED[what];
-    if (value < lo || value > hi) warnings.push(planNotices.outsideCheckedRange(what, value, lo, hi));
+    if (value < lo || value > hi)
+      warnings.push(planNotices.outsideCheckedRange(what, value, lo, hi));
   };
   outside('permeabilityM2', request.coffee.bed.permeabilityM2);
   const level = levelIndex === null ? undefined : request.stove.levels[levelIndex];
@@ -29,7 +30,10 @@ export function modelRangeWarnings(request: PlanRequest, levelIndex: number | nu
   outside('altitudeM', request.room.altitudeM);
   outside('sealedVolumeM3', request.pot.model.sealedVolumeM3);
   outside('ambientK', request.room.ambientK);
-  if (request.fillM3 !== undefined && request.fillM3 < 2 * potGeometry(request.pot.model).volumeAtTubeEndM3) {
+  if (
+    request.fillM3 !== undefined &&
+    request.fillM3 < 2 * potGeometry(request.pot.model).volumeAtTubeEndM3
+  ) {
     warnings.push(planNotices.smallFill());
   }
   return distinctWarnings(warnings);

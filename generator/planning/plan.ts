@@ -127,7 +127,8 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   }
   // A requested fill must stay below the valve from whatever start it is poured at.
   const starts = startCandidates(request, context.boilingK).filter(
-    (startK) => request.fillM3 === undefined || request.fillM3 <= fillFor(pot, startK, room.ambientPa),
+    (startK) =>
+      request.fillM3 === undefined || request.fillM3 <= fillFor(pot, startK, room.ambientPa),
   );
   if (starts.length === 0) {
     const limit = maxSafeFill(pot.model, room.ambientK, room.ambientPa);
@@ -209,7 +210,9 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   }
   if (candidates.length === 0) {
     if (lowestPeak > limitPa) {
-      return refuse(planNotices.pressureNearValve(lowestPeak, pot.model.valveOpeningGaugePa, coffee.grind));
+      return refuse(
+        planNotices.pressureNearValve(lowestPeak, pot.model.valveOpeningGaugePa, coffee.grind),
+      );
     }
     return refuse(planNotices.noDelivery());
   }
@@ -257,7 +260,8 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
       const high = run(choice.startK, choice.levelIndex, { offS, scale: highCorner, search: true });
       if (high.peakGaugePa <= limitPa) return brew;
       const share = brew.extraction?.inBandShare ?? 0;
-      if (!cornerRejected || share > cornerRejected.share) cornerRejected = { share, highPa: high.peakGaugePa };
+      if (!cornerRejected || share > cornerRejected.share)
+        cornerRejected = { share, highPa: high.peakGaugePa };
       return { ...brew, peakGaugePa: high.peakGaugePa };
     },
     limitPa,
@@ -275,7 +279,11 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     : run(room.ambientK, chosen.levelIndex);
   const shareOf = (r: BrewResult) => r.extraction?.inBandShare ?? 0;
   if (coldChoice && chosen.startK !== room.ambientK && shareOf(brew) < shareOf(coldBrew)) {
-    if (coldBrew.endReason !== 'sputter' && coldBrew.peakGaugePa <= limitPa && coldBrew.extraction) {
+    if (
+      coldBrew.endReason !== 'sputter' &&
+      coldBrew.peakGaugePa <= limitPa &&
+      coldBrew.extraction
+    ) {
       chosen = coldChoice;
       brew = coldBrew;
     }
@@ -285,7 +293,10 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   const corners = cornersOf(spread).map((scale) =>
     run(chosen.startK, chosen.levelIndex, { series: true, scale, search: true }),
   );
-  const firstTimes = [brew.firstCoffeeS!, ...corners.map((r) => r.firstCoffeeS ?? brew.firstCoffeeS!)];
+  const firstTimes = [
+    brew.firstCoffeeS!,
+    ...corners.map((r) => r.firstCoffeeS ?? brew.firstCoffeeS!),
+  ];
   const offTimes = [chosen.offS, ...corners.map((r) => timeAtCup(r, offCupM3) ?? chosen.offS)];
   const fill = request.fillM3 ?? fillFor(pot, chosen.startK, room.ambientPa);
   const heights = fillHeights(pot.model, fill);
@@ -294,7 +305,14 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   const bindingCause =
     extraction.inBandShare < BINDING_SHARE
       ? bindingCauseOf(
-          { share: extraction.inBandShare, extraction, deliveryS, window, cups: pot.cups, bandK: coffee.bed.targetBandK },
+          {
+            share: extraction.inBandShare,
+            extraction,
+            deliveryS,
+            window,
+            cups: pot.cups,
+            bandK: coffee.bed.targetBandK,
+          },
           // A what-if: the best share over the coarse starts with the inputs scaled.
           (scale) => {
             let bestShare = 0;
@@ -302,7 +320,9 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
               let heatOnRun: HeatOnBrew;
               try {
                 simulations++;
-                heatOnRun = simulateHeatOn(setupOf(startK, chosen.levelIndex, { scale, search: true }));
+                heatOnRun = simulateHeatOn(
+                  setupOf(startK, chosen.levelIndex, { scale, search: true }),
+                );
               } catch (error) {
                 if (error instanceof BrewSetupError) continue;
                 throw error;
@@ -321,7 +341,9 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
           stove.levels[0]!.heatToPotW,
           stove.levels[chosen.levelIndex]!.heatToPotW,
           coffee.bed.permeabilityM2,
-          cornerRejected === null ? null : { ...(cornerRejected as { share: number; highPa: number }), limitPa },
+          cornerRejected === null
+            ? null
+            : { ...(cornerRejected as { share: number; highPa: number }), limitPa },
         )
       : null;
   const plan: AcceptedPlan = {
@@ -393,7 +415,8 @@ export function fillFor(pot: PotEntry, startK: number, ambientPa: number): numbe
  * and of grinds within one class).
  */
 export function inputSpread(coffee: CoffeeEntry, stove: StoveEntry): InputSpread {
-  const sigma = (v: number | undefined) => (v !== undefined && Number.isFinite(v) && v > 0 ? v : undefined);
+  const sigma = (v: number | undefined) =>
+    v !== undefined && Number.isFinite(v) && v > 0 ? v : undefined;
   const kSigma = sigma((coffee as { permeabilitySigmaRel?: number }).permeabilitySigmaRel);
   const anyFitted = stove.levels.some((l) => l.fitted);
   const heatSigma = sigma((stove as { heatSigmaRel?: number }).heatSigmaRel);
@@ -403,7 +426,9 @@ export function inputSpread(coffee: CoffeeEntry, stove: StoveEntry): InputSpread
     permeabilityFactor: permeabilityMeasured
       ? 1 + Math.min(1, 2 * (kSigma ?? MEASURED_PERMEABILITY_REL))
       : ASSUMED_PERMEABILITY_FACTOR,
-    heatShare: heatMeasured ? Math.min(0.5, 2 * (heatSigma ?? MEASURED_HEAT_REL)) : ASSUMED_HEAT_SHARE,
+    heatShare: heatMeasured
+      ? Math.min(0.5, 2 * (heatSigma ?? MEASURED_HEAT_REL))
+      : ASSUMED_HEAT_SHARE,
     permeabilityMeasured,
     heatMeasured,
   };
@@ -416,7 +441,8 @@ const MEASURED_PERMEABILITY_REL = 0.15;
 const MEASURED_HEAT_REL = 0.05;
 
 function cornersOf(spread: InputSpread): { permeability: number; heat: number }[] {
-  const k = spread.permeabilityFactor, h = spread.heatShare;
+  const k = spread.permeabilityFactor,
+    h = spread.heatShare;
   return [
     { permeability: 1 / k, heat: 1 - h },
     { permeability: 1 / k, heat: 1 + h },
@@ -474,10 +500,16 @@ function bindingCauseOf(
   const finer = whatIf({ permeability: 0.5, heat: 1 });
   const gain = Math.max(gentler, finer) - at.share;
   if (gain >= CAUSE_GAIN && gentler >= finer) {
-    return { code: 'gentlest-heat-too-strong', facts: { ...base, gentlestW, shareAtHalfHeat: gentler } };
+    return {
+      code: 'gentlest-heat-too-strong',
+      facts: { ...base, gentlestW, shareAtHalfHeat: gentler },
+    };
   }
   if (gain >= CAUSE_GAIN) {
-    return { code: 'bed-too-open', facts: { ...base, permeabilityM2, shareAtHalfPermeability: finer } };
+    return {
+      code: 'bed-too-open',
+      facts: { ...base, permeabilityM2, shareAtHalfPermeability: finer },
+    };
   }
   if (at.deliveryS < at.window[0]) {
     return { code: 'pot-too-small-for-window', facts: { ...base, cups: at.cups } };
@@ -581,11 +613,14 @@ function bestOffHeat(
   };
   type S = ReturnType<typeof score>;
   const wins = (a: S, b: S): boolean => {
-    return Math.abs(a.value - b.value) > SHARE_RESOLUTION ? a.value > b.value : a.result.yieldM3 > b.result.yieldM3;
+    return Math.abs(a.value - b.value) > SHARE_RESOLUTION
+      ? a.value > b.value
+      : a.result.yieldM3 > b.result.yieldM3;
   };
   if (latest - earliest < 2) return score(latest);
   const phi = (Math.sqrt(5) - 1) / 2;
-  let a = earliest, b = latest;
+  let a = earliest,
+    b = latest;
   let x1 = score(b - phi * (b - a));
   let x2 = score(a + phi * (b - a));
   let best = wins(x1, x2) ? x1 : x2;
@@ -619,7 +654,7 @@ export function firstPrintable<C extends { readonly offS: number }>(
   printedRun: (choice: C, offS: number) => BrewResult,
   limitPa: number,
 ): { chosen: C; brew: BrewResult } | null {
-  for (const left = [...choices]; left.length > 0; ) {
+  for (const left = [...choices]; left.length > 0;) {
     const next = left.reduce((best, other) => (better(other, best) ? other : best));
     left.splice(left.indexOf(next), 1);
     for (let retry = 0; retry <= EDGE_RETRIES; retry++) {
@@ -641,7 +676,8 @@ export function firstPrintable<C extends { readonly offS: number }>(
 function better(a: Scored, b: Scored, presets: ReadonlySet<number>): boolean {
   if (Math.abs(a.value - b.value) > TIE_SHARE) return a.value > b.value;
   if (a.levelIndex !== b.levelIndex) return a.levelIndex < b.levelIndex;
-  const aPreset = presets.has(a.startK), bPreset = presets.has(b.startK);
+  const aPreset = presets.has(a.startK),
+    bPreset = presets.has(b.startK);
   if (aPreset !== bPreset) return aPreset;
   if (a.startK !== b.startK) return a.startK < b.startK;
   return a.share > b.share;
@@ -650,7 +686,9 @@ function better(a: Scored, b: Scored, presets: ReadonlySet<number>): boolean {
 /** True when, even on the gentlest candidates, the delivery finishes before the window opens. */
 function tooFast(candidates: readonly Candidate[], windowLowS: number): boolean {
   return candidates.every(
-    (c) => (c.run.result.sputterS ?? Infinity) - c.run.result.firstCoffeeS! < windowLowS + SPUTTER_LEAD_S,
+    (c) =>
+      (c.run.result.sputterS ?? Infinity) - c.run.result.firstCoffeeS! <
+      windowLowS + SPUTTER_LEAD_S,
   );
 }
 
@@ -668,10 +706,10 @@ function timeAtCup(result: BrewResult, cupM3: number): number | null {
   const s = result.series;
   for (let i = 1; i < s.length; i++) {
     if (s[i]!.cupM3 >= cupM3) {
-      const a = s[i - 1]!, b = s[i]!;
+      const a = s[i - 1]!,
+        b = s[i]!;
       return a.tS + ((b.tS - a.tS) * (cupM3 - a.cupM3)) / (b.cupM3 - a.cupM3 || 1);
     }
   }
   return null;
 }
-

@@ -23,7 +23,12 @@ export interface BrewChoice {
   readonly relativeTolerance?: number;
 }
 
-export function brewSetup(pot: PotModel, bed: BedModel, room: RoomModel, choice: BrewChoice): BrewSetup {
+export function brewSetup(
+  pot: PotModel,
+  bed: BedModel,
+  room: RoomModel,
+  choice: BrewChoice,
+): BrewSetup {
   return {
     pot,
     bed,

@@ -21,11 +21,19 @@ export type Refusal =
   | { readonly code: 'induction-needs-magnetic-base'; readonly facts: { readonly potName: string } }
   | {
       readonly code: 'fill-above-valve';
-      readonly facts: { readonly askedM3: number; readonly limitM3: number; readonly marginM: number };
+      readonly facts: {
+        readonly askedM3: number;
+        readonly limitM3: number;
+        readonly marginM: number;
+      };
     }
   | {
       readonly code: 'pressure-near-valve';
-      readonly facts: { readonly peakPa: number; readonly valvePa: number; readonly grind: GrindClass };
+      readonly facts: {
+        readonly peakPa: number;
+        readonly valvePa: number;
+        readonly grind: GrindClass;
+      };
     }
   | { readonly code: 'no-delivery'; readonly facts: Record<string, never> }
   | {
@@ -36,7 +44,8 @@ export type Refusal =
 export type RefusalCode = Refusal['code'];
 
 /** An input the model was checked for, by name (SI values; see model-range.ts). */
-export type CheckedQuantity = 'permeabilityM2' | 'heatToPotW' | 'altitudeM' | 'sealedVolumeM3' | 'ambientK';
+export type CheckedQuantity =
+  'permeabilityM2' | 'heatToPotW' | 'altitudeM' | 'sealedVolumeM3' | 'ambientK';
 
 /** Something a card should say beside its recipe, as a code and SI facts. */
 export type PlanWarning =

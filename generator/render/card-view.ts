@@ -506,7 +506,8 @@ async function recipe(
 export function bindingCauseText(plan: AcceptedPlan, units: UnitSystem): string {
   const cause = plan.bindingCause!;
   const f = cause.facts;
-  const opt = <T>(v: T | undefined, fmt: (v: T) => object): object => (v === undefined ? {} : fmt(v));
+  const opt = <T>(v: T | undefined, fmt: (v: T) => object): object =>
+    v === undefined ? {} : fmt(v);
   return cardWords.expect.bindingCause(cause.code, {
     share: share(f.share).text,
     band: temperatureBand([f.bandLowK, f.bandHighK], units),

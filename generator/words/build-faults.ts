@@ -10,11 +10,15 @@ const FS_ADVICE: Record<string, string> = {
   EACCES: 'permission denied: make it writable for you (chmod/chown) or choose another folder',
   EPERM: 'the operation is not permitted there: choose another folder',
   EROFS: 'the file system is read-only: choose a folder on a writable disk',
-  ENOSPC: 'the disk is full: free some space (the build needs about twice the site) and build again',
+  ENOSPC:
+    'the disk is full: free some space (the build needs about twice the site) and build again',
   EDQUOT: 'your disk quota is used up: free some space and build again',
-  EBUSY: 'it is in use by another program (an open window, a server, a sync tool): close that and build again',
-  ENAMETOOLONG: 'the path is too long for the file system: use a shorter --out or content path, or shorter ids',
-  ENOTDIR: 'a part of the path is a file, not a folder: remove or rename that file, or choose another path',
+  EBUSY:
+    'it is in use by another program (an open window, a server, a sync tool): close that and build again',
+  ENAMETOOLONG:
+    'the path is too long for the file system: use a shorter --out or content path, or shorter ids',
+  ENOTDIR:
+    'a part of the path is a file, not a folder: remove or rename that file, or choose another path',
   EISDIR: 'a folder is in the way where a file belongs: remove or rename it',
   EMFILE: 'too many files are open: raise the limit (ulimit -n) and build again',
   ENFILE: 'too many files are open on this system: close some programs and build again',
@@ -43,7 +47,8 @@ export const faultWords = {
     `--out ${shown(outDir)} is a link that leads to itself; remove the link or choose another folder`,
   /** A file-system failure: the path, what went wrong and what to change. */
   fileSystem: (code: string, file: string | undefined): string => {
-    const advice = FS_ADVICE[code] ?? `the file system refused (${code}): check the path and build again`;
+    const advice =
+      FS_ADVICE[code] ?? `the file system refused (${code}): check the path and build again`;
     return file === undefined ? `${advice} (${code})` : `${shown(file)}: ${advice} (${code})`;
   },
   knownFileSystemCode: (code: string): boolean => code in FS_ADVICE,
@@ -75,7 +80,13 @@ export const faultWords = {
     `${flag} ${value} is outside ${min}–${max} ${unit}, the range the model covers (as site.yaml's room); give a value inside it`,
   /** `plan`'s summary when a cold start would deliver no coffee (its mean is not a number). */
   coldStartNoCoffee: 'cold start: no coffee reaches the cup',
-  qrTooDense: (url: string, modules: number, moduleMm: number, printedMm: number, minMm: number): string =>
+  qrTooDense: (
+    url: string,
+    modules: number,
+    moduleMm: number,
+    printedMm: number,
+    minMm: number,
+  ): string =>
     `site.yaml base_url: the QR code of ${shown(url)} needs ${modules} modules across ${printedMm.toFixed(1)} mm (${moduleMm.toFixed(2)} mm each, under the ${minMm} mm a phone reads); shorten base_url or the ids in the address`,
   pageCollision: (page: string, first: string, second: string): string =>
     `two cards would share the page ${shown(page)}: ${shown(first)} and ${shown(second)}; rename one of the ids`,

@@ -95,7 +95,8 @@ export const cardWords = {
     thisCard: 'This card',
     coldStart: 'Cold start',
     band: (band: string): string => `Target ${band}`,
-    caption: 'Brewing temperature: the water’s as it reaches the grounds (the SCA’s point of contact).',
+    caption:
+      'Brewing temperature: the water’s as it reaches the grounds (the SCA’s point of contact).',
     alt: (plan: string, cold: string, band: string): string =>
       `Chart: brewing temperature against coffee in the cup. This card: ${plan} of the cup in the target ${band}; from a cold start: ${cold}.`,
   },
@@ -428,7 +429,8 @@ export const buildWords = {
     `serving ${url} (Ctrl-C to stop); rebuilding when ${contentDir} or the templates change`,
   rebuilt: (summary: string): string => `rebuilt: ${summary}`,
   /** Heading of the browser's overlay when a rebuild failed (the page under it is the last good one). */
-  overlayHeading: 'The last rebuild failed; this page is the last good build. Fix the problem below and save:',
+  overlayHeading:
+    'The last rebuild failed; this page is the last good build. Fix the problem below and save:',
   rebuildFailed: (message: string): string =>
     `rebuild failed, still serving the last good site:\n${message}`,
   badPort: (raw: string): string => `--port expects a whole number from 1 to 65535, got "${raw}"`,

@@ -35,7 +35,8 @@ type LengthUnit = 'mm' | 'in';
 
 /** A length as the person wrote it: "32 mm", "1.26 in"; `digits` fixes the decimals of a computed one. */
 function len(value: number, unit: LengthUnit, digits?: number): string {
-  const shown = digits === undefined ? String(value) : value.toFixed(unit === 'in' ? digits + 2 : digits);
+  const shown =
+    digits === undefined ? String(value) : value.toFixed(unit === 'in' ? digits + 2 : digits);
   return `${shown} ${unit}`;
 }
 
@@ -149,7 +150,8 @@ export function shown(value: unknown, sourceText?: string): string {
     const rest = value.length - cut.length;
     return `${escapeUnsafe(JSON.stringify(cut))}${rest > 0 ? `…(+${rest} characters)` : ''}`;
   }
-  if (typeof value === 'number') return sourceText === undefined ? String(value) : shownText(sourceText);
+  if (typeof value === 'number')
+    return sourceText === undefined ? String(value) : shownText(sourceText);
   if (typeof value === 'boolean') return String(value);
   if (Array.isArray(value)) return value.length === 0 ? 'an empty list' : 'a list';
   return 'a mapping';
@@ -180,7 +182,9 @@ function exampleFix(spec: ValueSpec): string {
 }
 
 /** One factory per content message key (generator/content/messages.ts): a missing one fails tsc. */
-type MessageWords = { readonly [K in ContentMessageKey]: (...args: ContentMessageArgs[K]) => Wording };
+type MessageWords = {
+  readonly [K in ContentMessageKey]: (...args: ContentMessageArgs[K]) => Wording;
+};
 
 const messageWords = {
   // ── Reading the file ────────────────────────────────────────────────────────────────
@@ -448,7 +452,13 @@ const messageWords = {
     };
   },
 
-  lengthMissing(mmKey: string, inKey: string, parentField: string, mmSpec: ValueSpec, inSpec: ValueSpec): Wording {
+  lengthMissing(
+    mmKey: string,
+    inKey: string,
+    parentField: string,
+    mmSpec: ValueSpec,
+    inSpec: ValueSpec,
+  ): Wording {
     const example = (key: string, spec: ValueSpec): string =>
       code(spec.example === undefined ? `${key}: …` : `${key}: ${showExample(spec.example)}`);
     return {
@@ -593,7 +603,8 @@ const messageWords = {
   /** A control or bidirectional-control character in a key or text (entry-file.ts). */
   unsafeCharacter(codePoint: number): Wording {
     const hex = codePoint.toString(16).toUpperCase().padStart(4, '0');
-    const bidi = (codePoint >= 0x202a && codePoint <= 0x202e) || (codePoint >= 0x2066 && codePoint <= 0x2069);
+    const bidi =
+      (codePoint >= 0x202a && codePoint <= 0x202e) || (codePoint >= 0x2066 && codePoint <= 0x2069);
     return {
       problem: bidi
         ? `the text holds U+${hex}, an invisible direction control that would reorder the printed text`
@@ -607,8 +618,10 @@ const messageWords = {
     const problems: Record<string, string> = {
       'not-a-url': 'base_url is not a web address',
       scheme: 'base_url must start with https:// or http://',
-      query: 'base_url holds a `?query`: every card’s address would end in it, and every QR code would open the same page',
-      fragment: 'base_url holds a `#fragment`: every card’s address would end in it, and every QR code would open the same page',
+      query:
+        'base_url holds a `?query`: every card’s address would end in it, and every QR code would open the same page',
+      fragment:
+        'base_url holds a `#fragment`: every card’s address would end in it, and every QR code would open the same page',
       credentials: 'base_url holds a user name or password, which would be printed on every card',
       'too-long': `base_url is longer than ${maxLength} characters, too long for a QR code a phone can read at the printed size`,
     };
@@ -621,7 +634,8 @@ const messageWords = {
   /** A content file that is a link to a place outside the content folder (catalogue.ts). */
   linkOutside(): Wording {
     return {
-      problem: 'this is a link to a file outside the content folder, which the build does not follow',
+      problem:
+        'this is a link to a file outside the content folder, which the build does not follow',
       fix: 'Copy the file into the content folder, or link to a file inside it.',
     };
   },
@@ -668,7 +682,11 @@ export function formatContentErrors(error: { readonly issues: readonly IssueAt[]
   const files = new Set(error.issues.map((issue) => issue.file)).size;
   const shown = error.issues.slice(0, MAX_REPORTED).map(issueLine);
   const more = error.issues.length - shown.length;
-  return [errorsHeading(error.issues.length, files), ...shown, ...(more > 0 ? [moreInReport(more)] : [])].join('\n');
+  return [
+    errorsHeading(error.issues.length, files),
+    ...shown,
+    ...(more > 0 ? [moreInReport(more)] : []),
+  ].join('\n');
 }
 
 export const contentWords = { ...messageWords, wording, issueLine, errorsHeading, moreInReport };

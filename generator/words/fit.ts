@@ -70,7 +70,13 @@ const table = (rows: readonly (readonly string[])[], indent = '  '): string[] =>
 /** What would inform a parameter the log could not pin down. */
 /** Held inputs, in words for the plain summary. */
 function plainName(id: string): string {
-  return id === 'retention' ? "grounds' water retention" : id === 'permeability' ? 'coffee bed' : id === 'heat-loss' ? "pot's heat loss" : `stove's ${id.replace('heat:', '')} setting`;
+  return id === 'retention'
+    ? "grounds' water retention"
+    : id === 'permeability'
+      ? 'coffee bed'
+      : id === 'heat-loss'
+        ? "pot's heat loss"
+        : `stove's ${id.replace('heat:', '')} setting`;
 }
 
 const wouldInform: Record<KeptLine['parameterKind'], string> = {
@@ -135,7 +141,13 @@ export const fitWords = {
 
   // ── The report: plain words first, for the person running the café ───────────────────
   plainHeading: 'In short:',
-  plainHeat: (stove: string, level: string, watts: string, percent: string, entangled: readonly string[]): string =>
+  plainHeat: (
+    stove: string,
+    level: string,
+    watts: string,
+    percent: string,
+    entangled: readonly string[],
+  ): string =>
     `  Your ${stove}'s ${level} puts about ${watts} W into this pot, give or take ${percent} %${entangled.length ? ` (part of that doubt is the ${entangled.map(plainName).join(' and ')}, which this log cannot separate)` : ''}.`,
   plainPermeability: (coffee: string, percent: string, entangled: readonly string[]): string =>
     `  ${coffee} lets water through the bed as measured, give or take ${percent} %${entangled.length ? ` (not separable from the ${entangled.map(plainName).join(' and ')})` : ''}.`,
@@ -145,7 +157,8 @@ export const fitWords = {
     `  These readings do not agree with each other: brew${brews.length === 1 ? '' : 's'} ${brews.map((b) => b + 1).join(', ')} ${brews.length === 1 ? 'stands' : 'stand'} out. Check ${brews.length === 1 ? 'its' : 'their'} numbers, the stove level and the grind used that day before writing anything back.`,
   plainPrediction: (rms: string): string =>
     `  Each brew, predicted from the others alone, is off by about ${rms} times what a stopwatch, scale or probe can tell apart${Number(rms) <= 2 ? ': the values carry over to brews not in the log' : ': treat cards made from these values as rough'}.`,
-  plainNothing: '  This log cannot pin down anything yet: time the first coffee and the sputter of a few brews.',
+  plainNothing:
+    '  This log cannot pin down anything yet: time the first coffee and the sputter of a few brews.',
 
   // ── The report ──────────────────────────────────────────────────────────────────────
   heading: (log: string, pot: string, coffee: string, stove: string): string =>
@@ -170,7 +183,13 @@ export const fitWords = {
         ),
   keptHeading: "Not identifiable from this log, kept at the entry's value:",
   /** Fitted σ = readings' part ⊕ what the held values' own doubt adds. */
-  sigmaParts: (key: string, owner: string, readings: string, total: string, entangled: readonly string[]): string =>
+  sigmaParts: (
+    key: string,
+    owner: string,
+    readings: string,
+    total: string,
+    entangled: readonly string[],
+  ): string =>
     `  ${key} (${owner}): ± ${readings} % from the readings, ± ${total} % with the doubt of ${entangled.length ? entangled.join(', ') : 'the values held'}`,
   sigmaPartsHeading: 'Of which the held values (at their priors, with their own doubt) add:',
   keptLine: (l: KeptLine): string =>

@@ -54,12 +54,17 @@ export function referenceSetup(overrides: Partial<BrewSetup> = {}): BrewSetup {
 }
 
 /** Share of the cup extracted below a temperature, from the cup curve (linear pieces). */
-export function shareBelow(curve: readonly { cupM3: number; extractionK: number }[], k: number): number {
+export function shareBelow(
+  curve: readonly { cupM3: number; extractionK: number }[],
+  k: number,
+): number {
   let below = 0;
   for (let i = 1; i < curve.length; i++) {
-    const a = curve[i - 1]!, b = curve[i]!;
+    const a = curve[i - 1]!,
+      b = curve[i]!;
     const dv = b.cupM3 - a.cupM3;
-    const lo = Math.min(a.extractionK, b.extractionK), hi = Math.max(a.extractionK, b.extractionK);
+    const lo = Math.min(a.extractionK, b.extractionK),
+      hi = Math.max(a.extractionK, b.extractionK);
     if (k >= hi) below += dv;
     else if (k > lo) below += (dv * (k - lo)) / (hi - lo);
   }

@@ -28,28 +28,28 @@ const potArb = fc
     massG: fc.double({ min: 60, max: 700, noNaN: true }),
     valveBar: fc.double({ min: 1, max: 2.5, noNaN: true }),
   })
-  .map(
-    (p): PotModel => ({
-      sealedVolumeM3: (Math.PI * (p.diameterMm / 1000) ** 2 * (p.heightMm / 1000)) / 4,
-      baseInnerDiameterM: p.diameterMm / 1000,
-      valveHeightM: (p.valveShare * p.heightMm) / 1000,
-      valveOpeningGaugePa: p.valveBar * 1e5,
-      baseMaterial: p.steel ? 'stainless-steel' : 'aluminium',
-      baseMassKg: p.massG / 1000,
-      basketDiameterM: (p.basketShare * p.diameterMm) / 1000,
-      basketDepthM: p.basketDepthMm / 1000,
-      tubeInnerDiameterM: p.tubeMm / 1000,
-      tubeGapM: p.gapMm / 1000,
-      spoutHeightM: (p.heightMm + p.basketDepthMm + p.columnMm) / 1000,
-      upperCapacityM3: 500e-6,
-      heatLossWPerK: 0.05 + (p.diameterMm / 1000) * 2,
-    }),
-  );
+  .map((p): PotModel => ({
+    sealedVolumeM3: (Math.PI * (p.diameterMm / 1000) ** 2 * (p.heightMm / 1000)) / 4,
+    baseInnerDiameterM: p.diameterMm / 1000,
+    valveHeightM: (p.valveShare * p.heightMm) / 1000,
+    valveOpeningGaugePa: p.valveBar * 1e5,
+    baseMaterial: p.steel ? 'stainless-steel' : 'aluminium',
+    baseMassKg: p.massG / 1000,
+    basketDiameterM: (p.basketShare * p.diameterMm) / 1000,
+    basketDepthM: p.basketDepthMm / 1000,
+    tubeInnerDiameterM: p.tubeMm / 1000,
+    tubeGapM: p.gapMm / 1000,
+    spoutHeightM: (p.heightMm + p.basketDepthMm + p.columnMm) / 1000,
+    upperCapacityM3: 500e-6,
+    heatLossWPerK: 0.05 + (p.diameterMm / 1000) * 2,
+  }));
 
 const setupArb = fc
   .record({
     pot: potArb,
-    permeabilityM2: fc.double({ min: Math.log(2e-14), max: Math.log(1e-11), noNaN: true }).map(Math.exp),
+    permeabilityM2: fc
+      .double({ min: Math.log(2e-14), max: Math.log(1e-11), noNaN: true })
+      .map(Math.exp),
     bulkDensity: fc.double({ min: 300, max: 450, noNaN: true }),
     retention: fc.double({ min: 0.8, max: 2, noNaN: true }),
     heatW: fc.double({ min: 40, max: 1500, noNaN: true }),
@@ -115,9 +115,12 @@ describe('simulateBrew over random valid setups (fast-check, seeded)', () => {
           expect(Math.abs(residual) / b.heatInJ).toBeLessThan(0.005);
         }
         const t = (kind: string) => r.events.find((e) => e.kind === kind)?.tS;
-        const flow = t('flow-start'), first = t('first-coffee'), sputter = t('sputter');
+        const flow = t('flow-start'),
+          first = t('first-coffee'),
+          sputter = t('sputter');
         if (first !== undefined) expect(flow).toBeLessThanOrEqual(first);
-        if (first !== undefined && sputter !== undefined) expect(first).toBeLessThanOrEqual(sputter);
+        if (first !== undefined && sputter !== undefined)
+          expect(first).toBeLessThanOrEqual(sputter);
         for (let i = 1; i < r.series.length; i++) {
           // Integration noise of 1e-10 m³ (1e-4 mL) is allowed: the error norm is an RMS over
           // the state, so one component may exceed its atol (1e-12 m³).

@@ -56,15 +56,21 @@ describe('directions that must hold', () => {
   });
 
   it('more headspace air at a cold start gives cooler extraction; less air a later first coffee', () => {
-    const moreAir = simulateBrew(referenceSetup({ pot: { ...referencePot, sealedVolumeM3: 280e-6 } }));
-    const lessAir = simulateBrew(referenceSetup({ pot: { ...referencePot, sealedVolumeM3: 220e-6 } }));
+    const moreAir = simulateBrew(
+      referenceSetup({ pot: { ...referencePot, sealedVolumeM3: 280e-6 } }),
+    );
+    const lessAir = simulateBrew(
+      referenceSetup({ pot: { ...referencePot, sealedVolumeM3: 220e-6 } }),
+    );
     expect(moreAir.extraction!.meanK).toBeLessThan(cold.extraction!.meanK);
     expect(lessAir.extraction!.meanK).toBeGreaterThan(cold.extraction!.meanK);
     expect(lessAir.firstCoffeeS!).toBeGreaterThan(cold.firstCoffeeS!);
   });
 
   it('a tighter, less permeable bed slows the flow and raises the peak pressure', () => {
-    const tight = simulateBrew(referenceSetup({ bed: { ...referenceSetup().bed, permeabilityM2: 2e-13 } }));
+    const tight = simulateBrew(
+      referenceSetup({ bed: { ...referenceSetup().bed, permeabilityM2: 2e-13 } }),
+    );
     const delivery = (r: BrewResult) => r.yieldM3 / (r.endS - r.firstCoffeeS!);
     expect(delivery(tight)).toBeLessThan(delivery(cold));
     expect(tight.peakGaugePa).toBeGreaterThan(cold.peakGaugePa);
@@ -119,7 +125,9 @@ describe('invariants (closed form: conservation of mass and energy, event order)
 
   it.each(runs)('events are ordered and the cup never shrinks (%s)', (_name, r) => {
     const t = (kind: string) => r.events.find((e) => e.kind === kind)?.tS;
-    const flow = t('flow-start')!, first = t('first-coffee'), sputter = t('sputter');
+    const flow = t('flow-start')!,
+      first = t('first-coffee'),
+      sputter = t('sputter');
     if (first !== undefined) expect(flow).toBeLessThanOrEqual(first);
     if (first !== undefined && sputter !== undefined) expect(first).toBeLessThanOrEqual(sputter);
     for (let i = 1; i < r.series.length; i++) {
@@ -133,7 +141,9 @@ describe('invariants (closed form: conservation of mass and energy, event order)
     const g = potGeometry(setup.pot);
     const retention = (setup.bed.retentionKgPerKg * r.doseKg) / 1000;
     // Volumes at the hot end are a little larger than when poured: allow 4 % expansion.
-    expect(r.yieldM3).toBeLessThanOrEqual(1.04 * setup.fillVolumeM3 - retention - g.volumeAtTubeEndM3);
+    expect(r.yieldM3).toBeLessThanOrEqual(
+      1.04 * setup.fillVolumeM3 - retention - g.volumeAtTubeEndM3,
+    );
     expect(r.yieldM3).toBeGreaterThan(0);
   });
 });
@@ -154,11 +164,13 @@ describe('quasi-static limit (closed form: ideal-gas law with IF97 p_sat): very 
     });
     const r = simulateBrew(setup);
     const i = r.series.findIndex((p) => p.waterK >= targetK);
-    const a = r.series[i - 1]!, b = r.series[i]!;
+    const a = r.series[i - 1]!,
+      b = r.series[i]!;
     const f = (targetK - a.waterK) / (b.waterK - a.waterK);
     const gaugePa = a.gaugePa + f * (b.gaugePa - a.gaugePa);
     const liquid = a.baseLiquidM3 + f * (b.baseLiquidM3 - a.baseLiquidM3);
-    const t0 = setup.startK, pAmb = setup.room.ambientPa;
+    const t0 = setup.startK,
+      pAmb = setup.room.ambientPa;
     const airVolume0 = sealedM3 - setup.fillVolumeM3;
     const formula =
       airVolume0 *
@@ -168,11 +180,14 @@ describe('quasi-static limit (closed form: ideal-gas law with IF97 p_sat): very 
     return { simulated: setup.fillVolumeM3 - liquid, formula, airVolume0, gaugePa };
   }
 
-  it.each([50, 60, 70])('the displaced volume matches the gas-law formula within 2 percent at %i °C', (tC) => {
-    const { simulated, formula, gaugePa } = compare(250e-6, tC + C);
-    expect(gaugePa).toBeGreaterThan(0);
-    expect(Math.abs(simulated - formula) / formula).toBeLessThan(0.02);
-  });
+  it.each([50, 60, 70])(
+    'the displaced volume matches the gas-law formula within 2 percent at %i °C',
+    (tC) => {
+      const { simulated, formula, gaugePa } = compare(250e-6, tC + C);
+      expect(gaugePa).toBeGreaterThan(0);
+      expect(Math.abs(simulated - formula) / formula).toBeLessThan(0.02);
+    },
+  );
 
   it('the displaced volume is linear in the initial air volume (within 2 %)', () => {
     const small = compare(220e-6, 60 + C);

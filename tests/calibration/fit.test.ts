@@ -119,7 +119,9 @@ describe('fitLog: U·A', () => {
     // (fit.ts RETENTION_SIGMA_LN): the value still lies within 3σ of the truth.
     expect(ua.statisticalRelativeSigma).toBeLessThanOrEqual(0.5);
     expectRelative(ua.value, truth.heatLossWPerK, 0.35, 'U·A from probe readings');
-    expect(Math.abs(Math.log(ua.value / truth.heatLossWPerK))).toBeLessThanOrEqual(3 * ua.relativeSigma);
+    expect(Math.abs(Math.log(ua.value / truth.heatLossWPerK))).toBeLessThanOrEqual(
+      3 * ua.relativeSigma,
+    );
   });
 
   // own rule: the fit recovers the synthetic truth it was given, not an outside value

@@ -137,17 +137,32 @@ describe('plannedEdits', () => {
 
 describe('editedText: provenance beside the value', () => {
   it('adds the note as a comment, keeps a comment the user wrote, and replaces an earlier note', () => {
-    const text = 'name: X\npermeability_m2: 0.8e-12 # from the grind chart\nretention_g_per_g: 1.2\n';
+    const text =
+      'name: X\npermeability_m2: 0.8e-12 # from the grind chart\nretention_g_per_g: 1.2\n';
     const once = editedText(text, 'c.yaml', [
-      { path: ['permeability_m2'], value: 1.08e-12, note: 'fitted ± 9 % from logs/a.yaml, 2026-12-02' },
-      { path: ['retention_g_per_g'], value: 1.3, note: 'fitted ± 4 % from logs/a.yaml, 2026-12-02' },
+      {
+        path: ['permeability_m2'],
+        value: 1.08e-12,
+        note: 'fitted ± 9 % from logs/a.yaml, 2026-12-02',
+      },
+      {
+        path: ['retention_g_per_g'],
+        value: 1.3,
+        note: 'fitted ± 4 % from logs/a.yaml, 2026-12-02',
+      },
     ]);
     expect(once).toBe(
       'name: X\npermeability_m2: 1.08e-12 # from the grind chart; fitted ± 9 % from logs/a.yaml, 2026-12-02\nretention_g_per_g: 1.3 # fitted ± 4 % from logs/a.yaml, 2026-12-02\n',
     );
     const twice = editedText(once, 'c.yaml', [
-      { path: ['permeability_m2'], value: 1.1e-12, note: 'fitted ± 5 % from logs/b.yaml, 2026-12-03' },
+      {
+        path: ['permeability_m2'],
+        value: 1.1e-12,
+        note: 'fitted ± 5 % from logs/b.yaml, 2026-12-03',
+      },
     ]);
-    expect(twice.split('\n')[1]).toBe('permeability_m2: 1.1e-12 # from the grind chart; fitted ± 5 % from logs/b.yaml, 2026-12-03');
+    expect(twice.split('\n')[1]).toBe(
+      'permeability_m2: 1.1e-12 # from the grind chart; fitted ± 5 % from logs/b.yaml, 2026-12-03',
+    );
   });
 });

@@ -1,11 +1,7 @@
 import { readdir, readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import {
-  ContentErrors,
-  loadCatalogue,
-  type Catalogue,
-} from '../../generator/content/index.ts';
+import { ContentErrors, loadCatalogue, type Catalogue } from '../../generator/content/index.ts';
 import { MAX_CONTENT_FILE_BYTES } from '../../generator/content/file-bytes.ts';
 import { MAX_ALIAS_COUNT } from '../../generator/content/yaml-source.ts';
 import { contentWords, wording, formatContentErrors } from '../../generator/words/content.ts';

@@ -156,7 +156,9 @@ export function expectIssue(
   if (expected.column !== undefined) expect(issue.column, String(issue)).toBe(expected.column);
   if (expected.code !== undefined) expect(issue.code, String(issue)).toBe(expected.code);
   if (expected.wording !== undefined) {
-    expect({ problem: wording(issue.message).problem, fix: wording(issue.message).fix }).toEqual(expected.wording);
+    expect({ problem: wording(issue.message).problem, fix: wording(issue.message).fix }).toEqual(
+      expected.wording,
+    );
   }
   expect(wording(issue.message).fix.length, 'every issue says how to fix it').toBeGreaterThan(0);
   return issue;

@@ -199,7 +199,10 @@ describe('loadPotFile names the file as given', () => {
 describe('pot lengths in inches (`_in` instead of `_mm`)', () => {
   /** The test pot with every length in inches: 1 in = 25.4 mm exactly (NIST SP 811, B.8). */
   const inches = (text: string): string =>
-    text.replace(/^(\s*)(\w+)_mm: ([\d.]+)/gm, (_, indent, key, mm) => `${indent}${key}_in: ${Number(mm) / 25.4}`);
+    text.replace(
+      /^(\s*)(\w+)_mm: ([\d.]+)/gm,
+      (_, indent, key, mm) => `${indent}${key}_in: ${Number(mm) / 25.4}`,
+    );
 
   it('gives the same model as the same pot in millimetres (to 1e-12 relative)', async () => {
     const metric = await loadPotFile(await tempFile('three-cup.yaml', POT));
@@ -208,7 +211,8 @@ describe('pot lengths in inches (`_in` instead of `_mm`)', () => {
     expect(inches(POT)).not.toContain('_mm:');
     for (const [key, value] of Object.entries(metric.model)) {
       const other = (us.model as unknown as Record<string, unknown>)[key];
-      if (typeof value === 'number') expect(Math.abs((other as number) / value - 1), key).toBeLessThan(1e-12);
+      if (typeof value === 'number')
+        expect(Math.abs((other as number) / value - 1), key).toBeLessThan(1e-12);
       else expect(other, key).toEqual(value);
     }
   });
@@ -217,7 +221,9 @@ describe('pot lengths in inches (`_in` instead of `_mm`)', () => {
     const both = POT.replace(/^(\s*)valve_height_mm: .*$/m, '$&\n$1valve_height_in: 1.26');
     const { issues } = await potIssues(both);
     expect(issues.map((i) => [i.field, i.code])).toEqual([['base.valve_height_in', 'repeated']]);
-    expect(wording(issues[0]!.message)).toEqual(contentWords.bothUnits('valve_height_mm', 'valve_height_in'));
+    expect(wording(issues[0]!.message)).toEqual(
+      contentWords.bothUnits('valve_height_mm', 'valve_height_in'),
+    );
   });
 
   it('a length written neither way is refused at its part, naming both keys', async () => {
@@ -227,7 +233,9 @@ describe('pot lengths in inches (`_in` instead of `_mm`)', () => {
   });
 
   it('a geometry problem in an inch pot is told in inches', async () => {
-    const { issues } = await potIssues(inches(POT).replace(/valve_height_in: [\d.]+/, 'valve_height_in: 2'));
+    const { issues } = await potIssues(
+      inches(POT).replace(/valve_height_in: [\d.]+/, 'valve_height_in: 2'),
+    );
     expect(issues.map((i) => i.field)).toEqual(['base.valve_height_in']);
     const text = wording(issues[0]!.message).problem;
     // base height 260 mL / (π · 42² mm²) = 46.92 mm = 1.847 in

@@ -44,7 +44,9 @@ describe('schemaIssues words each kind of mistake', () => {
       code: 'wrong-type',
       wording: contentWords.wrongType(VALVE_HEIGHT, '32mm'),
     });
-    expect(wording(issue.message).problem).toBe('expected a number of millimetres between 5 and 200, got "32mm"');
+    expect(wording(issue.message).problem).toBe(
+      'expected a number of millimetres between 5 and 200, got "32mm"',
+    );
     expect(wording(issue.message).fix).toMatch(/^Write 32\b/);
   });
 
@@ -150,7 +152,13 @@ describe('schemaIssues words each kind of mistake', () => {
   it('a missing required key points at the parent mapping and says what to add', () => {
     const issues = issuesOf('pot', withoutLine(POT, 'tube_gap_mm'));
     const spec: ValueSpec = { type: 'number', unit: 'mm', minimum: 0.5, maximum: 50, example: 4 };
-    const inches: ValueSpec = { type: 'number', unit: 'in', minimum: 0.02, maximum: 1.97, example: 0.16 };
+    const inches: ValueSpec = {
+      type: 'number',
+      unit: 'in',
+      minimum: 0.02,
+      maximum: 1.97,
+      example: 0.16,
+    };
     const issue = expectIssue(issues, {
       file: FILE,
       line: 9,

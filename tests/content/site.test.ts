@@ -79,10 +79,16 @@ describe('site.yaml', () => {
   });
 
   it('kettle_presets_f in °F gives the same presets in K (°F − 32) × 5/9 + 273.15 (NIST SP 811, B.8)', async () => {
-    await put(dir, 'site.yaml', withLine(SITE, 'paper', 'paper: A5\nkettle_presets_f: [212, 158, 176]'));
+    await put(
+      dir,
+      'site.yaml',
+      withLine(SITE, 'paper', 'paper: A5\nkettle_presets_f: [212, 158, 176]'),
+    );
     const { site } = await loadCatalogue(dir);
     // 158 °F = 70 °C, 176 °F = 80 °C, 212 °F = 100 °C exactly
-    expect(site.kettlePresetsK.map((k) => Math.round((k - 273.15) * 1e9) / 1e9)).toEqual([70, 80, 100]);
+    expect(site.kettlePresetsK.map((k) => Math.round((k - 273.15) * 1e9) / 1e9)).toEqual([
+      70, 80, 100,
+    ]);
   });
 
   it('kettle presets in both °C and °F are refused at the °F key', async () => {
@@ -93,7 +99,9 @@ describe('site.yaml', () => {
       withLine(SITE, 'paper', 'paper: A5\nkettle_presets_c: [70]\nkettle_presets_f: [158]'),
     );
     const issues = await catalogueIssues(dir);
-    expect(issues.map((i) => [i.field, i.code, i.line])).toEqual([['kettle_presets_f', 'repeated', 5]]);
+    expect(issues.map((i) => [i.field, i.code, i.line])).toEqual([
+      ['kettle_presets_f', 'repeated', 5],
+    ]);
     expect(wording(issues[0]!.message)).toEqual(
       contentWords.bothUnits('kettle_presets_c', 'kettle_presets_f'),
     );
@@ -207,7 +215,9 @@ describe('site.yaml', () => {
       field: 'sets[1]',
       code: 'layout',
     });
-    expect(wording(insert.message).problem).toBe(contentWords.missingForLayout('coffees', 'insert', '').problem);
+    expect(wording(insert.message).problem).toBe(
+      contentWords.missingForLayout('coffees', 'insert', '').problem,
+    );
   });
 
   it('unknown ids in an insert set are reported each at its place', async () => {

@@ -55,9 +55,7 @@ describe('damaged cache files', () => {
     expect(second.stderr).not.toContain('internal error');
     expect(await treeHash(out)).toBe(good);
     const note = lines(second.stderr).find((line) => line.startsWith('note: made again'));
-    expect(note, second.stderr).toBe(
-      faultWords.damagedCache({ plans, views, pages, pdfs }),
-    );
+    expect(note, second.stderr).toBe(faultWords.damagedCache({ plans, views, pages, pdfs }));
     // The files made again are whole: a third build takes everything from the cache quietly.
     const third = await runMainIn(root, ['build', '--content', content, '--out', out]);
     expect(third.code, third.stderr).toBe(0);

@@ -170,14 +170,19 @@ async function expectBuildOrCleanReport(
   if (run.code === 0) {
     outcomes.built++;
     expect(run.stderr, label).not.toMatch(/^\s+at /m);
-    expect(lines(run.stderr).filter((line) => /^built /.test(line)), label).toHaveLength(1);
+    expect(
+      lines(run.stderr).filter((line) => /^built /.test(line)),
+      label,
+    ).toHaveLength(1);
     return;
   }
   outcomes.refused++;
   expectCleanFailure(run, label);
   const [failed, heading, ...listed] = lines(run.stderr);
   // A long report ends with the count of what it did not list (words/content.ts, MAX_REPORTED).
-  const issues = listed.filter((line, i) => !(i === listed.length - 1 && /^… and \d+ more problems?, not listed/.test(line)));
+  const issues = listed.filter(
+    (line, i) => !(i === listed.length - 1 && /^… and \d+ more problems?, not listed/.test(line)),
+  );
   expect(failed, label).toBe(`stovecard: ${buildWords.failed(outDir)}`);
   expect(heading, `${label}\n${run.stderr}`).toMatch(HEADING);
   expect(issues.length, label).toBeGreaterThan(0);
@@ -255,22 +260,23 @@ describe('stovecard build on randomly damaged content (fast-check)', () => {
 const LOADER_RUNS = Number(process.env.STOVECARD_FUZZ_LOADER_RUNS ?? 10_000);
 
 describe('the loader on randomly damaged entry text (fast-check, in-process)', () => {
-  it(
-    `${LOADER_RUNS} damaged files: each loads, or gives issues naming file, line and field; never throws`,
-    async () => {
-      const { validText } = await import('../../generator/content/entry-file.ts');
-      const { buildPot } = await import('../../generator/content/pot.ts');
-      const { buildCoffee } = await import('../../generator/content/coffee.ts');
-      const { buildStove } = await import('../../generator/content/stove.ts');
-      const kinds = [
-        { schema: 'pot', file: 'pots/three-cup.yaml', build: buildPot },
-        { schema: 'coffee', file: 'coffees/house-blend.yaml', build: buildCoffee },
-        { schema: 'stove', file: 'stoves/bar-gas.yaml', build: buildStove },
-      ] as const;
-      const texts = await Promise.all(kinds.map((k) => readFile(path.join(small, k.file))));
-      const outcomes = { loaded: 0, refused: 0 };
-      fc.assert(
-        fc.property(fc.nat(kinds.length - 1), fc.array(edit, { minLength: 1, maxLength: 4 }), (which, edits) => {
+  it(`${LOADER_RUNS} damaged files: each loads, or gives issues naming file, line and field; never throws`, async () => {
+    const { validText } = await import('../../generator/content/entry-file.ts');
+    const { buildPot } = await import('../../generator/content/pot.ts');
+    const { buildCoffee } = await import('../../generator/content/coffee.ts');
+    const { buildStove } = await import('../../generator/content/stove.ts');
+    const kinds = [
+      { schema: 'pot', file: 'pots/three-cup.yaml', build: buildPot },
+      { schema: 'coffee', file: 'coffees/house-blend.yaml', build: buildCoffee },
+      { schema: 'stove', file: 'stoves/bar-gas.yaml', build: buildStove },
+    ] as const;
+    const texts = await Promise.all(kinds.map((k) => readFile(path.join(small, k.file))));
+    const outcomes = { loaded: 0, refused: 0 };
+    fc.assert(
+      fc.property(
+        fc.nat(kinds.length - 1),
+        fc.array(edit, { minLength: 1, maxLength: 4 }),
+        (which, edits) => {
           const kind = kinds[which]!;
           const bytes = apply(texts[which]!, edits);
           let text: string;
@@ -281,7 +287,9 @@ describe('the loader on randomly damaged entry text (fast-check, in-process)', (
           }
           const checked = validText<never>(kind.schema, text, 'hash', 'x', kind.file);
           const built = checked.value
-            ? (kind.build as (valid: unknown) => { value?: unknown; issues: readonly unknown[] })(checked.value)
+            ? (kind.build as (valid: unknown) => { value?: unknown; issues: readonly unknown[] })(
+                checked.value,
+              )
             : checked;
           if (built.value !== undefined && built.issues.length === 0) {
             outcomes.loaded++;
@@ -292,17 +300,18 @@ describe('the loader on randomly damaged entry text (fast-check, in-process)', (
           for (const issue of built.issues) {
             const line = issueLine(issue as ContentIssue);
             expect(line).toMatch(ISSUE_LINE);
-            expect(line).not.toMatch(/[\u0000-\u0008\u000b-\u001f\u007f\u202a-\u202e\u2066-\u2069]/);
+            expect(line).not.toMatch(
+              /[\u0000-\u0008\u000b-\u001f\u007f\u202a-\u202e\u2066-\u2069]/,
+            );
             expect(line.length).toBeLessThan(1_200);
           }
-        }),
-        { seed: SEED, numRuns: LOADER_RUNS, endOnFailure: true },
-      );
-      console.info(
-        `fuzz loader (seed ${SEED}, ${LOADER_RUNS} runs): ${outcomes.loaded} loaded, ${outcomes.refused} refused with issues`,
-      );
-      expect(outcomes.refused).toBeGreaterThan(LOADER_RUNS / 4);
-    },
-    300_000,
-  );
+        },
+      ),
+      { seed: SEED, numRuns: LOADER_RUNS, endOnFailure: true },
+    );
+    console.info(
+      `fuzz loader (seed ${SEED}, ${LOADER_RUNS} runs): ${outcomes.loaded} loaded, ${outcomes.refused} refused with issues`,
+    );
+    expect(outcomes.refused).toBeGreaterThan(LOADER_RUNS / 4);
+  }, 300_000);
 });

@@ -42,7 +42,10 @@ describe('editor files and odd names', () => {
   it('skips .#x.yaml, ._x.yaml, x.yaml~ and #x.yaml# with a note, and builds', async () => {
     const dir = await content(async (d) => {
       await symlink('someone@host.4242:1700000000', path.join(d, 'pots', '.#three-cup.yaml')); // an Emacs lock
-      await writeFile(path.join(d, 'pots', '._three-cup.yaml'), Buffer.from([0, 5, 22, 7, 0, 2, 0, 0])); // AppleDouble
+      await writeFile(
+        path.join(d, 'pots', '._three-cup.yaml'),
+        Buffer.from([0, 5, 22, 7, 0, 2, 0, 0]),
+      ); // AppleDouble
       await writeFile(path.join(d, 'pots', 'three-cup.yaml~'), 'cups: [broken');
       await writeFile(path.join(d, 'coffees', '#house-blend.yaml#'), 'name: [');
     });
@@ -50,13 +53,21 @@ describe('editor files and odd names', () => {
     expect(run.code, run.stderr).toBe(0);
     const note = lines(run.stderr).find((line) => line.startsWith('note: skipped'));
     expect(note, run.stderr).toContain('4 editor lock, backup or hidden files');
-    for (const name of ['.#three-cup.yaml', '._three-cup.yaml', 'three-cup.yaml~', '#house-blend.yaml#'])
+    for (const name of [
+      '.#three-cup.yaml',
+      '._three-cup.yaml',
+      'three-cup.yaml~',
+      '#house-blend.yaml#',
+    ])
       expect(note).toContain(name);
   }, 60_000);
 
   it('reads a .YAML file as an entry, and a file with CR-only line ends', async () => {
     const dir = await content(async (d) => {
-      await rename(path.join(d, 'coffees', 'house-blend.yaml'), path.join(d, 'coffees', 'house-blend.YAML'));
+      await rename(
+        path.join(d, 'coffees', 'house-blend.yaml'),
+        path.join(d, 'coffees', 'house-blend.YAML'),
+      );
       const pot = path.join(d, 'pots', 'three-cup.yaml');
       await writeFile(pot, (await readFile(pot, 'utf8')).replaceAll('\n', '\r'));
     });
@@ -88,7 +99,10 @@ describe('hostile text', () => {
     const dir = await content(async (d) => {
       const site = path.join(d, 'site.yaml');
       const text = await readFile(site, 'utf8');
-      await writeFile(site, text.replace('coffee: house-blend, stove: bar-gas', `coffee: ${long}, stove: bar-gas`));
+      await writeFile(
+        site,
+        text.replace('coffee: house-blend, stove: bar-gas', `coffee: ${long}, stove: bar-gas`),
+      );
     });
     const run = await build(dir);
     expectCleanFailure(run, 'long value');
@@ -112,7 +126,10 @@ describe('hostile text', () => {
     const dir = await content(async (d) => {
       const site = path.join(d, 'site.yaml');
       const text = await readFile(site, 'utf8');
-      await writeFile(site, text.replace('name: Brindlemoss Roastery', 'name: "Brindlemoss \u202eyretsaoR"'));
+      await writeFile(
+        site,
+        text.replace('name: Brindlemoss Roastery', 'name: "Brindlemoss \u202eyretsaoR"'),
+      );
     });
     const run = await build(dir);
     expectCleanFailure(run, 'bidi');
@@ -152,7 +169,10 @@ describe('base_url', () => {
       const dir = await content(async (d) => {
         const site = path.join(d, 'site.yaml');
         const text = await readFile(site, 'utf8');
-        await writeFile(site, text.replace('base_url: https://cards.brindlemoss.example/', `base_url: '${url}'`));
+        await writeFile(
+          site,
+          text.replace('base_url: https://cards.brindlemoss.example/', `base_url: '${url}'`),
+        );
       });
       const run = await build(dir);
       expectCleanFailure(run, url);

@@ -36,7 +36,10 @@ async function dashedContent(dir: string, sets: string): Promise<string> {
     path.join(dir, 'coffees', 'house--bags.yaml'),
   );
   const site = await readFile(path.join(dir, 'site.yaml'), 'utf8');
-  await writeFile(path.join(dir, 'site.yaml'), `${site.slice(0, site.indexOf('sets:'))}sets:\n${sets}`);
+  await writeFile(
+    path.join(dir, 'site.yaml'),
+    `${site.slice(0, site.indexOf('sets:'))}sets:\n${sets}`,
+  );
   return dir;
 }
 
@@ -72,11 +75,22 @@ describe('ids holding the page-name separator', () => {
     const cards = (await readdir(path.join(out, 'cards'))).filter((n) => !n.endsWith('.pdf'));
     // The two station cards, and the station pages the inserts' rows point to.
     expect(cards.sort()).toEqual(
-      ['p-_-x--c--bar-gas', 'p--x-_-c--bar-gas', 'p--house--bar-gas', 'p--house-_-bags--bar-gas'].sort(),
+      [
+        'p-_-x--c--bar-gas',
+        'p--x-_-c--bar-gas',
+        'p--house--bar-gas',
+        'p--house-_-bags--bar-gas',
+      ].sort(),
     );
     // pot p--x × coffee c, and pot p × coffee x--c
-    const cardA = await readFile(path.join(out, 'cards', 'p-_-x--c--bar-gas', 'index.html'), 'utf8');
-    const cardB = await readFile(path.join(out, 'cards', 'p--x-_-c--bar-gas', 'index.html'), 'utf8');
+    const cardA = await readFile(
+      path.join(out, 'cards', 'p-_-x--c--bar-gas', 'index.html'),
+      'utf8',
+    );
+    const cardB = await readFile(
+      path.join(out, 'cards', 'p--x-_-c--bar-gas', 'index.html'),
+      'utf8',
+    );
     expect(cardA).toContain('Brindlemoss house blend'); // coffee c is a copy of house-blend
     expect(cardB).toContain('Ember blend'); // coffee x--c is a copy of ember-blend
     const inserts = (await readdir(path.join(out, 'inserts'))).filter((n) => n.endsWith('.pdf'));

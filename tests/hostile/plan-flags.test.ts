@@ -9,9 +9,12 @@ import { faultWords } from '../../generator/words/build-faults.ts';
 import { DEMO_CONTENT, expectCleanFailure, lines, runMain } from './cli-run.ts';
 
 const files = [
-  '--pot', path.join(DEMO_CONTENT, 'pots', 'three-cup.yaml'),
-  '--coffee', path.join(DEMO_CONTENT, 'coffees', 'house-blend.yaml'),
-  '--stove', path.join(DEMO_CONTENT, 'stoves', 'bar-gas.yaml'),
+  '--pot',
+  path.join(DEMO_CONTENT, 'pots', 'three-cup.yaml'),
+  '--coffee',
+  path.join(DEMO_CONTENT, 'coffees', 'house-blend.yaml'),
+  '--stove',
+  path.join(DEMO_CONTENT, 'stoves', 'bar-gas.yaml'),
 ];
 
 describe('plan flags outside the model', () => {
@@ -42,7 +45,10 @@ describe('a cold start that delivers no coffee', () => {
     const plan = planCard({ pot, coffee, stove, room: DEFAULT_ROOM });
     if (plan.refused) throw new Error('the demo plan is refused');
     // What the planner records when the cold start delivers nothing (plan-cache.ts).
-    const nothing = { ...plan, coldStart: { ...plan.coldStart, meanK: Number.NaN, inBandShare: 0 } };
+    const nothing = {
+      ...plan,
+      coldStart: { ...plan.coldStart, meanK: Number.NaN, inBandShare: 0 },
+    };
     const text = planSummary(nothing, false);
     expect(text).not.toContain('NaN');
     expect(text).toContain(faultWords.coldStartNoCoffee);

@@ -36,7 +36,11 @@ afterAll(async () => {
 describe('the server', () => {
   let server: SiteServer;
   beforeAll(async () => {
-    const options = { contentDir: content, outDir: path.join(root, 'site'), cacheDir: path.join(root, 'cache') };
+    const options = {
+      contentDir: content,
+      outDir: path.join(root, 'site'),
+      cacheDir: path.join(root, 'cache'),
+    };
     await buildSite({ ...options, workers: 0 });
     server = await serveSite({ ...options, port: 0, log: () => {} });
   }, 120_000);
@@ -81,7 +85,14 @@ describe('build --serve on a port in use', () => {
       const out = path.join(root, 'never-built');
       const started = performance.now();
       const run = await runMainIn(root, [
-        'build', '--content', content, '--out', out, '--serve', '--port', String(port),
+        'build',
+        '--content',
+        content,
+        '--out',
+        out,
+        '--serve',
+        '--port',
+        String(port),
       ]);
       expectCleanFailure(run, 'port in use');
       expect(lines(run.stderr)).toEqual([`stovecard: ${faultWords.portInUse(port)}`]);
@@ -97,7 +108,13 @@ describe('file-system failures name what to change', () => {
   it('ENOTDIR: --out inside a file', async () => {
     const file = path.join(root, 'a-file');
     await writeFile(file, 'x');
-    const run = await runMainIn(root, ['build', '--content', content, '--out', path.join(file, 'site')]);
+    const run = await runMainIn(root, [
+      'build',
+      '--content',
+      content,
+      '--out',
+      path.join(file, 'site'),
+    ]);
     expectCleanFailure(run, 'ENOTDIR');
     expect(run.stderr).toContain('(ENOTDIR)');
     expect(run.stderr).toContain('is a file, not a folder');
@@ -126,7 +143,9 @@ describe('file-system failures name what to change', () => {
         path: '/srv/site.tmp-1/x.pdf',
       });
       let stderr = '';
-      const spy = vi.spyOn(process.stderr, 'write').mockImplementation((chunk) => ((stderr += String(chunk)), true));
+      const spy = vi
+        .spyOn(process.stderr, 'write')
+        .mockImplementation((chunk) => ((stderr += String(chunk)), true));
       let exit: number;
       try {
         exit = reportError(error);

@@ -5,7 +5,17 @@
  * swap through STOVECARD_FAULT_AT) always leaves the previous or the new site whole.
  */
 import { spawn } from 'node:child_process';
-import { cp, lstat, mkdir, mkdtemp, readFile, readlink, rm, symlink, writeFile } from 'node:fs/promises';
+import {
+  cp,
+  lstat,
+  mkdir,
+  mkdtemp,
+  readFile,
+  readlink,
+  rm,
+  symlink,
+  writeFile,
+} from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -23,7 +33,9 @@ const EPOCH = { SOURCE_DATE_EPOCH: '1767225600' }; // 2026-01-01: the same bytes
 async function smallContent(dir: string, name: string): Promise<string> {
   await demoCopy(dir);
   const site = await readFile(path.join(dir, 'site.yaml'), 'utf8');
-  const head = site.slice(0, site.indexOf('sets:')).replace('  name: Brindlemoss Roastery', `  name: ${name}`);
+  const head = site
+    .slice(0, site.indexOf('sets:'))
+    .replace('  name: Brindlemoss Roastery', `  name: ${name}`);
   await writeFile(
     path.join(dir, 'site.yaml'),
     `${head}sets:\n  - id: bar\n    title: Bar\n    layout: station\n    cards:\n` +
@@ -165,7 +177,9 @@ describe('a previous site that cannot be removed', () => {
         notRemoved: { folder: '/srv/site.v-0-a', code: 'EACCES' },
       },
     } as unknown as BuildResult;
-    expect(noteLines(result)).toBe(`${faultWords.previousNotRemoved('/srv/site.v-0-a', 'EACCES')}\n`);
+    expect(noteLines(result)).toBe(
+      `${faultWords.previousNotRemoved('/srv/site.v-0-a', 'EACCES')}\n`,
+    );
     expect(noteLines(result)).toMatch(/new site is in place.*could not be removed \(EACCES\)/);
   });
 
@@ -256,7 +270,7 @@ describe('a build killed at any moment leaves the previous or the new site whole
     // can be replayed; the seed is printed in the label of every kill.
     const start = Number(process.env.STOVECARD_FAULT_SEED ?? 20261202);
     let seed = start;
-    const random = () => ((seed = (seed * 1664525 + 1013904223) >>> 0) / 2 ** 32);
+    const random = () => (seed = (seed * 1664525 + 1013904223) >>> 0) / 2 ** 32;
     for (let i = 0; i < 10; i++) {
       current = await killedBuild(next, current, { atMs: Math.round(random() * childBuildMs) });
       next = next === contentA ? contentB : contentA;

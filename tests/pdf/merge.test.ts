@@ -25,7 +25,13 @@ const A6: [number, number] = [297.64, 419.53];
 
 /** A one-page tagged card: an Art with a heading and a link, as pdfkit tags them. */
 async function card(title: string, url: string, size = A6): Promise<Buffer> {
-  const { doc, root, finish } = openPdf({ title, author: 'Test', lang: 'en-GB', date: DATE, idSeed: title });
+  const { doc, root, finish } = openPdf({
+    title,
+    author: 'Test',
+    lang: 'en-GB',
+    date: DATE,
+    idSeed: title,
+  });
   doc.addPage({ size, margin: 0 });
   const art = doc.struct('Art', { title } as never);
   root.add(art);
@@ -41,7 +47,13 @@ async function card(title: string, url: string, size = A6): Promise<Buffer> {
 
 /** A shell: one tagged front page, then a placeholder page per card with "n / total". */
 async function shell(cards: number, size = A6): Promise<Buffer> {
-  const { doc, root, finish } = openPdf({ title: 'Set', author: 'Test', lang: 'en-GB', date: DATE, idSeed: 's' });
+  const { doc, root, finish } = openPdf({
+    title: 'Set',
+    author: 'Test',
+    lang: 'en-GB',
+    date: DATE,
+    idSeed: 's',
+  });
   const total = cards + 1;
   doc.addPage({ size: [300, 400], margin: 0 });
   root.add(

@@ -17,7 +17,14 @@ import { cardMarginPt } from '../../generator/render/pdf/style.ts';
 import type { SetView } from '../../generator/render/site-view.ts';
 import { pdfWords } from '../../generator/words/pdf.ts';
 import { NO_EPOCH, demoSetPdf, demoSite, type DemoSite } from './demo-site.ts';
-import { describeWithTools, pageLines, pdfinfoSizes, renderGray, runTool, type GrayImage } from './poppler.ts';
+import {
+  describeWithTools,
+  pageLines,
+  pdfinfoSizes,
+  renderGray,
+  runTool,
+  type GrayImage,
+} from './poppler.ts';
 import { readPdf, squash, type ReadPdf, type StructNode } from './read-pdf.ts';
 
 interface BuiltSet {
@@ -76,50 +83,54 @@ function cardPages() {
   );
 }
 
-describeWithTools(['pdfinfo', 'pdftotext', 'pdftoppm'], 'setPdf(set, cardPdfs) read by poppler', () => {
-  it('pdfinfo reads every set without a complaint: pages, page sizes, Tagged: yes', () => {
-    expect(sets.map((s) => s.set.id)).toContain('barista-training');
-    for (const { set, cards, pdf, file } of sets) {
-      const info = runTool('pdfinfo', [file]);
-      expect(info.stderr, `${set.id}: pdfinfo stderr`).toBe('');
-      expect(info.stdout).toMatch(/^Tagged:\s+yes$/m);
-      expect(info.stdout).toMatch(new RegExp(`^Pages:\\s+${pdf.pages}$`, 'm'));
-      const text = pageSizePt(demo.data.site.page.widthMm, demo.data.site.page.heightMm);
-      const expected = [
-        ...Array.from({ length: pdf.frontMatterPages }, () => text),
-        ...cards.map((c) => pageSizePt(c.page.widthMm, c.page.heightMm)),
-      ];
-      expect(pdfinfoSizes(file, pdf.pages), set.id).toEqual(expected);
-    }
-  });
+describeWithTools(
+  ['pdfinfo', 'pdftotext', 'pdftoppm'],
+  'setPdf(set, cardPdfs) read by poppler',
+  () => {
+    it('pdfinfo reads every set without a complaint: pages, page sizes, Tagged: yes', () => {
+      expect(sets.map((s) => s.set.id)).toContain('barista-training');
+      for (const { set, cards, pdf, file } of sets) {
+        const info = runTool('pdfinfo', [file]);
+        expect(info.stderr, `${set.id}: pdfinfo stderr`).toBe('');
+        expect(info.stdout).toMatch(/^Tagged:\s+yes$/m);
+        expect(info.stdout).toMatch(new RegExp(`^Pages:\\s+${pdf.pages}$`, 'm'));
+        const text = pageSizePt(demo.data.site.page.widthMm, demo.data.site.page.heightMm);
+        const expected = [
+          ...Array.from({ length: pdf.frontMatterPages }, () => text),
+          ...cards.map((c) => pageSizePt(c.page.widthMm, c.page.heightMm)),
+        ];
+        expect(pdfinfoSizes(file, pdf.pages), set.id).toEqual(expected);
+      }
+    });
 
-  it('pdftotext shows on each card page the card’s own text and its page number, nothing else', () => {
-    for (const { set, pdf, file, page, own, card } of cardPages()) {
-      // White space aside: the page number's narrow spaces come out of pdftotext as none.
-      const lines = pageLines(file, page).map(squash);
-      const expected = [...pageLines(own.file, 1), pdfWords.pageNumber(page, pdf.pages)].map(
-        squash,
-      );
-      expect(lines.sort(), `${set.id} page ${page} (${card.id})`).toEqual(expected.sort());
-    }
-  });
+    it('pdftotext shows on each card page the card’s own text and its page number, nothing else', () => {
+      for (const { set, pdf, file, page, own, card } of cardPages()) {
+        // White space aside: the page number's narrow spaces come out of pdftotext as none.
+        const lines = pageLines(file, page).map(squash);
+        const expected = [...pageLines(own.file, 1), pdfWords.pageNumber(page, pdf.pages)].map(
+          squash,
+        );
+        expect(lines.sort(), `${set.id} page ${page} (${card.id})`).toEqual(expected.sort());
+      }
+    });
 
-  it('pdftoppm draws each card page as the card’s own page but for the page number (regression check)', () => {
-    // The same content stream and font bytes are drawn, so outside the bottom margin,
-    // where the page number sits, the pixels must be the same; inside it, some must not.
-    const dpi = 40;
-    for (const { set, file, page, own, card } of cardPages()) {
-      const a = renderGray(file, page, dpi, path.join(dir, 'set-page'));
-      const b = renderGray(own.file, 1, dpi, path.join(dir, 'card-page'));
-      expect([a.width, a.height]).toEqual([b.width, b.height]);
-      const margin = Math.ceil((cardMarginPt(card.page.paper) / 72) * dpi);
-      const { above, below } = differing(a, b, a.height - margin);
-      const what = `${set.id} page ${page} (${card.id})`;
-      expect(above, `${what}: pixels differing above the bottom margin`).toBe(0);
-      expect(below, `${what}: the page number in the bottom margin`).toBeGreaterThan(0);
-    }
-  });
-});
+    it('pdftoppm draws each card page as the card’s own page but for the page number (regression check)', () => {
+      // The same content stream and font bytes are drawn, so outside the bottom margin,
+      // where the page number sits, the pixels must be the same; inside it, some must not.
+      const dpi = 40;
+      for (const { set, file, page, own, card } of cardPages()) {
+        const a = renderGray(file, page, dpi, path.join(dir, 'set-page'));
+        const b = renderGray(own.file, 1, dpi, path.join(dir, 'card-page'));
+        expect([a.width, a.height]).toEqual([b.width, b.height]);
+        const margin = Math.ceil((cardMarginPt(card.page.paper) / 72) * dpi);
+        const { above, below } = differing(a, b, a.height - margin);
+        const what = `${set.id} page ${page} (${card.id})`;
+        expect(above, `${what}: pixels differing above the bottom margin`).toBe(0);
+        expect(below, `${what}: the page number in the bottom margin`).toBeGreaterThan(0);
+      }
+    });
+  },
+);
 
 describeWithTools(['qpdf'], 'setPdf(set, cardPdfs) read by qpdf', () => {
   it('qpdf --check finds no problem', () => {

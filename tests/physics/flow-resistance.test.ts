@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { darcyBedResistance, poiseuilleTubeResistance } from '../../generator/physics/flow-resistance.ts';
+import {
+  darcyBedResistance,
+  poiseuilleTubeResistance,
+} from '../../generator/physics/flow-resistance.ts';
 
 describe('darcyBedResistance (Darcy 1856, Q = kAΔp/(μL))', () => {
   it('darcyBedResistance(μ, L, k, A) gives Q = kAΔp/(μL) back for a closed-form case', () => {
@@ -18,7 +21,10 @@ describe('darcyBedResistance (Darcy 1856, Q = kAΔp/(μL))', () => {
 describe('poiseuilleTubeResistance (Hagen–Poiseuille, R = 128μℓ/(πd⁴))', () => {
   it('poiseuilleTubeResistance matches the mean-velocity form ΔP = 32μℓU/d²', () => {
     // Same law written with the mean velocity U = 4Q/(πd²) (White, Fluid Mechanics, eq. 6.44).
-    const mu = 1e-3, l = 0.05, d = 0.006, q = 2e-6;
+    const mu = 1e-3,
+      l = 0.05,
+      d = 0.006,
+      q = 2e-6;
     const u = (4 * q) / (Math.PI * d * d);
     const dpVelocityForm = (32 * mu * l * u) / (d * d);
     expect(poiseuilleTubeResistance(mu, l, d) * q).toBeCloseTo(dpVelocityForm, 9);

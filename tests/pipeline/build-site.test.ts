@@ -10,10 +10,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
 import { expandCards } from '../../generator/pipeline/cards.ts';
-import {
-  ContentErrors,
-  loadCatalogue,
-} from '../../generator/content/index.ts';
+import { ContentErrors, loadCatalogue } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
 
 const EPOCH = { SOURCE_DATE_EPOCH: '1714521600' }; // 2024-05-01

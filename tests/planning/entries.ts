@@ -3,7 +3,12 @@
  * content): a typical three-cup aluminium pot, a permeable stovetop grind, and stoves whose
  * levels span gentle to strong heat.
  */
-import type { CoffeeEntry, PotEntry, StoveEntry, StoveKind } from '../../generator/content/types.ts';
+import type {
+  CoffeeEntry,
+  PotEntry,
+  StoveEntry,
+  StoveKind,
+} from '../../generator/content/types.ts';
 import type { BedModel, PotModel } from '../../generator/brew/types.ts';
 import { C, permeableBed, referencePot } from '../brew/fixtures.ts';
 

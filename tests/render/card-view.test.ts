@@ -67,7 +67,9 @@ describe('stationCardView(accepted plan, metric)', () => {
     expect(all.includes('assumed')).toBe(pot.valveOpeningAssumed);
     if (pot.valveOpeningAssumed) {
       // Nobody measured it: two significant figures, why it is assumed, and whom to ask.
-      expect(all).toContain(`about ${Number((accepted.valveOpeningGaugePa / 1e5).toPrecision(2))}${NBSP}bar`);
+      expect(all).toContain(
+        `about ${Number((accepted.valveOpeningGaugePa / 1e5).toPrecision(2))}${NBSP}bar`,
+      );
       expect(all).not.toContain(`${fixed(accepted.valveOpeningGaugePa / 1e5, 2)}${NBSP}bar`);
       expect(all).toContain('no value was given');
       expect(all).toContain('ask the maker');
@@ -136,7 +138,9 @@ describe('stationCardView(accepted plan, us)', () => {
     expect(r.water.fillVolume.text).toBe(
       `${(Math.floor(((accepted.fillM3 * 1e6) / ML_PER_FL_OZ) * 10) / 10).toFixed(1)}${NBSP}fl oz`,
     );
-    expect(r.water.fillMass.text).toBe(`${(Math.floor(((accepted.fillKg * 1e3) / G_PER_OZ) * 10) / 10).toFixed(1)}${NBSP}oz`);
+    expect(r.water.fillMass.text).toBe(
+      `${(Math.floor(((accepted.fillKg * 1e3) / G_PER_OZ) * 10) / 10).toFixed(1)}${NBSP}oz`,
+    );
     expect(r.coffee.dose.text).toBe(`${fixed((accepted.doseKg * 1e3) / G_PER_OZ, 2)}${NBSP}oz`);
     expect(r.water.temperature.text).toBe(`${fixed(fahrenheit(accepted.startK), 0)}${NBSP}°F`);
     expect(r.water.fillHeight.text).toBe(
@@ -258,7 +262,9 @@ describe('one number, one source: the one-cup demo cards', () => {
         for (const units of ['metric', 'us'] as const) {
           const r = (await stationCardView(p, catalogue, { ...OPTIONS, units })).recipe!;
           expect(r.water.fillLineText).toContain(r.water.belowValve.text);
-          expect(r.water.crossSectionSvg).toContain(cardWords.crossSection.margin(r.water.belowValve.text).replace(/"/g, '&quot;'));
+          expect(r.water.crossSectionSvg).toContain(
+            cardWords.crossSection.margin(r.water.belowValve.text).replace(/"/g, '&quot;'),
+          );
           checked++;
         }
       }

@@ -19,7 +19,13 @@ let accepted: StationCardView;
 let refused: StationCardView;
 
 const open = () =>
-  openPdf({ title: 't', author: 'a', lang: 'en-GB', date: new Date(Date.UTC(2024, 4, 1)), idSeed: 's' });
+  openPdf({
+    title: 't',
+    author: 'a',
+    lang: 'en-GB',
+    date: new Date(Date.UTC(2024, 4, 1)),
+    idSeed: 's',
+  });
 
 /** Sets `count` distinct words in every face of a fresh document. */
 function setDistinctWords(count: number, prefix: string): void {

@@ -13,7 +13,12 @@
  * to draw. pdfkit draws only what is the set's own: the front matter, and on each card's
  * placeholder page its page number (an artifact) and its bookmark.
  */
-import { cautions as cautionsView, type Cautions, type PageSetup, type StationCardView } from '../card-view.ts';
+import {
+  cautions as cautionsView,
+  type Cautions,
+  type PageSetup,
+  type StationCardView,
+} from '../card-view.ts';
 import type { MethodView, SetView, TroubleshootingView } from '../site-view.ts';
 import { cardWords } from '../../words/card.ts';
 import { pdfWords } from '../../words/pdf.ts';
