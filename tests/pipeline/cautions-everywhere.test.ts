@@ -18,7 +18,7 @@ import { buildSite } from '../../generator/pipeline/build-site.ts';
 import { sitePdfStep } from '../../generator/pipeline/pdf-step.ts';
 import { BUILD_ENV } from '../browser/demo-builds.ts';
 import { runMain, DEMO_CONTENT } from '../hostile/cli-run.ts';
-import { onPath, runTool } from '../pdf/poppler.ts';
+import { describeWithTools, runTool } from '../pdf/poppler.ts';
 
 const words = cardWords.cautions;
 const squash = (text: string): string => text.replace(/[\s\u00a0\u202f\u00ad]+/g, '');
@@ -127,9 +127,8 @@ describe('every HTML page of the demo site', () => {
   });
 });
 
-describe(`every page of every PDF of the demo site${onPath('pdftotext') ? '' : ' (pdftotext missing)'}`, () => {
+describeWithTools(['pdftotext'], 'every page of every PDF of the demo site', () => {
   it('carries every caution of one form and the deferral (pdftotext, page by page)', async () => {
-    expect(onPath('pdftotext'), 'poppler-utils (pdftotext) is needed').toBe(true);
     let pages = 0;
     const failures: string[] = [];
     for (const site of sites) {

@@ -14,7 +14,7 @@ import { sitePdfStep } from '../../generator/pipeline/pdf-step.ts';
 import { planNotices } from '../../generator/planning/notices.ts';
 import { CHECKED } from '../../generator/planning/model-range.ts';
 import { refusalText, warningText } from '../../generator/render/plan-text.ts';
-import { runTool } from '../pdf/poppler.ts';
+import { describeWithTools, runTool } from '../pdf/poppler.ts';
 
 /** Metric units as printed; `mL` anywhere (a US card gives fl oz), the rest after a number or as the unit word. */
 const METRIC = /°C|\bmL\b|\d\s?mm\b|\(mm\)|\bmillimet|\bCelsius\b|\d\s?bar\b|\(bar\)/;
@@ -176,17 +176,19 @@ describe('a US build of the demo', () => {
     expect(all).toContain('No recipe'); // the tight bed is refused, in US units
   });
 
-  it('prints no metric unit in any PDF', async () => {
-    const pdfs = await filesUnder(outDir, '.pdf');
-    expect(pdfs.length).toBeGreaterThan(50);
-    const hits: string[] = [];
-    let all = '';
-    for (const pdf of pdfs) {
-      const text = runTool('pdftotext', ['-q', pdf, '-']).stdout;
-      all += text;
-      for (const hit of metricHits(text)) hits.push(`${path.relative(outDir, pdf)}: …${hit}…`);
-    }
-    expect(hits).toEqual([]);
-    for (const unit of ['°F', 'fl oz', 'psi']) expect(all).toContain(unit);
+  describeWithTools(['pdftotext'], 'its PDFs', () => {
+    it('prints no metric unit in any PDF', async () => {
+      const pdfs = await filesUnder(outDir, '.pdf');
+      expect(pdfs.length).toBeGreaterThan(50);
+      const hits: string[] = [];
+      let all = '';
+      for (const pdf of pdfs) {
+        const text = runTool('pdftotext', ['-q', pdf, '-']).stdout;
+        all += text;
+        for (const hit of metricHits(text)) hits.push(`${path.relative(outDir, pdf)}: …${hit}…`);
+      }
+      expect(hits).toEqual([]);
+      for (const unit of ['°F', 'fl oz', 'psi']) expect(all).toContain(unit);
+    });
   });
 });
