@@ -6,7 +6,7 @@ import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
 import { refusalText, warningText } from '../render/plan-text.ts';
 import { cliWords } from '../words/cli.ts';
-import { bindingCauseText } from '../render/card-view.ts';
+import { bindingCauseText } from '../render/plan-text.ts';
 import { faultWords } from '../words/build-faults.ts';
 import { pressure, pressureRough } from '../render/format.ts';
 import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';

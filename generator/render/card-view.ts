@@ -43,7 +43,7 @@ import {
   type TimeRangeText,
 } from './format.ts';
 import { insertPaths, stationPaths, type CardPaths } from './paths.ts';
-import { refusalText, warningText } from './plan-text.ts';
+import { bindingCauseText, refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
 
 export type { Quantity, TimeRangeText } from './format.ts';
@@ -500,28 +500,6 @@ async function recipe(
     },
     expect: { heading: words.expect.heading, rows: expectRows, notes },
   };
-}
-
-/** The binding cause's facts, formatted once here and said by words/card.ts. */
-export function bindingCauseText(plan: AcceptedPlan, units: UnitSystem): string {
-  const cause = plan.bindingCause!;
-  const f = cause.facts;
-  const opt = <T>(v: T | undefined, fmt: (v: T) => object): object =>
-    v === undefined ? {} : fmt(v);
-  return cardWords.expect.bindingCause(cause.code, {
-    share: share(f.share).text,
-    band: temperatureBand([f.bandLowK, f.bandHighK], units),
-    mean: temperature(f.meanK, units).text,
-    delivery: `${Math.round(f.deliveryS)} s`,
-    window: `${Math.round(f.windowLowS)}–${Math.round(f.windowHighS)} s`,
-    cups: String(f.cups ?? ''),
-    ...opt(f.gentlestW, (w) => ({ gentlest: `${Math.round(w)} W into the pot` })),
-    ...opt(f.shareAtHalfHeat, (v) => ({ shareAtHalfHeat: share(v).text })),
-    ...opt(f.shareAtHalfPermeability, (v) => ({ shareAtHalfPermeability: share(v).text })),
-    ...opt(f.shareIfAllowed, (v) => ({ shareIfAllowed: share(v).text })),
-    ...opt(f.highCornerGaugePa, (v) => ({ highCorner: pressure(v, units).text })),
-    ...opt(f.limitGaugePa, (v) => ({ limit: pressure(v, units).text })),
-  });
 }
 
 function refusal(plan: RefusedPlan, units: UnitSystem): RefusalBlock {

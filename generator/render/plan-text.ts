@@ -5,7 +5,8 @@
  * say the same thing.
  */
 import type { UnitSystem } from '../content/types.ts';
-import type { CheckedQuantity, PlanWarning, Refusal } from '../planning/types.ts';
+import type { AcceptedPlan, CheckedQuantity, PlanWarning, Refusal } from '../planning/types.ts';
+import { cardWords } from '../words/card.ts';
 import { planWords, type RefusalText } from '../words/plan.ts';
 import {
   altitude,
@@ -15,6 +16,7 @@ import {
   quantity,
   share,
   temperature,
+  temperatureBand,
   waterVolume,
 } from './format.ts';
 
@@ -77,4 +79,26 @@ function checkedValue(what: CheckedQuantity, value: number, units: UnitSystem): 
     case 'ambientK':
       return temperature(value, units).text;
   }
+}
+
+/** The binding cause's facts, formatted once here and said by words/card.ts. */
+export function bindingCauseText(plan: AcceptedPlan, units: UnitSystem): string {
+  const cause = plan.bindingCause!;
+  const f = cause.facts;
+  const opt = <T>(v: T | undefined, fmt: (v: T) => object): object =>
+    v === undefined ? {} : fmt(v);
+  return cardWords.expect.bindingCause(cause.code, {
+    share: share(f.share).text,
+    band: temperatureBand([f.bandLowK, f.bandHighK], units),
+    mean: temperature(f.meanK, units).text,
+    delivery: `${Math.round(f.deliveryS)} s`,
+    window: `${Math.round(f.windowLowS)}–${Math.round(f.windowHighS)} s`,
+    cups: String(f.cups ?? ''),
+    ...opt(f.gentlestW, (w) => ({ gentlest: `${Math.round(w)} W into the pot` })),
+    ...opt(f.shareAtHalfHeat, (v) => ({ shareAtHalfHeat: share(v).text })),
+    ...opt(f.shareAtHalfPermeability, (v) => ({ shareAtHalfPermeability: share(v).text })),
+    ...opt(f.shareIfAllowed, (v) => ({ shareIfAllowed: share(v).text })),
+    ...opt(f.highCornerGaugePa, (v) => ({ highCorner: pressure(v, units).text })),
+    ...opt(f.limitGaugePa, (v) => ({ limit: pressure(v, units).text })),
+  });
 }
