@@ -42,6 +42,7 @@ import {
   type Quantity,
   type TimeRangeText,
 } from './format.ts';
+import { heatFeel, insertSteps, type InsertStep } from './insert-steps.ts';
 import { insertPaths, stationPaths, type CardPaths } from './paths.ts';
 import { bindingCauseText, refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
@@ -50,6 +51,7 @@ export type { Quantity, TimeRangeText } from './format.ts';
 export type { CardPaths } from './paths.ts';
 export type { CrossSectionLayout } from './cross-section.ts';
 export type { HeatKind } from '../content/heat-kind.ts';
+export type { InsertStep } from './insert-steps.ts';
 
 /** What the build passes in for every card. */
 export interface CardViewOptions {
@@ -233,7 +235,10 @@ export interface InsertRow {
   readonly potName: string;
   /** "3-cup". */
   readonly cupsLabel: string;
-  /** Rows of the same pot are consecutive: the first carries their count, the others 0. */
+  /**
+   * Rows with a recipe of the same pot are consecutive in the table: the first carries
+   * their count, the others (and every refused row, which the table leaves out) 0.
+   */
   readonly potRowSpan: number;
   readonly heatKind: HeatKind;
   /** "Gas", "Electric", "Induction". */
@@ -246,6 +251,8 @@ export interface InsertRow {
   /** "80 °C", or "room temp.". */
   readonly start: string | null;
   readonly level: string | null;
+  /** The knob's label and the heat in words ("low · medium heat"), as the Setting cell prints it. */
+  readonly setting: string | null;
   readonly firstCoffee: TimeRangeText | null;
   readonly offHeat: TimeRangeText | null;
   /** The full station card of this row. */
@@ -275,7 +282,13 @@ export interface InsertCardView {
     readonly firstCoffee: string;
     readonly offHeat: string;
   };
+  /** Every row, refused ones included; the table prints those with a recipe. */
   readonly rows: readonly InsertRow[];
+  /** The numbered steps for a stranger (insert-steps.ts); empty when no row has a recipe. */
+  readonly stepsHeading: string;
+  readonly steps: readonly InsertStep[];
+  /** The refused rows, said in plain words under the table; null when there are none. */
+  readonly unsuitable: { readonly heading: string; readonly items: readonly string[] } | null;
   /** "Full cards … : <url>" when the site has a base_url. */
   readonly webLine: string | null;
   readonly page: PageSetup;
@@ -578,6 +591,7 @@ function insertRow(
       dose: null,
       start: null,
       level: null,
+      setting: null,
       firstCoffee: null,
       offHeat: null,
     };
@@ -587,14 +601,17 @@ function insertRow(
     refused: null,
     fill: fillVolume(plan.fillM3, units),
     dose: dose(plan.doseKg, units),
-    start:
-      plan.startK > plan.ambientK + 0.5
-        ? temperature(plan.startK, units).text
-        : words.roomTemperature,
+    start: isHeated(plan) ? temperature(plan.startK, units).text : words.roomTemperature,
     level: plan.levelLabel,
+    setting: words.setting(plan.levelLabel, words.heatFeel[heatFeel(e.stove, plan.levelIndex)]),
     firstCoffee: timeRange(plan.firstCoffeeS.lowS, plan.firstCoffeeS.highS),
     offHeat: timeRange(plan.offHeatS.lowS, plan.offHeatS.highS),
   };
+}
+
+/** Heated whenever the start is above the room (as the station card's water step says). */
+function isHeated(plan: AcceptedPlan): boolean {
+  return plan.startK > plan.ambientK + 0.5;
 }
 
 /** Each distinct warning once, naming the rows it applies to ("3-cup gas, 6-cup electric: …"). */
@@ -627,12 +644,32 @@ export async function insertCardView(
   const paper = options.paper ?? catalogue.site.paper;
   const paths = insertPaths(input.slug ?? input.coffeeId, catalogue.site.baseUrl);
   const words = cardWords.insert;
-  const rows = input.rows.map((row, i) => {
-    const first = i === 0 || input.rows[i - 1]!.potId !== row.potId;
+  // The table prints the rows with a recipe; a pot's span counts only those.
+  const shown = input.rows.filter((row) => row.plan.refused === null);
+  const rows = input.rows.map((row) => {
+    if (row.plan.refused !== null) return insertRow(row, 0, catalogue, units);
+    const at = shown.indexOf(row);
+    const first = at === 0 || shown[at - 1]!.potId !== row.potId;
     let span = 0;
-    if (first) while (input.rows[i + span]?.potId === row.potId) span++;
+    if (first) while (shown[at + span]?.potId === row.potId) span++;
     return insertRow(row, span, catalogue, units);
   });
+  const table = rows.filter((row) => row.refused === null);
+  const steps =
+    table.length === 0
+      ? []
+      : insertSteps(
+          table.map((row, i) => ({
+            start: row.start!,
+            room: !(shown[i]!.plan.refused === null && isHeated(shown[i]!.plan)),
+            fill: row.fill!.text,
+            dose: row.dose!.text,
+            setting: row.setting!,
+            offHeat: row.offHeat!.text,
+          })),
+          words.columns,
+        );
+  const refusedRows = rows.filter((row) => row.refused !== null);
   return {
     kind: 'insert',
     lang: langTag(options.language ?? catalogue.site.language),
@@ -646,6 +683,17 @@ export async function insertCardView(
     intro: words.intro,
     columns: words.columns,
     rows,
+    stepsHeading: words.steps.heading,
+    steps,
+    unsuitable:
+      refusedRows.length === 0
+        ? null
+        : {
+            heading: words.unsuitableHeading,
+            items: refusedRows.map((row) =>
+              words.unsuitable(row.cupsLabel, words.onHeat[row.heatKind], row.refused!.reason),
+            ),
+          },
     webLine: paths.webUrl ? words.web(paths.webUrl) : null,
     page: pageSetup(units, paper),
     paths,

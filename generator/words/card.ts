@@ -32,6 +32,9 @@ export interface BindingCauseText {
   readonly limit?: string;
 }
 
+/** How strong a stove level is, in words any stove owner understands (render/insert-steps.ts). */
+export type HeatFeel = 'gentle' | 'medium' | 'strong' | 'full';
+
 const heatKindNames: Record<HeatKind, string> = {
   gas: 'Gas',
   electric: 'Electric',
@@ -206,7 +209,7 @@ export const cardWords = {
   insert: {
     heading: 'How to brew it in a stovetop pot',
     intro:
-      'Find your pot size and your kind of stove. Pour the water, fill the basket level, do not tamp, and time from when the pot goes on the heat.',
+      'Find your pot size and your kind of stove in the table, then follow the steps.',
     columns: {
       pot: 'Pot',
       heat: 'Stove',
@@ -227,6 +230,43 @@ export const cardWords = {
     rowWarning: (rows: readonly string[], warning: string): string =>
       `${rows.join(', ')}: ${warning}`,
     fullCard: 'full card',
+    /** Heat in words any stove owner understands (render/insert-steps.ts heatFeel). */
+    heatFeel: {
+      gentle: 'gentle heat',
+      medium: 'medium heat',
+      strong: 'strong heat',
+      full: 'full heat',
+    } as Record<HeatFeel, string>,
+    /** The Setting cell: the knob's own label, then the heat in words. */
+    setting: (label: string, feel: string): string => `${label} · ${feel}`,
+    /** The numbered steps for a stranger; a value is null when the table's rows differ. */
+    steps: {
+      heading: 'Step by step',
+      kettle: (temperature: string | null, column: string): string =>
+        temperature === null
+          ? `Heat water in a kettle to the temperature in the “${column}” column (“room temp.”: no kettle needed).`
+          : `Heat water in a kettle to ${temperature}.`,
+      roomWater: 'Use water that has stood in the room: no kettle needed.',
+      fill: (volume: string | null, column: string): string =>
+        `Pour it into the base up to the line just under the valve${volume === null ? ` (the “${column}” column)` : `: ${volume}`}. Never above the valve.`,
+      basket: (dose: string | null, column: string): string =>
+        `Fill the basket with ground coffee (${dose === null ? `as in the “${column}” column` : dose}), level with the rim. Do not tamp.`,
+      seal: 'Screw the top on firmly, holding the hot base with a cloth.',
+      heat: (setting: string | null, column: string): string =>
+        `Put it on the heat at ${setting === null ? `the setting in the “${column}” column` : `setting ${setting}`}, with a flame no wider than the base (on a hob: a ring no bigger than the base).`,
+      time: (offHeat: string | null, column: string): string =>
+        `Time from when it goes on the heat. Take it off at ${offHeat === null ? `the time in the “${column}” column` : offHeat}, or sooner at the first gurgle.`,
+      cool: 'Cool the base under the cold tap, holding only the handle, then pour.',
+    },
+    /** A pot size × kind of stove that has no recipe, in plain words, under the table. */
+    unsuitableHeading: 'Not suitable',
+    onHeat: {
+      gas: 'on gas',
+      electric: 'on an electric hob',
+      induction: 'on induction',
+    } as Record<HeatKind, string>,
+    unsuitable: (cups: string, onHeat: string, reason: string): string =>
+      `The ${cups} pot ${onHeat}: ${reason}.`,
   },
   index: {
     title: 'Stovetop brew cards',

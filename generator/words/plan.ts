@@ -37,7 +37,7 @@ export const planWords = {
     code: 'induction-needs-magnetic-base',
     reason: `${potName}: an induction hob cannot heat its aluminium base.`,
     suggestion:
-      'Use a pot with a stainless-steel (magnetic) base, or brew this pot on gas or electric. If this pot has an induction plate, add induction_plate: true to its base.',
+      'Use a pot with a stainless-steel (magnetic) base, or brew this pot on gas or electric. If this pot’s base has a steel induction plate, say so in the pot’s description and the cards will use it on induction.',
   }),
   /** `limit` is rounded down by the caller: a limit is never overstated. */
   fillAboveValve: (asked: string, limit: string, margin: string): RefusalText => ({

@@ -1,19 +1,22 @@
 /**
  * The bag insert as PDF blocks, in the order of the HTML insert
  * (templates/_includes/partials/insert-card.njk): header with the coffee's notes; the
- * heading and intro; the table of pot sizes × kinds of stove (a refused row says why,
- * across the recipe columns); the web line; warnings; cautions and footer.
+ * heading and intro; the numbered steps with their pictograms (two columns where the
+ * card is wide enough, 1 … 4 then 5 … 7); the table of pot sizes × kinds of stove with a
+ * recipe; the refused ones in plain words under it; the web line; warnings; cautions and
+ * footer.
  *
  * The table's columns are sized from the measured text: each gets the width of its
  * longest word (numbers never wrap), the rest of the width goes to the columns whose text
  * would otherwise wrap. A table whose narrowest form is wider than the card does not fit
  * (and the layout tries a smaller font step).
  */
-import type { InsertCardView, InsertRow } from '../card-view.ts';
+import type { InsertCardView, InsertRow, InsertStep } from '../card-view.ts';
+import { pdfWords } from '../../words/pdf.ts';
 import { cautionsBlock, footerBlock, headerBlock, stepHeading, warningsBlock } from './blocks.ts';
-import type { Block, CardFrame } from './layout.ts';
+import { columns, stack, type Block, type CardFrame } from './layout.ts';
 import type { Pen } from './pen.ts';
-import { INK, RULE_SOFT, type CardStyle, type TextFont } from './style.ts';
+import { INK, RULE_SOFT, VALVE, type CardStyle, type TextFont } from './style.ts';
 
 type ColumnKey = keyof InsertCardView['columns'];
 
@@ -43,7 +46,7 @@ function cellText(row: InsertRow, key: ColumnKey): string {
     case 'start':
       return row.start ?? '';
     case 'level':
-      return row.level ?? '';
+      return row.setting ?? '';
     case 'firstCoffee':
       return row.firstCoffee?.text ?? '';
     case 'offHeat':
@@ -56,8 +59,6 @@ interface TableFonts {
   readonly cell: TextFont;
   readonly rowHead: TextFont;
   readonly aside: TextFont;
-  readonly refused: TextFont;
-  readonly refusedLabel: TextFont;
 }
 
 /** Column widths for `width`, or null when even the narrowest columns are too wide. */
@@ -75,8 +76,7 @@ function columnWidths(
     const head = view.columns[key];
     let lo = pen.minWidth(head, f.head);
     let hi = pen.width(head, f.head);
-    for (const row of view.rows) {
-      if (row.refused && key !== 'pot' && key !== 'heat') continue;
+    for (const row of tableRows(view)) {
       const text = cellText(row, key);
       const font = key === 'pot' ? f.rowHead : f.cell;
       const w = pen.width(text, font);
@@ -108,8 +108,6 @@ function tableBlock(view: InsertCardView, st: CardStyle): Block {
     cell: st.table,
     rowHead: { ...st.table, bold: true },
     aside: st.tableAside,
-    refused: st.tableRefused,
-    refusedLabel: { ...st.tableRefused, bold: true },
   };
   const pad = st.padding;
   const padY = st.padding * 0.7;
@@ -140,8 +138,9 @@ function tableBlock(view: InsertCardView, st: CardStyle): Block {
       pen.rule(x, y + h, w, 1.5, INK);
       h += 1.5;
       pen.group('TBody', () => {
-        view.rows.forEach((row, r) => {
-          const potStart = r > 0 && row.potId !== view.rows[r - 1]!.potId;
+        const rows = tableRows(view);
+        rows.forEach((row, r) => {
+          const potStart = r > 0 && row.potId !== rows[r - 1]!.potId;
           if (potStart) {
             pen.rule(x, y + h, w, 1.1, INK);
             h += 1.1;
@@ -160,28 +159,17 @@ function tableBlock(view: InsertCardView, st: CardStyle): Block {
               { scope: 'Row' },
             );
             pen.para('TD', row.heatLabel, lefts[1]! + pad, top, cellW(1), f.cell);
-            if (row.refused) {
-              const spanW = widths.slice(2).reduce((a, b) => a + b, 0) - 2 * pad;
-              pen.leaf(
-                'TD',
-                () => {
-                  pen.write(refusedText(row), lefts[2]! + pad, top, spanW, f.refused);
-                },
-                { colSpan: COLUMNS.length - 2 },
-              );
-            } else {
-              COLUMNS.slice(2).forEach((key, j) => {
-                const i = j + 2;
-                const numeric = NUMERIC.has(key);
-                pen.para('TD', cellText(row, key), lefts[i]! + pad, top, cellW(i), f.cell, {
-                  align: numeric ? 'right' : 'left',
-                  noWrap: numeric,
-                });
+            COLUMNS.slice(2).forEach((key, j) => {
+              const i = j + 2;
+              const numeric = NUMERIC.has(key);
+              pen.para('TD', cellText(row, key), lefts[i]! + pad, top, cellW(i), f.cell, {
+                align: numeric ? 'right' : 'left',
+                noWrap: numeric,
               });
-            }
+            });
           });
           h += rowH;
-          if (r < view.rows.length - 1 && view.rows[r + 1]!.potId === row.potId) {
+          if (r < rows.length - 1 && rows[r + 1]!.potId === row.potId) {
             pen.rule(x, y + h, w, 0.5, RULE_SOFT);
             h += 0.5;
           }
@@ -192,9 +180,9 @@ function tableBlock(view: InsertCardView, st: CardStyle): Block {
   };
 }
 
-/** "Not suitable: brew time out of range", as the HTML's bold label and reason. */
-function refusedText(row: InsertRow): string {
-  return `${row.refused!.label}: ${row.refused!.reason}`;
+/** The rows the table prints: those with a recipe (the refused ones are said under it). */
+function tableRows(view: InsertCardView): InsertRow[] {
+  return view.rows.filter((row) => row.refused === null);
 }
 
 function rowHeight(
@@ -208,24 +196,70 @@ function rowHeight(
   const cw = (i: number) => widths[i]! - 2 * pad;
   const pot = pen.lineHeight(f.rowHead) + (showPot ? pen.height(row.potName, cw(0), f.aside) : 0);
   const heat = pen.height(row.heatLabel, cw(1), f.cell);
-  if (row.refused) {
-    const spanW = widths.slice(2).reduce((a, b) => a + b, 0) - 2 * pad;
-    return Math.max(pot, heat, pen.height(refusedText(row), spanW, f.refused));
-  }
   const cells = COLUMNS.slice(2).map((key, j) =>
     NUMERIC.has(key) ? pen.lineHeight(f.cell) : pen.height(cellText(row, key), cw(j + 2), f.cell),
   );
   return Math.max(pot, heat, ...cells);
 }
 
+/** One numbered step: its pictogram, the number, the words (a list item). */
+function stepBlock(step: InsertStep, st: CardStyle): Block {
+  const size = st.h2.size * 2.4;
+  const numberFont = { ...st.noteStrong };
+  return (pen, x, y, w) => {
+    let h = 0;
+    pen.group('LI', () => {
+      pen.decoration(step.pictogramSvg, x, y, size);
+      const nx = x + size + st.padding;
+      const label = pdfWords.stepNumber(step.n);
+      const nw = pen.width('00', numberFont);
+      pen.para('Lbl', label, nx, y, nw, numberFont, { noWrap: true });
+      const tx = nx + nw + st.padding;
+      h = Math.max(size, pen.para('LBody', step.text, tx, y, x + w - tx, st.note));
+    });
+    return h;
+  };
+}
+
+/** The numbered steps, in two columns (1 … 4, then 5 … 7) where the card is wide enough. */
+function stepsBlock(view: InsertCardView, st: CardStyle): Block {
+  if (view.steps.length === 0) return () => 0;
+  const items = view.steps.map((step) => stepBlock(step, st));
+  return (pen, x, y, w) => {
+    let h = pen.para('H3', view.stepsHeading, x, y, w, st.h3);
+    const list = w >= 260 ? columns(items, st.padding * 1.5, st.gutter) : stack(items, st.padding);
+    h += pen.group('L', () => list(pen, x, y + h, w));
+    return h;
+  };
+}
+
+/** The refused rows in plain words, under the table. */
+function unsuitableBlock(view: InsertCardView, st: CardStyle): Block {
+  const unsuitable = view.unsuitable;
+  if (unsuitable === null) return () => 0;
+  const font = { ...st.note, color: VALVE };
+  return (pen, x, y, w) =>
+    pen.group('Div', () => {
+      let h = pen.para('H3', unsuitable.heading, x, y, w, { ...st.h3, color: VALVE });
+      for (const item of unsuitable.items) h += pen.para('P', item, x, y + h, w, font);
+      return h;
+    });
+}
+
 function bodyBlock(view: InsertCardView, st: CardStyle): Block {
   const table = tableBlock(view, st);
+  const steps = stepsBlock(view, st);
+  const unsuitable = unsuitableBlock(view, st);
   return (pen, x, y, w) =>
     pen.group('Sect', () => {
       let h = stepHeading(pen, null, view.heading, null, x, y, w, st);
       h += pen.para('P', view.intro, x, y + h, w, st.note);
       h += st.padding;
-      h += table(pen, x, y + h, w);
+      const stepsH = steps(pen, x, y + h, w);
+      if (stepsH > 0) h += stepsH + st.gap;
+      if (tableRows(view).length > 0) h += table(pen, x, y + h, w);
+      const unsuitableH = unsuitable(pen, x, y + h + st.padding, w);
+      if (unsuitableH > 0) h += st.padding + unsuitableH;
       if (view.webLine)
         h += st.padding + pen.para('P', view.webLine, x, y + h + st.padding, w, st.web);
       return h;

@@ -369,6 +369,25 @@ export class Pen {
     return height;
   }
 
+  /** An SVG drawing scaled to `width`, as decoration (an artifact: the text beside it says it all). */
+  decoration(svg: string, x: number, y: number, width: number): number {
+    const size = svgSize(svg);
+    const scale = width / size.width;
+    if (this.drawing) {
+      this.artifact(() => {
+        this.doc.translate(x, y).scale(scale);
+        SVGtoPDF(this.doc, pdfSafeSvg(svg), 0, 0, {
+          assumePt: true,
+          width: size.width,
+          height: size.height,
+          fontCallback: svgFontCallback,
+          warningCallback: (message) => this.warnings.push(message),
+        });
+      });
+    }
+    return size.height * scale;
+  }
+
   private parent(): StructElement {
     const parent = this.parents[this.parents.length - 1];
     if (!parent) throw new Error('PDF: no structure parent');
