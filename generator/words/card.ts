@@ -208,8 +208,7 @@ export const cardWords = {
   },
   insert: {
     heading: 'How to brew it in a stovetop pot',
-    intro:
-      'Find your pot size and your kind of stove in the table, then follow the steps.',
+    intro: 'Find your pot size and your kind of stove in the table, then follow the steps.',
     columns: {
       pot: 'Pot',
       heat: 'Stove',

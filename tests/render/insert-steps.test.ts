@@ -9,7 +9,12 @@ import { INSERT_STEP_ORDER, pictogramSvg } from '../../generator/render/pictogra
 import { cardWords } from '../../generator/words/card.ts';
 
 const levels = (...watts: number[]) => ({
-  levels: watts.map((powerW, i) => ({ label: String(i + 1), powerW, fitted: false })),
+  levels: watts.map((powerW, i) => ({
+    label: String(i + 1),
+    powerW,
+    heatToPotW: powerW * 0.5,
+    fitted: false,
+  })),
 });
 
 describe('heatFeel(stove, level)', () => {
