@@ -44,7 +44,10 @@ export interface StepColumns {
  * the top level full). Common practice, no source: cookbooks say "gentle", "medium",
  * "strong" for these thirds of a knob's range.
  */
-export function heatFeel(stove: Pick<StoveEntry, 'levels'>, levelIndex: number): HeatFeel {
+export function heatFeel(
+  stove: { readonly levels: readonly Pick<StoveEntry['levels'][number], 'powerW'>[] },
+  levelIndex: number,
+): HeatFeel {
   const top = Math.max(...stove.levels.map((level) => level.powerW));
   const share = (stove.levels[levelIndex]?.powerW ?? top) / top;
   if (levelIndex === stove.levels.length - 1 || share >= 0.95) return 'full';
