@@ -355,18 +355,23 @@ export class Pen {
       () => {
         this.doc.save();
         this.doc.translate(x, y).scale(scale);
-        SVGtoPDF(this.doc, pdfSafeSvg(svg), 0, 0, {
-          assumePt: true,
-          width: size.width,
-          height: size.height,
-          fontCallback: svgFontCallback,
-          warningCallback: (message) => this.warnings.push(message),
-        });
+        this.svgAt(svg, size);
         this.doc.restore();
       },
       { alt, bbox: [x, y, x + width, y + height] },
     );
     return height;
+  }
+
+  /** Draws `svg` at the current origin in its own size (the caller translates and scales). */
+  private svgAt(svg: string, size: SvgSize): void {
+    SVGtoPDF(this.doc, pdfSafeSvg(svg), 0, 0, {
+      assumePt: true,
+      width: size.width,
+      height: size.height,
+      fontCallback: svgFontCallback,
+      warningCallback: (message) => this.warnings.push(message),
+    });
   }
 
   /** An SVG drawing scaled to `width`, as decoration (an artifact: the text beside it says it all). */
@@ -376,13 +381,7 @@ export class Pen {
     if (this.drawing) {
       this.artifact(() => {
         this.doc.translate(x, y).scale(scale);
-        SVGtoPDF(this.doc, pdfSafeSvg(svg), 0, 0, {
-          assumePt: true,
-          width: size.width,
-          height: size.height,
-          fontCallback: svgFontCallback,
-          warningCallback: (message) => this.warnings.push(message),
-        });
+        this.svgAt(svg, size);
       });
     }
     return size.height * scale;
