@@ -14,6 +14,7 @@
  * generator/content/schemas/site.schema.json. DEVELOPERS.md, "Words and languages".
  */
 import { en } from './en.ts';
+import { es } from './es.ts';
 
 type Widen<T> = T extends string
   ? string
@@ -28,7 +29,7 @@ type Widen<T> = T extends string
 /** Everything a language must say: the shape of the English catalogue. */
 export type Messages = Widen<typeof en>;
 
-const CATALOGUES = { en } satisfies Record<string, Messages>;
+const CATALOGUES = { en, es } satisfies Record<string, Messages>;
 
 export type Language = keyof typeof CATALOGUES;
 

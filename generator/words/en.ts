@@ -10,6 +10,11 @@ import { planWords } from './plan.ts';
 export const en = {
   /** BCP 47 tag of this catalogue's text: HTML `lang` and the PDFs' `/Lang` and dc:language. */
   langTag: 'en-GB',
+  /** How numbers and dates are written (render/voice.ts): decimal mark; the footer's date from YYYY-MM-DD. */
+  format: {
+    decimal: '.',
+    date: (iso: string): string => iso,
+  },
   card: cardWords,
   method: methodWords,
   troubleshooting: troubleshootingWords,

@@ -1,0 +1,479 @@
+/**
+ * The Spanish catalogue (Spain's usage, `es-ES`): every sentence a customer reads on a card,
+ * an insert, a set page, the binder and the PDFs. Typed `Messages` (catalogue.ts), so a key
+ * English has and this file lacks fails tsc. Written by the project, not reviewed by a
+ * translator (content/README.md). Trade terms as Spanish coffee trade uses them: cafetera
+ * (italiana), depósito (the base; the "caldera"), filtro/embudo (the basket and its tube),
+ * colector (the upper chamber), junta, placa filtrante, válvula de seguridad, molienda,
+ * tueste, hervidor, placa (a hob), fuego.
+ */
+import type { HeatKind } from '../content/heat-kind.ts';
+import type { GrindClass } from '../content/types.ts';
+import type { BindingCauseCode, CheckedQuantity, RefusalCode } from '../planning/types.ts';
+import type { Messages } from './catalogue.ts';
+import type { BindingCauseText, HeatFeel } from './card.ts';
+import type { RefusalText } from './plan.ts';
+
+/** Grind classes as a noun phrase after "molienda" ("molienda media-fina"). */
+const grindNames: Record<GrindClass, string> = {
+  fine: 'fina',
+  'medium-fine': 'media-fina',
+  medium: 'media',
+  'medium-coarse': 'media-gruesa',
+  coarse: 'gruesa',
+};
+
+const coarser: Record<GrindClass, GrindClass> = {
+  fine: 'medium-fine',
+  'medium-fine': 'medium',
+  medium: 'medium-coarse',
+  'medium-coarse': 'coarse',
+  coarse: 'coarse',
+};
+
+const heatKindNames: Record<HeatKind, string> = {
+  gas: 'Gas',
+  electric: 'Eléctrica',
+  induction: 'Inducción',
+};
+
+const quantityNames: Record<CheckedQuantity, string> = {
+  permeabilityM2: 'La permeabilidad de la cama de café',
+  heatToPotW: 'El calor que llega a la cafetera',
+  altitudeM: 'La altitud',
+  sealedVolumeM3: 'El volumen cerrado del depósito',
+  ambientK: 'La temperatura ambiente',
+};
+
+const card: Messages['card'] = {
+  siteTitle: 'Fichas de preparación para cafetera',
+  stationSubtitle: (potName: string, stoveName: string): string =>
+    `en ${potName} · sobre ${stoveName}`,
+  insertSubtitle: (roast: string, grind: GrindClass): string =>
+    `tueste ${roast} · molienda ${grindNames[grind]}`,
+
+  water: {
+    heading: 'Agua',
+    heated: 'Calentar el agua a',
+    kettlePreset: (preset: string): string => `Use la posición de ${preset} del hervidor.`,
+    thermometer: (temperature: string): string =>
+      `Caliéntela a ${temperature}; compruébelo con un termómetro.`,
+    roomTemperature: 'Agua a temperatura ambiente',
+    roomTemperatureNote: (room: string): string =>
+      `Agua que ha reposado en la sala (unos ${room}); no hace falta hervidor.`,
+    heatedNote: 'Viértala caliente, cierre la cafetera y póngala enseguida al fuego.',
+    fill: 'Llenar el depósito con',
+    fillMass: (mass: string): string => `(${mass} en la báscula)`,
+    fillLine: (height: string, below: string): string =>
+      `Hasta ${height} desde el fondo: ${below} por debajo de la válvula.`,
+  },
+  coffee: {
+    heading: 'Café',
+    dose: 'Café molido',
+    level: 'Filtro lleno hasta el borde, enrasado.',
+    grind: (grind: GrindClass): string => `Molienda ${grindNames[grind]}.`,
+    noTamp: 'No lo prense.',
+  },
+  heat: {
+    heading: 'Fuego',
+    setting: 'Posición',
+    on: (stoveName: string): string => `en ${stoveName}`,
+    fitted: 'Calor medido en este fuego con preparaciones cronometradas.',
+  },
+  timings: {
+    heading: 'Tiempos',
+    clockNote: 'Desde que la cafetera se pone al fuego.',
+    firstCoffee: 'Primer café',
+    offHeat: 'Retirar del fuego',
+    watchHeading: 'Mire y escuche',
+    watch: [
+      'Al principio el café sube en un chorro oscuro y regular.',
+      'Hacia el final se aclara y sale más deprisa.',
+      'Un gorgoteo o un silbido indica que el depósito está casi vacío: el borboteo está cerca.',
+      'Retire entonces la cafetera del fuego, o a la hora indicada si llega antes, y enfríe el depósito bajo el grifo de agua fría para cortar la extracción.',
+    ],
+  },
+  chart: {
+    heading: 'Temperatura de cada sorbo',
+    xTitle: (unit: string): string => `Café en la taza (${unit})`,
+    yTitle: (unit: string): string => `Temperatura de extracción (${unit})`,
+    thisCard: 'Esta ficha',
+    coldStart: 'En frío',
+    band: (band: string): string => `Objetivo ${band}`,
+    caption:
+      'Temperatura de extracción: la del agua al llegar al café molido (el punto de contacto de la SCA).',
+    alt: (plan: string, cold: string, band: string): string =>
+      `Gráfico: temperatura de extracción frente al café en la taza. Esta ficha: ${plan} de la taza en el objetivo ${band}; empezando en frío: ${cold}.`,
+  },
+  expect: {
+    heading: 'Qué esperar',
+    yield: 'Café en la taza',
+    inBand: (band: string): string => `Extraído a ${band}`,
+    inBandValue: (plan: string, cold: string): string => `${plan} de la taza (en frío: ${cold})`,
+    peakPressure: 'Presión máxima en el depósito',
+    peakPressureValue: (peak: string, valve: string, highest?: string): string =>
+      `${peak}${highest ? ` (hasta ${highest})` : ''}; la válvula abre a ${valve}`,
+    peakPressureAssumedValue: (peak: string, valve: string, highest?: string): string =>
+      `${peak}${highest ? ` (hasta ${highest})` : ''}; la válvula abre a unos ${valve} (supuesto: no se indicó; consulte al fabricante)`,
+    bindingCause: (code: BindingCauseCode, f: BindingCauseText): string => {
+      const lead = `Solo el ${f.share} de la taza se extrae a ${f.band}`;
+      switch (code) {
+        case 'bed-too-open':
+          return `${lead}: la cama de café es demasiado abierta para esta cafetera y el agua la atraviesa antes de estar caliente (${f.shareAtHalfPermeability ?? '?'} con una cama la mitad de permeable). Muela más fino o use una cafetera más grande.`;
+        case 'bed-too-tight':
+          return `${lead}: la cama de café es tan compacta que el agua pasa por encima del objetivo (unos ${f.mean} de media). Muela más grueso y no prense nunca.`;
+        case 'gentlest-heat-too-strong':
+          return `${lead}: incluso la posición más suave del fuego (${f.gentlest}) es demasiado fuerte para esta cafetera (${f.shareAtHalfHeat ?? '?'} con la mitad de calor). Use un difusor de calor o un quemador más pequeño.`;
+        case 'pot-too-small-for-window':
+          return `${lead}: la cafetera es demasiado pequeña para el tiempo de extracción de este café; su preparación de ${f.cups} tazas dura ${f.delivery} frente a ${f.window}. Use una cafetera más grande o una molienda más gruesa.`;
+        case 'pressure-margin-binds':
+          return `${lead}: empezar más caliente llegaría a ${f.highCorner} si los datos no son exactos, por encima del límite de media válvula de ${f.limit} (daría ${f.shareIfAllowed ?? '?'}). Cronometre unas preparaciones para afinar los datos, o muela más grueso.`;
+        case 'band-out-of-reach':
+          return `${lead} (unos ${f.mean} de media): ninguna posición de este fuego alcanza el objetivo con esta cafetera y este café. Pruebe otra molienda u otro fuego.`;
+      }
+    },
+    boiling: 'Aquí el agua hierve a',
+    boilingValue: (boiling: string, altitude: string): string => `${boiling} (altitud ${altitude})`,
+    assumed: (grind: GrindClass | null, stove: boolean): string => {
+      const parts = [
+        ...(grind ? [`una molienda ${grindNames[grind]} típica`] : []),
+        ...(stove ? ['un rendimiento típico para este tipo de fuego'] : []),
+      ];
+      return `Los tiempos suponen ${parts.join(' y ')}; un registro de preparaciones cronometradas los afina.`;
+    },
+  },
+  warningsHeading: 'Compruebe',
+  refusal: {
+    heading: 'Sin receta en esta ficha',
+    short: {
+      'fill-above-valve': 'poco espacio bajo la válvula',
+      'pressure-near-valve': 'café demasiado compacto para esta cafetera',
+      'induction-needs-magnetic-base': 'el depósito no sirve para inducción',
+      'no-delivery': 'el agua no llega a subir',
+      'no-plan-fits': 'tiempo de extracción fuera de rango',
+    } satisfies Record<RefusalCode, string>,
+    why: 'Por qué',
+    change: 'Qué cambiar',
+    note: 'Esta cafetera, este café y este fuego no tienen receta porque no sería seguro o no saldría bien.',
+  },
+  cautions: {
+    heading: 'Seguridad',
+    full: [
+      'Agua hirviendo, vapor y metal caliente: sujétela solo por el asa; use un paño para el depósito.',
+      'Antes de cerrar, compruebe que la junta y la placa filtrante están enteras y en su sitio; limpie el borde del filtro.',
+      'No llene nunca por encima de la válvula.',
+      'No prense nunca el café.',
+      'No caliente nunca la cafetera vacía.',
+      'La llama no debe sobresalir del depósito; el asa, lejos de ella.',
+      'No deje nunca la cafetera sola en el fuego; mantenga alejados a los niños.',
+      'Cuando borbotee, aparte la cara y las manos del caño y de la tapa.',
+      'No tape nunca la válvula de seguridad ni la dirija hacia nadie; manténgala limpia y libre. No use una cafetera con la válvula o la junta dañadas.',
+      'Antes de abrirla, deje enfriar el depósito, o enfríelo bajo el grifo de agua fría sujetándola solo por el asa.',
+    ],
+    compact: [
+      'Agua, vapor y metal calientes: solo por el asa.',
+      'Revise junta y placa filtrante; limpie el borde.',
+      'Nunca por encima de la válvula.',
+      'No prense nunca.',
+      'Nunca la caliente vacía.',
+      'Llama no más ancha que el depósito; asa apartada.',
+      'Nunca sola en el fuego; niños lejos.',
+      'Cara y manos lejos del caño y la tapa.',
+      'Nunca tape ni apunte la válvula; nunca con válvula o junta dañadas.',
+      'Enfríe el depósito (grifo, por el asa) antes de abrir.',
+    ],
+    deferral: 'Siga las instrucciones del fabricante y la normativa local.',
+  },
+  footer: {
+    printedBy: (business: string, contact: string): string => `De ${business} · ${contact}`,
+    built: (date: string, fingerprint: string): string =>
+      `calculada el ${date} · ficha ${fingerprint}`,
+    qr: 'En la web:',
+  },
+  crossSection: {
+    title: (potName: string): string => `Corte de ${potName}`,
+    fillLine: 'Nivel de llenado',
+    valve: 'Válvula',
+    margin: (gap: string): string => `${gap} bajo la válvula`,
+    basket: 'Filtro',
+    tube: 'Tubo del embudo',
+  },
+  insert: {
+    heading: 'Cómo prepararlo en cafetera italiana',
+    intro: 'Busque en la tabla el tamaño de su cafetera y su tipo de fuego, y siga los pasos.',
+    columns: {
+      pot: 'Cafetera',
+      heat: 'Fuego',
+      fill: 'Agua',
+      dose: 'Café',
+      start: 'Temp. agua',
+      level: 'Posición',
+      firstCoffee: 'Primer café',
+      offHeat: 'Retirar',
+    },
+    heatKind: (kind: HeatKind): string => heatKindNames[kind],
+    roomTemperature: 'temp. ambiente',
+    notSuitable: 'No adecuada',
+    web: (url: string): string =>
+      `Fichas completas con el dibujo de llenado y un gráfico por fila: ${url}`,
+    cups: (cups: number): string => `${cups} tazas`,
+    rowName: (cups: string, heat: string): string => `${cups} ${heat.toLowerCase()}`,
+    rowWarning: (rows: readonly string[], warning: string): string =>
+      `${rows.join(', ')}: ${warning}`,
+    fullCard: 'ficha completa',
+    heatFeel: {
+      gentle: 'fuego suave',
+      medium: 'fuego medio',
+      strong: 'fuego fuerte',
+      full: 'fuego máximo',
+    } satisfies Record<HeatFeel, string>,
+    setting: (label: string, feel: string): string => `${label} · ${feel}`,
+    steps: {
+      heading: 'Paso a paso',
+      kettle: (temperature: string | null, column: string): string =>
+        temperature === null
+          ? `Caliente agua en un hervidor a la temperatura de la columna «${column}» («temp. ambiente»: sin hervidor).`
+          : `Caliente agua en un hervidor a ${temperature}.`,
+      roomWater: 'Use agua que haya reposado en la sala: no hace falta hervidor.',
+      fill: (volume: string | null, column: string): string =>
+        `Viértala en el depósito hasta la marca, justo bajo la válvula${volume === null ? ` (columna «${column}»)` : `: ${volume}`}. Nunca por encima de la válvula.`,
+      basket: (dose: string | null, column: string): string =>
+        `Llene el filtro de café molido (${dose === null ? `según la columna «${column}»` : dose}), enrasado con el borde. No lo prense.`,
+      seal: 'Enrosque bien la parte superior, sujetando el depósito caliente con un paño.',
+      heat: (setting: string | null, column: string): string =>
+        `Póngala al fuego en ${setting === null ? `la posición de la columna «${column}»` : `la posición ${setting}`}, con una llama que no sobresalga del depósito (en placa: una zona no mayor que el depósito).`,
+      time: (offHeat: string | null, column: string): string =>
+        `Cuente desde que la pone al fuego. Retírela a ${offHeat === null ? `la hora de la columna «${column}»` : `los ${offHeat}`}, o antes si empieza a gorgotear.`,
+      cool: 'Enfríe el depósito bajo el grifo de agua fría, sujetándola solo por el asa, y sirva.',
+    },
+    unsuitableHeading: 'No adecuada',
+    onHeat: {
+      gas: 'en gas',
+      electric: 'en placa eléctrica',
+      induction: 'en inducción',
+    } satisfies Record<HeatKind, string>,
+    unsuitable: (cups: string, onHeat: string, reason: string): string =>
+      `La cafetera de ${cups} ${onHeat}: ${reason}.`,
+  },
+  index: {
+    title: 'Fichas de preparación para cafetera',
+    intro: (business: string): string =>
+      `Todas las fichas que imprime ${business}, calculadas a partir de las medidas de la cafetera, el café y el fuego. Imprima cada una en una sola página.`,
+    sets: 'Juegos de fichas',
+    station: 'Fichas de barra',
+    insert: 'Fichas para la bolsa',
+    page: 'Página web',
+    pdf: 'PDF',
+    open: 'abrir',
+    download: 'descargar',
+    pot: 'Cafetera',
+    coffee: 'Café',
+    stove: 'Fuego',
+    refused: 'sin receta',
+    more: 'Para el manual de formación',
+    method: 'Cómo funciona la cafetera',
+    troubleshooting: 'Cuando algo sale mal',
+    rowDetails: 'Ficha completa por fila',
+  },
+  nav: {
+    home: 'Todas las fichas',
+    method: 'Cómo funciona la cafetera',
+    troubleshooting: 'Cuando algo sale mal',
+    print: 'Imprima esta ficha en una sola página.',
+  },
+};
+
+const method: Messages['method'] = {
+  title: 'Cómo funciona la cafetera',
+  sections: [
+    {
+      heading: 'Una caldera cerrada',
+      paragraphs: [
+        'Una vez enroscada la cafetera, el depósito contiene agua y, encima, una bolsa de aire y vapor de agua. La única salida es hacia arriba, por el tubo del embudo, a través del café y hasta el colector.',
+        'Al calentarse el depósito, esa bolsa de gas empuja cada vez más el agua y la hace subir por el tubo. Empujan dos cosas: el aire, que se dilata al calentarse, y el vapor, cuya presión sube deprisa cuando el agua se acerca a la ebullición.',
+      ],
+    },
+    {
+      heading: 'Por qué las fichas empiezan con agua caliente',
+      paragraphs: [
+        'Si se llena con agua fría, casi todo el empuje viene de calentar el aire encerrado. El aire empuja en cuanto se calienta, así que el café empieza a salir pronto, cuando el agua aún está muy por debajo de la temperatura de extracción. La primera parte de la taza se extrae fría.',
+        'Si se llena con agua caliente, queda menos aire encerrado: el espacio sobre el agua caliente ya está cargado de vapor. El empuje viene entonces sobre todo del vapor, que solo aumenta cuando el agua está cerca de hervir, así que el café empieza a salir cerca de la temperatura de extracción.',
+        'La temperatura del hervidor de cada ficha es la que, según el modelo, extrae la mayor parte de la taza dentro del objetivo de temperatura del café.',
+      ],
+    },
+    {
+      heading: 'Qué marca el ritmo',
+      paragraphs: [
+        'El agua atraviesa la cama de café como cualquier lecho poroso (ley de Darcy): el caudal es la presión a través de la cama por su permeabilidad y su superficie, dividido por la viscosidad del agua y el espesor de la cama.',
+        'La molienda y el grado de compactación fijan la permeabilidad. Una molienda más fina o una cama prensada deja pasar menos agua a la misma presión, así que la extracción es más lenta y la presión del depósito sube más. Por eso las fichas dicen que no se prense nunca, y por eso una molienda demasiado fina puede dejar una ficha sin receta.',
+        'La posición del fuego fija lo deprisa que sube la presión; el llenado fija cuánta agua hay antes de que el depósito se vacíe.',
+      ],
+    },
+    {
+      heading: 'El final de la extracción',
+      paragraphs: [
+        'Cuando el agua del depósito baja hasta el extremo inferior del tubo del embudo, el gas se abre paso: la cafetera gorgotea y borbotea. La última agua que sube es la más caliente, y detrás viene el vapor.',
+        'Retirar antes la cafetera del fuego y enfriar el depósito bajo el grifo de agua fría corta la extracción antes de ese final áspero. La hora de retirada de cada ficha se elige para la mayor parte de la taza en el objetivo.',
+      ],
+    },
+    {
+      heading: 'Lo que el modelo deja fuera',
+      paragraphs: [
+        'Las fichas salen de un modelo sencillo: el agua se toma como bien mezclada, el depósito como un cilindro de paredes rectas, la cama como rígida, y el ancho de la llama o de la placa se reduce a un solo rendimiento. Por eso los tiempos se dan como intervalos. Un registro de preparaciones cronometradas los afina.',
+      ],
+    },
+  ],
+  exampleHeading: 'Un ejemplo de estas fichas',
+  example: (a: {
+    coffee: string;
+    pot: string;
+    stove: string;
+    start: string;
+    planFirst: string;
+    planShare: string;
+    coldFirst: string;
+    coldShare: string;
+    band: string;
+  }): string =>
+    `${a.coffee} en ${a.pot} sobre ${a.stove}: empezando con agua fría, el primer café llega al colector hacia ${a.coldFirst} y el ${a.coldShare} de la taza se extrae a ${a.band}. Empezando a ${a.start}, como dice la ficha, el primer café llega hacia ${a.planFirst} y el ${a.planShare} de la taza se extrae a ${a.band}.`,
+};
+
+const troubleshooting: Messages['troubleshooting'] = {
+  title: 'Cuando algo sale mal',
+  intro:
+    'Cada problema se relaciona con los datos que lo mueven en el modelo que hay detrás de las fichas. Cambie una sola cosa cada vez, partiendo de la receta de la propia ficha.',
+  columns: { symptom: 'Qué ve', cause: 'Qué dice el modelo', change: 'Qué cambiar' },
+  rows: [
+    {
+      symptom: 'Gorgotea y borbotea pronto',
+      cause:
+        'El depósito se vació deprisa hasta el extremo del tubo del embudo: el fuego es demasiado fuerte para esta cafetera, la cama deja pasar el agua con demasiada facilidad (molienda gruesa), o había menos agua de la que dice la ficha.',
+      change:
+        'Llene hasta la marca de la ficha, use la posición de la ficha o una menos, y compruebe que la molienda no es más gruesa que la de la ficha.',
+    },
+    {
+      symptom: 'Sale muy despacio, o no sale nada',
+      cause:
+        'La cama está demasiado compacta: la molienda es demasiado fina, el café se prensó o el filtro se llenó en exceso. Una cama compacta frena la salida y la presión sube en el depósito. Un fuego demasiado bajo también frena la subida.',
+      change:
+        'Muela más grueso, llene el filtro enrasado sin prensar y use la posición de la ficha. Si sigue lento, retírela del fuego y déjela enfriar antes de abrir.',
+    },
+    {
+      symptom: 'Sabe amargo o áspero',
+      cause:
+        'Demasiada parte de la taza se extrajo por encima del objetivo: la cafetera siguió al fuego hasta el borboteo, cuando pasan el agua más caliente y el vapor.',
+      change:
+        'Retírela del fuego a la hora de la ficha o al primer gorgoteo, y enfríe el depósito enseguida bajo el grifo de agua fría.',
+    },
+    {
+      symptom: 'Sabe flojo, aguado o ácido',
+      cause:
+        'Demasiada parte de la taza se extrajo por debajo del objetivo: el agua empezó fría, así que el café salió pronto y frío, o la cama era demasiado abierta (molienda gruesa, filtro sin llenar).',
+      change:
+        'Empiece con el agua a la temperatura de la ficha, llene el filtro hasta el borde y use la molienda de la ficha.',
+    },
+  ],
+  movesHeading: 'Qué dato mueve qué',
+  movesIntro: (pot: string, coffee: string, stove: string): string =>
+    `Calculado por el modelo para ${coffee} en ${pot} sobre ${stove}, cambiando un solo dato de la receta de la ficha cada vez:`,
+  movesColumns: {
+    change: 'Cambio',
+    firstCoffee: 'Primer café',
+    meanTemperature: 'Temperatura media',
+    inBand: 'Parte en el objetivo',
+    peak: 'Presión máxima',
+  },
+  moves: {
+    baseline: 'La receta de la ficha',
+    finer: 'Molienda más fina (cama un 30 % más compacta)',
+    coarser: 'Molienda más gruesa (cama un 30 % más abierta)',
+    lessWater: 'Una quinta parte menos de agua',
+    moreHeat: 'Una posición más alta',
+    lessHeat: 'Una posición más baja',
+    coldStart: 'Agua fría en vez de caliente',
+  },
+  noCoffee: 'ninguno antes de retirarla',
+};
+
+const plan: Messages['plan'] = {
+  inductionNeedsMagneticBase: (potName: string): RefusalText => ({
+    code: 'induction-needs-magnetic-base',
+    reason: `${potName}: una placa de inducción no calienta su depósito de aluminio.`,
+    suggestion:
+      'Use una cafetera con depósito de acero inoxidable (magnético), o prepare esta en gas o en placa eléctrica. Si el depósito de esta cafetera lleva una placa de acero para inducción, indíquelo en su descripción y las fichas la usarán en inducción.',
+  }),
+  fillAboveValve: (asked: string, limit: string, margin: string): RefusalText => ({
+    code: 'fill-above-valve',
+    reason: `${asked} de agua subirían hasta la válvula de seguridad o por encima al calentarse y dilatarse.`,
+    suggestion: `Llene como mucho ${limit} (el nivel queda ${margin} por debajo de la válvula en caliente).`,
+  }),
+  pressureNearValve: (peak: string, valve: string, grind: GrindClass): RefusalText => ({
+    code: 'pressure-near-valve',
+    reason: `Incluso en la posición más suave la presión llegaría a ${peak}, más de la mitad de los ${valve} de la válvula: la cama es demasiado compacta para esta cafetera.`,
+    suggestion:
+      grind === 'coarse'
+        ? 'Use un café más abierto (menor densidad aparente o una molienda fresca y menos compacta) o una cafetera con un filtro más grande.'
+        : `Muela más grueso (molienda ${grindNames[coarser[grind]]} en vez de ${grindNames[grind]}) y no prense nunca el filtro.`,
+  }),
+  noDelivery: (): RefusalText => ({
+    code: 'no-delivery',
+    reason: 'Ninguna posición hace subir el café al colector antes de que se acabe el agua.',
+    suggestion: 'Llene el depósito más cerca de la marca o use una molienda más gruesa.',
+  }),
+  noPlanFits: (low: string, high: string, tooFast: boolean): RefusalText => ({
+    code: 'no-plan-fits',
+    reason: `Ninguna posición mantiene la salida del café entre ${low} y ${high}.`,
+    suggestion: tooFast
+      ? 'El café pasa demasiado deprisa: muela más fino o use una posición de fuego más baja.'
+      : 'El café pasa demasiado despacio: muela más grueso o use una posición de fuego más alta.',
+  }),
+  outsideCheckedRange: (what: CheckedQuantity, value: string, low: string, high: string): string =>
+    `${quantityNames[what]}, ${value}, está fuera del rango en que se comprobó el modelo (de ${low} a ${high}); tome los tiempos como aproximados.`,
+  coolCup: (share: string): string =>
+    `Solo el ${share} de la taza llega al objetivo de temperatura: incluso la posición más suave extrae demasiado deprisa en esta cafetera para el agua caliente. Una llama más baja o un difusor de calor permitirían empezar más caliente.`,
+  smallFill: (): string =>
+    'El llenado apenas supera el tubo del embudo; el modelo no se comprobó para preparaciones tan pequeñas.',
+};
+
+const pdf: Messages['pdf'] = {
+  creator: 'stovecard',
+  stationTitle: (coffee: string, subtitle: string): string => `${coffee} — ${subtitle}`,
+  insertTitle: (coffee: string): string => `${coffee} — ficha para la bolsa`,
+  setTitle: (set: string): string => set,
+  crossSectionAlt: (title: string, fillLine: string): string => `${title}. ${fillLine}`,
+  qrAlt: (url: string): string => `Código QR de ${url}`,
+  stepNumber: (n: number): string => `${n}`,
+  listNumber: (n: number): string => `${n}.`,
+  bullet: '•',
+  contents: {
+    heading: 'Índice',
+    intro: (count: number): string =>
+      count === 1
+        ? 'Una ficha, en su propia página.'
+        : `${count} fichas, cada una en su propia página.`,
+    frontMatter: 'Antes de las fichas',
+    cards: 'Las fichas',
+    station: (title: string, subtitle: string): string => `${title}, ${subtitle}`,
+    refused: (line: string, status: string): string => `${line} (${status})`,
+  },
+  doesNotFit: (cardName: string, paper: string, usedPt: number, availablePt: number): string =>
+    `la ficha «${cardName}» no cabe en una página ${paper} ni con la letra más pequeña (${Math.ceil(usedPt)} pt de texto para ${Math.floor(availablePt)} pt): acorte su texto más largo en el YAML (un nombre, las notas) o imprima en papel más grande (paper: en site.yaml).`,
+  pageNumber: (n: number, total: number): string => `${n} / ${total}`,
+};
+
+export const es: Messages = {
+  langTag: 'es-ES',
+  format: {
+    decimal: ',',
+    /** Day/month/year, "03/12/2026" (the numeric form Spain writes dates in). */
+    date: (iso: string): string => {
+      const [y, m, d] = iso.split('-');
+      return `${d}/${m}/${y}`;
+    },
+  },
+  card,
+  method,
+  troubleshooting,
+  plan,
+  pdf,
+};
