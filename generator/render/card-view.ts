@@ -20,8 +20,6 @@ import type {
 } from '../content/types.ts';
 import type { AcceptedPlan, CardPlan, RefusedPlan } from '../planning/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
-import { cardWords } from '../words/card.ts';
-import { langTag } from '../words/catalogue.ts';
 import { cupChartSpec, renderChartSvg } from './chart.ts';
 import { crossSection, type CrossSectionLayout } from './cross-section.ts';
 import {
@@ -46,6 +44,8 @@ import { heatFeel, insertSteps, type InsertStep } from './insert-steps.ts';
 import { insertPaths, stationPaths, type CardPaths } from './paths.ts';
 import { bindingCauseText, refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
+import { asVoice, voiceFor, type Voice } from './voice.ts';
+import type { Messages } from '../words/catalogue.ts';
 
 export type { Quantity, TimeRangeText } from './format.ts';
 export type { CardPaths } from './paths.ts';
@@ -67,6 +67,14 @@ export interface CardViewOptions {
   readonly language?: string;
 }
 
+/** The links at the top of a page and its print hint ("Print this card on one page. PDF"), in the page's language. */
+export type PageNav = Messages['card']['nav'] & { readonly pdf: string };
+
+/** A page's links in a voice's language. */
+export function pageNav(voice: Voice): PageNav {
+  return { ...voice.words.card.nav, pdf: voice.words.card.index.pdf };
+}
+
 /** Paper and type size of a printed card. */
 export interface PageSetup {
   readonly units: UnitSystem;
@@ -84,7 +92,7 @@ export interface PageSetup {
 export interface Cautions {
   readonly heading: string;
   readonly form: 'full' | 'compact';
-  /** One line per caution (cardWords.cautions.full or .compact). */
+  /** One line per caution (the voice's card.cautions.full or .compact). */
   readonly items: readonly string[];
   /** "Follow the maker’s instructions and local rules.", printed after the list. */
   readonly deferral: string;
@@ -206,6 +214,10 @@ export interface StationCardView {
   readonly kind: 'station';
   /** Document language tag of the card's page and PDF (words/catalogue.ts langTag). */
   readonly lang: string;
+  /** Language code of the card's words (the set's: CardSet.language). */
+  readonly language: string;
+  /** The page's links and print hint, in the card's language. */
+  readonly nav: PageNav;
   /** "<pot>--<coffee>--<stove>". */
   readonly id: string;
   readonly potId: string;
@@ -263,6 +275,10 @@ export interface InsertCardView {
   readonly kind: 'insert';
   /** Document language tag of the card's page and PDF (words/catalogue.ts langTag). */
   readonly lang: string;
+  /** Language code of the card's words (the set's: CardSet.language). */
+  readonly language: string;
+  /** The page's links and print hint, in the card's language. */
+  readonly nav: PageNav;
   /** The page slug: the coffee id (or "<coffee>--<set>", see paths.ts). */
   readonly id: string;
   readonly setId: string;
@@ -333,8 +349,11 @@ export function pageSetup(units: UnitSystem, paper: PaperSize): PageSetup {
 }
 
 /** The cautions every page carries: the compact list where space is short (A6). */
-export function cautions(form: 'full' | 'compact' = 'full'): Cautions {
-  const words = cardWords.cautions;
+export function cautions(
+  form: 'full' | 'compact' = 'full',
+  voice?: Voice | UnitSystem,
+): Cautions {
+  const words = asVoice(voice).words.card.cautions;
   return {
     heading: words.heading,
     form,
@@ -343,21 +362,22 @@ export function cautions(form: 'full' | 'compact' = 'full'): Cautions {
   };
 }
 
-function warnings(items: readonly string[]): Warnings | null {
+function warnings(items: readonly string[], voice: Voice): Warnings | null {
   const unique = [...new Set(items)];
-  return unique.length > 0 ? { heading: cardWords.warningsHeading, items: unique } : null;
+  return unique.length > 0 ? { heading: voice.words.card.warningsHeading, items: unique } : null;
 }
 
 async function footer(
   catalogue: Catalogue,
   paths: CardPaths,
   options: CardViewOptions,
+  voice: Voice,
 ): Promise<Footer> {
   const { business } = catalogue.site;
-  const words = cardWords.footer;
+  const words = voice.words.card.footer;
   return {
     printedBy: words.printedBy(business.name, business.contact),
-    built: words.built(options.builtOn, options.fingerprint),
+    built: words.built(voice.date(options.builtOn), options.fingerprint),
     builtOn: options.builtOn,
     fingerprint: options.fingerprint,
     qrSvg: paths.webUrl ? await qrSvg(paths.webUrl) : null,
@@ -394,57 +414,57 @@ async function recipe(
   plan: AcceptedPlan,
   e: Entries,
   catalogue: Catalogue,
-  units: UnitSystem,
+  voice: Voice,
 ): Promise<StationRecipe> {
-  const words = cardWords;
+  const words = voice.words.card;
   const site = catalogue.site;
-  const start = temperature(plan.startK, units);
+  const start = temperature(plan.startK, voice);
   // Heated whenever the start is above the room; the kettle preset only when one matches.
   const heated = plan.startK > plan.ambientK + 0.5;
   const preset = plan.kettlePresetK;
   const temperatureNotes = heated
     ? [
         preset !== null && site.kettlePresetsK.some((k) => sameK(k, preset))
-          ? words.water.kettlePreset(temperature(preset, units).text)
+          ? words.water.kettlePreset(temperature(preset, voice).text)
           : words.water.thermometer(start.text),
         words.water.heatedNote,
       ]
-    : [words.water.roomTemperatureNote(temperature(plan.ambientK, units).text)];
+    : [words.water.roomTemperatureNote(temperature(plan.ambientK, voice).text)];
   // Fill numbers are safety limits: rounded down, never up (generator/render/format.ts).
-  const fillHeight = lengthDown(plan.fillHeightM, units);
-  const belowValve = lengthDown(plan.belowValveM, units);
-  const fillMass = fillMassQuantity(plan.fillKg, units);
+  const fillHeight = lengthDown(plan.fillHeightM, voice);
+  const belowValve = lengthDown(plan.belowValveM, voice);
+  const fillMass = fillMassQuantity(plan.fillKg, voice);
   const drawing = crossSection({
     pot: e.pot.model,
     potName: e.pot.name,
     fillHeightM: plan.fillHeightM,
     belowValveM: plan.belowValveM,
-    units,
+    units: voice,
   });
 
-  const band = temperatureBand(plan.targetBandK, units);
+  const band = temperatureBand(plan.targetBandK, voice);
   const planShare = share(plan.extraction.inBandShare).text;
   const coldShare = share(plan.coldStart.inBandShare).text;
   const spec = cupChartSpec({
-    units,
+    units: voice,
     plan: plan.brew.cupCurve,
     cold: plan.coldBrew.cupCurve,
     bandK: plan.targetBandK,
   });
 
   const expectRows: LabelledValue[] = [
-    { label: words.expect.yield, value: waterVolume(plan.yieldM3, units).text },
+    { label: words.expect.yield, value: waterVolume(plan.yieldM3, voice).text },
     { label: words.expect.inBand(band), value: words.expect.inBandValue(planShare, coldShare) },
     {
       label: words.expect.peakPressure,
       value: e.pot.valveOpeningAssumed
         ? words.expect.peakPressureAssumedValue(
-            pressure(plan.peakGaugePa, units).text,
-            pressureRough(plan.valveOpeningGaugePa, units).text,
+            pressure(plan.peakGaugePa, voice).text,
+            pressureRough(plan.valveOpeningGaugePa, voice).text,
           )
         : words.expect.peakPressureValue(
-            pressure(plan.peakGaugePa, units).text,
-            pressure(plan.valveOpeningGaugePa, units).text,
+            pressure(plan.peakGaugePa, voice).text,
+            pressure(plan.valveOpeningGaugePa, voice).text,
           ),
     },
   ];
@@ -452,15 +472,15 @@ async function recipe(
     expectRows.push({
       label: words.expect.boiling,
       value: words.expect.boilingValue(
-        temperature(plan.boilingK, units).text,
-        altitude(plan.altitudeM, units).text,
+        temperature(plan.boilingK, voice).text,
+        altitude(plan.altitudeM, voice).text,
       ),
     });
   }
   const grindAssumed = e.coffee.permeabilityAssumed ? e.coffee.grind : null;
   const stoveAssumed = e.stove.efficiencyAssumed && !e.stove.levels[plan.levelIndex]?.fitted;
   const notes = [
-    ...(plan.bindingCause ? [bindingCauseText(plan, units)] : []),
+    ...(plan.bindingCause ? [bindingCauseText(plan, voice)] : []),
     ...(grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : []),
   ];
 
@@ -472,7 +492,7 @@ async function recipe(
       heated,
       temperatureNotes,
       fillLabel: words.water.fill,
-      fillVolume: fillVolume(plan.fillM3, units),
+      fillVolume: fillVolume(plan.fillM3, voice),
       fillMass,
       fillMassText: words.water.fillMass(fillMass.text),
       fillHeight,
@@ -484,7 +504,7 @@ async function recipe(
     coffee: {
       heading: words.coffee.heading,
       doseLabel: words.coffee.dose,
-      dose: dose(plan.doseKg, units),
+      dose: dose(plan.doseKg, voice),
       lines: [words.coffee.level, words.coffee.grind(e.coffee.grind), words.coffee.noTamp],
     },
     heat: {
@@ -515,9 +535,9 @@ async function recipe(
   };
 }
 
-function refusal(plan: RefusedPlan, units: UnitSystem): RefusalBlock {
-  const words = cardWords.refusal;
-  const text = refusalText(plan.refused, units);
+function refusal(plan: RefusedPlan, voice: Voice): RefusalBlock {
+  const words = voice.words.card.refusal;
+  const text = refusalText(plan.refused, voice);
   return {
     heading: words.heading,
     note: words.note,
@@ -535,27 +555,35 @@ export async function stationCardView(
   options: CardViewOptions,
 ): Promise<StationCardView> {
   const e = entriesOf(plan, catalogue);
-  const units = options.units ?? catalogue.site.units;
+  const voice = voiceFor(
+    options.language ?? catalogue.site.language,
+    options.units ?? catalogue.site.units,
+  );
   const paper = options.paper ?? catalogue.site.paper;
   const request = { potId: plan.potId, coffeeId: plan.coffeeId, stoveId: plan.stoveId };
   const paths = stationPaths(request, catalogue.site.baseUrl);
   return {
     kind: 'station',
-    lang: langTag(options.language ?? catalogue.site.language),
+    lang: voice.lang,
+    language: voice.language,
+    nav: pageNav(voice),
     id: paths.pageUrl.slice('cards/'.length, -1),
     ...request,
     title: e.coffee.name,
-    subtitle: cardWords.stationSubtitle(e.pot.name, e.stove.name),
+    subtitle: voice.words.card.stationSubtitle(e.pot.name, e.stove.name),
     potName: e.pot.name,
     coffeeName: e.coffee.name,
     stoveName: e.stove.name,
-    page: pageSetup(units, paper),
+    page: pageSetup(voice.units, paper),
     paths,
-    recipe: plan.refused === null ? await recipe(plan, e, catalogue, units) : null,
-    refusal: plan.refused === null ? null : refusal(plan, units),
-    warnings: warnings(plan.warnings.map((w) => warningText(w, units))),
-    cautions: cautions(pageSetup(units, paper).compact ? 'compact' : 'full'),
-    footer: await footer(catalogue, paths, options),
+    recipe: plan.refused === null ? await recipe(plan, e, catalogue, voice) : null,
+    refusal: plan.refused === null ? null : refusal(plan, voice),
+    warnings: warnings(
+      plan.warnings.map((w) => warningText(w, voice)),
+      voice,
+    ),
+    cautions: cautions(pageSetup(voice.units, paper).compact ? 'compact' : 'full', voice),
+    footer: await footer(catalogue, paths, options, voice),
   };
 }
 
@@ -563,12 +591,12 @@ function insertRow(
   row: InsertCardInput['rows'][number],
   potRowSpan: number,
   catalogue: Catalogue,
-  units: UnitSystem,
+  voice: Voice,
 ): InsertRow {
   const { plan } = row;
   const e = entriesOf(plan, catalogue);
   const kind = heatKindOf[e.stove.stoveKind];
-  const words = cardWords.insert;
+  const words = voice.words.card.insert;
   const base = {
     potId: row.potId,
     stoveId: row.stoveId,
@@ -586,7 +614,7 @@ function insertRow(
   if (plan.refused !== null) {
     return {
       ...base,
-      refused: { label: words.notSuitable, reason: cardWords.refusal.short[plan.refused.code] },
+      refused: { label: words.notSuitable, reason: voice.words.card.refusal.short[plan.refused.code] },
       fill: null,
       dose: null,
       start: null,
@@ -599,9 +627,9 @@ function insertRow(
   return {
     ...base,
     refused: null,
-    fill: fillVolume(plan.fillM3, units),
-    dose: dose(plan.doseKg, units),
-    start: isHeated(plan) ? temperature(plan.startK, units).text : words.roomTemperature,
+    fill: fillVolume(plan.fillM3, voice),
+    dose: dose(plan.doseKg, voice),
+    start: isHeated(plan) ? temperature(plan.startK, voice).text : words.roomTemperature,
     level: plan.levelLabel,
     setting: words.setting(plan.levelLabel, words.heatFeel[heatFeel(e.stove, plan.levelIndex)]),
     firstCoffee: timeRange(plan.firstCoffeeS.lowS, plan.firstCoffeeS.highS),
@@ -618,18 +646,19 @@ function isHeated(plan: AcceptedPlan): boolean {
 function insertWarnings(
   rows: readonly InsertRow[],
   inputs: InsertCardInput['rows'],
-  units: UnitSystem,
+  voice: Voice,
 ): Warnings | null {
   const byText = new Map<string, string[]>();
   inputs.forEach((input, i) => {
-    for (const text of input.plan.warnings.map((w) => warningText(w, units))) {
+    for (const text of input.plan.warnings.map((w) => warningText(w, voice))) {
       const names = byText.get(text) ?? [];
-      names.push(cardWords.insert.rowName(rows[i]!.cupsLabel, rows[i]!.heatLabel));
+      names.push(voice.words.card.insert.rowName(rows[i]!.cupsLabel, rows[i]!.heatLabel));
       byText.set(text, names);
     }
   });
   return warnings(
-    [...byText.entries()].map(([text, names]) => cardWords.insert.rowWarning(names, text)),
+    [...byText.entries()].map(([text, names]) => voice.words.card.insert.rowWarning(names, text)),
+    voice,
   );
 }
 
@@ -640,19 +669,22 @@ export async function insertCardView(
   options: CardViewOptions,
 ): Promise<InsertCardView> {
   const coffee = entry(catalogue.coffees, input.coffeeId, 'coffee');
-  const units = options.units ?? catalogue.site.units;
+  const voice = voiceFor(
+    options.language ?? catalogue.site.language,
+    options.units ?? catalogue.site.units,
+  );
   const paper = options.paper ?? catalogue.site.paper;
   const paths = insertPaths(input.slug ?? input.coffeeId, catalogue.site.baseUrl);
-  const words = cardWords.insert;
+  const words = voice.words.card.insert;
   // The table prints the rows with a recipe; a pot's span counts only those.
   const shown = input.rows.filter((row) => row.plan.refused === null);
   const rows = input.rows.map((row) => {
-    if (row.plan.refused !== null) return insertRow(row, 0, catalogue, units);
+    if (row.plan.refused !== null) return insertRow(row, 0, catalogue, voice);
     const at = shown.indexOf(row);
     const first = at === 0 || shown[at - 1]!.potId !== row.potId;
     let span = 0;
     if (first) while (shown[at + span]?.potId === row.potId) span++;
-    return insertRow(row, span, catalogue, units);
+    return insertRow(row, span, catalogue, voice);
   });
   const table = rows.filter((row) => row.refused === null);
   const steps =
@@ -668,16 +700,19 @@ export async function insertCardView(
             offHeat: row.offHeat!.text,
           })),
           words.columns,
+          voice,
         );
   const refusedRows = rows.filter((row) => row.refused !== null);
   return {
     kind: 'insert',
-    lang: langTag(options.language ?? catalogue.site.language),
+    lang: voice.lang,
+    language: voice.language,
+    nav: pageNav(voice),
     id: input.slug ?? input.coffeeId,
     setId: input.setId,
     coffeeId: input.coffeeId,
     title: coffee.name,
-    subtitle: cardWords.insertSubtitle(coffee.roast, coffee.grind),
+    subtitle: voice.words.card.insertSubtitle(coffee.roast, coffee.grind),
     notes: coffee.notes ?? null,
     heading: words.heading,
     intro: words.intro,
@@ -695,10 +730,10 @@ export async function insertCardView(
             ),
           },
     webLine: paths.webUrl ? words.web(paths.webUrl) : null,
-    page: pageSetup(units, paper),
+    page: pageSetup(voice.units, paper),
     paths,
-    warnings: insertWarnings(rows, input.rows, units),
-    cautions: cautions(pageSetup(units, paper).compact ? 'compact' : 'full'),
-    footer: await footer(catalogue, paths, options),
+    warnings: insertWarnings(rows, input.rows, voice),
+    cautions: cautions(pageSetup(voice.units, paper).compact ? 'compact' : 'full', voice),
+    footer: await footer(catalogue, paths, options, voice),
   };
 }

@@ -13,11 +13,11 @@
 import * as vega from 'vega';
 import type { TopLevelSpec } from 'vega-lite';
 import type { UnitSystem } from '../content/types.ts';
-import { cardWords } from '../words/card.ts';
 import { chartRuntime } from './chart-runtime.ts';
 import { FONT_FAMILY } from './fonts.ts';
 import { chartUnits, temperatureBand } from './format.ts';
 import { useFontMetricsInVega } from './text-measure.ts';
+import { asVoice, type Voice } from './voice.ts';
 
 /** One point of a cup curve, SI: cumulative cup volume and the temperature it was brewed at. */
 export interface CupPoint {
@@ -26,7 +26,8 @@ export interface CupPoint {
 }
 
 export interface ChartInput {
-  readonly units: UnitSystem;
+  /** The output's voice (its units, words and decimal mark), or a unit system (English). */
+  readonly units: UnitSystem | Voice;
   /** This card's brew, ascending cupM3 (AcceptedPlan.brew.cupCurve). */
   readonly plan: readonly CupPoint[];
   /** The cold start (AcceptedPlan.coldBrew.cupCurve). */
@@ -58,8 +59,9 @@ const r2 = (v: number): number => Math.round(v * 100) / 100;
 
 /** The vega-lite spec of the cup chart (valid against vega-lite's JSON schema). */
 export function cupChartSpec(input: ChartInput): TopLevelSpec {
-  const u = chartUnits(input.units);
-  const words = cardWords.chart;
+  const voice = asVoice(input.units);
+  const u = chartUnits(voice.units);
+  const words = voice.words.card.chart;
   const rows = (series: string, curve: readonly CupPoint[]) =>
     thin(curve).map((p) => ({
       series,
@@ -74,7 +76,7 @@ export function cupChartSpec(input: ChartInput): TopLevelSpec {
   const yMin = Math.floor(Math.min(...temps) / step) * step;
   const yMax = Math.ceil(Math.max(...temps) / step) * step;
   const xMax = Math.max(0, ...values.map((v) => v.cup));
-  const bandLabel = words.band(temperatureBand(input.bandK, input.units));
+  const bandLabel = words.band(temperatureBand(input.bandK, voice));
 
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',

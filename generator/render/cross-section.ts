@@ -12,11 +12,11 @@
 import type { PotModel } from '../brew/types.ts';
 import { potGeometry } from '../brew/geometry.ts';
 import type { UnitSystem } from '../content/types.ts';
-import { cardWords } from '../words/card.ts';
 import { FONT_FAMILY } from './fonts.ts';
 import { lengthDown } from './format.ts';
 import { el, escapeXml, n } from './svg.ts';
 import { measureText } from './text-measure.ts';
+import { asVoice, type Voice } from './voice.ts';
 
 export interface CrossSectionInput {
   readonly pot: PotModel;
@@ -28,7 +28,8 @@ export interface CrossSectionInput {
    * same rounding down as the card's text, so the two never differ. Default: from the pot.
    */
   readonly belowValveM?: number;
-  readonly units: UnitSystem;
+  /** The output's voice, or a unit system (English). */
+  readonly units: UnitSystem | Voice;
 }
 
 /** Where things were drawn, SVG px (y grows downward), for tests and for PDF placement. */
@@ -97,7 +98,8 @@ function spread(labels: Label[], minY: number): void {
 export function crossSection(input: CrossSectionInput): CrossSection {
   const { pot } = input;
   const g = potGeometry(pot);
-  const words = cardWords.crossSection;
+  const voice = asVoice(input.units);
+  const words = voice.words.card.crossSection;
   const upperAreaM2 = g.baseAreaM2;
   const upperHeightM = Math.max(
     pot.upperCapacityM3 / upperAreaM2,
@@ -124,7 +126,7 @@ export function crossSection(input: CrossSectionInput): CrossSection {
   const basketW = Math.min(potWidth - 2, pot.basketDiameterM * s);
   const gap = lengthDown(
     input.belowValveM ?? pot.valveHeightM - input.fillHeightM,
-    input.units,
+    voice,
   ).text;
 
   const labelX = potRightX + VALVE_STUB_PX + LEADER_PX;

@@ -62,44 +62,77 @@ export interface TimeRangeText {
 
 const NBSP = '\u00a0';
 
-export function quantity(value: number, digits: number, unit: string): Quantity {
-  const v = fixed(value, digits);
+/** A unit system and the decimal mark to write numbers with (render/voice.ts Voice is one). */
+export interface NumberStyle {
+  readonly units: UnitSystem;
+  /** "." (English) or "," (Spanish). */
+  readonly decimal: string;
+}
+
+/** A bare unit system (decimal point) or a number style: every function below takes either. */
+export type Units = UnitSystem | NumberStyle;
+
+function systemOf(units: Units): UnitSystem {
+  return typeof units === 'string' ? units : units.units;
+}
+
+/** The decimal mark of a style; a bare unit system or none writes a point. */
+function markOf(units: Units | undefined): string {
+  return units === undefined || typeof units === 'string' ? '.' : units.decimal;
+}
+
+/** A number and its unit, written with the style's decimal mark (default "."). */
+export function quantity(
+  value: number,
+  digits: number,
+  unit: string,
+  style?: Units,
+): Quantity {
+  const v = fixed(value, digits, style);
   return { value: v, unit, text: `${v}${NBSP}${unit}` };
 }
 
-/** Fixed decimals without "-0". */
-export function fixed(value: number, digits: number): string {
-  return round(value, digits).toFixed(digits);
+/** Fixed decimals without "-0", with the style's decimal mark (default "."). */
+export function fixed(value: number, digits: number, style?: Units): string {
+  const text = round(value, digits).toFixed(digits);
+  const mark = markOf(style);
+  return mark === '.' ? text : text.replace('.', mark);
 }
 
-export function temperature(k: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toFahrenheit(k), 0, '°F') : quantity(toCelsius(k), 0, '°C');
+export function temperature(k: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toFahrenheit(k), 0, '°F', units)
+    : quantity(toCelsius(k), 0, '°C', units);
 }
 
 /** A temperature difference (K) as °C or °F degrees. */
-export function temperatureDelta(dk: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toFahrenheitDelta(dk), 0, '°F') : quantity(dk, 0, '°C');
+export function temperatureDelta(dk: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toFahrenheitDelta(dk), 0, '°F', units)
+    : quantity(dk, 0, '°C', units);
 }
 
 /** A temperature band "90–96 °C". */
-export function temperatureBand(band: readonly [number, number], units: UnitSystem): string {
+export function temperatureBand(band: readonly [number, number], units: Units): string {
   const lo = temperature(band[0], units);
   const hi = temperature(band[1], units);
   return `${lo.value}–${hi.value}${NBSP}${hi.unit}`;
 }
 
-export function waterVolume(m3: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toFlOz(m3), 1, 'fl oz') : quantity(toMl(m3), 0, 'mL');
+export function waterVolume(m3: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toFlOz(m3), 1, 'fl oz', units)
+    : quantity(toMl(m3), 0, 'mL', units);
 }
 
 /**
  * The fill, rounded DOWN at the shown precision: the planned fill is the most water that
  * stays below the valve, so a card must never print a larger number.
  */
-export function fillVolume(m3: number, units: UnitSystem): Quantity {
-  return units === 'us'
-    ? quantity(floorShown(toFlOz(m3) * 10) / 10, 1, 'fl oz')
-    : quantity(floorShown(toMl(m3)), 0, 'mL');
+export function fillVolume(m3: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(floorShown(toFlOz(m3) * 10) / 10, 1, 'fl oz', units)
+    : quantity(floorShown(toMl(m3)), 0, 'mL', units);
 }
 
 /**
@@ -111,52 +144,67 @@ function floorShown(x: number): number {
 }
 
 /** The fill's mass, rounded down like `fillVolume`. */
-export function fillMass(kg: number, units: UnitSystem): Quantity {
-  return units === 'us'
-    ? quantity(Math.floor(toOunces(kg) * 10) / 10, 1, 'oz')
-    : quantity(Math.floor(toGrams(kg)), 0, 'g');
+export function fillMass(kg: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(Math.floor(toOunces(kg) * 10) / 10, 1, 'oz', units)
+    : quantity(Math.floor(toGrams(kg)), 0, 'g', units);
 }
 
 /** A height that must not be overstated (the fill line, its distance below the valve): rounded down. */
-export function lengthDown(m: number, units: UnitSystem): Quantity {
-  return units === 'us'
-    ? quantity(Math.floor(toInches(m) * 100) / 100, 2, 'in')
-    : quantity(Math.floor(toMm(m)), 0, 'mm');
+export function lengthDown(m: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(Math.floor(toInches(m) * 100) / 100, 2, 'in', units)
+    : quantity(Math.floor(toMm(m)), 0, 'mm', units);
 }
 
-export function waterMass(kg: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toOunces(kg), 1, 'oz') : quantity(toGrams(kg), 0, 'g');
+export function waterMass(kg: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toOunces(kg), 1, 'oz', units)
+    : quantity(toGrams(kg), 0, 'g', units);
 }
 
-export function dose(kg: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toOunces(kg), 2, 'oz') : quantity(toGrams(kg), 1, 'g');
+export function dose(kg: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toOunces(kg), 2, 'oz', units)
+    : quantity(toGrams(kg), 1, 'g', units);
 }
 
-export function length(m: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toInches(m), 2, 'in') : quantity(toMm(m), 0, 'mm');
+export function length(m: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toInches(m), 2, 'in', units)
+    : quantity(toMm(m), 0, 'mm', units);
 }
 
-export function pressure(pa: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toPsi(pa), 1, 'psi') : quantity(toBar(pa), 2, 'bar');
+export function pressure(pa: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toPsi(pa), 1, 'psi', units)
+    : quantity(toBar(pa), 2, 'bar', units);
 }
 
 /**
  * A pressure nobody measured (the valve's assumed opening pressure): two significant
  * figures, so it never reads as more precise than it is ("1.5 bar", "22 psi").
  */
-export function pressureRough(pa: number, units: UnitSystem): Quantity {
-  const value = units === 'us' ? toPsi(pa) : toBar(pa);
+export function pressureRough(pa: number, units: Units): Quantity {
+  const value = systemOf(units) === 'us' ? toPsi(pa) : toBar(pa);
   const digits = Math.max(0, 1 - Math.floor(Math.log10(Math.abs(value) || 1)));
-  return quantity(Number(value.toPrecision(2)), digits, units === 'us' ? 'psi' : 'bar');
+  return quantity(
+    Number(value.toPrecision(2)),
+    digits,
+    systemOf(units) === 'us' ? 'psi' : 'bar',
+    units,
+  );
 }
 
-export function altitude(m: number, units: UnitSystem): Quantity {
-  return units === 'us' ? quantity(toFeet(m), 0, 'ft') : quantity(m, 0, 'm');
+export function altitude(m: number, units: Units): Quantity {
+  return systemOf(units) === 'us'
+    ? quantity(toFeet(m), 0, 'ft', units)
+    : quantity(m, 0, 'm', units);
 }
 
 /** A share 0–1 as "78 %". */
-export function share(value: number): Quantity {
-  return quantity(value * 100, 0, '%');
+export function share(value: number, units?: Units): Quantity {
+  return quantity(value * 100, 0, '%', units);
 }
 
 /** Seconds as m:ss ("2:05"); negative input is a bug upstream and prints as 0:00. */
@@ -175,13 +223,13 @@ export function timeRange(lowS: number, highS: number): TimeRangeText {
 }
 
 /** Axis units of the cup chart in this unit system. */
-export function chartUnits(units: UnitSystem): {
+export function chartUnits(units: Units): {
   volume: (m3: number) => number;
   temperature: (k: number) => number;
   volumeUnit: string;
   temperatureUnit: string;
 } {
-  return units === 'us'
+  return systemOf(units) === 'us'
     ? { volume: toFlOz, temperature: toFahrenheit, volumeUnit: 'fl oz', temperatureUnit: '°F' }
     : { volume: toMl, temperature: toCelsius, volumeUnit: 'mL', temperatureUnit: '°C' };
 }

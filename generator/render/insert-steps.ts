@@ -7,7 +7,8 @@
  * is computed here beyond that choice, so the step and the table can never disagree.
  */
 import type { StoveEntry } from '../content/types.ts';
-import { cardWords, type HeatFeel } from '../words/card.ts';
+import type { HeatFeel } from '../words/card.ts';
+import { asVoice, type Voice } from './voice.ts';
 import { INSERT_STEP_ORDER, pictogramSvg, type InsertStepCode } from './pictograms.ts';
 
 export interface InsertStep {
@@ -62,8 +63,12 @@ function common(texts: readonly string[]): string | null {
 }
 
 /** The seven steps of an insert whose table shows `rows` (its rows with a recipe). */
-export function insertSteps(rows: readonly StepRowTexts[], columns: StepColumns): InsertStep[] {
-  const words = cardWords.insert.steps;
+export function insertSteps(
+  rows: readonly StepRowTexts[],
+  columns: StepColumns,
+  voice?: Voice,
+): InsertStep[] {
+  const words = asVoice(voice).words.card.insert.steps;
   const allRoom = rows.length > 0 && rows.every((r) => r.room);
   const heated = rows.filter((r) => !r.room);
   const kettle = allRoom

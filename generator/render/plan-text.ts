@@ -6,8 +6,7 @@
  */
 import type { UnitSystem } from '../content/types.ts';
 import type { AcceptedPlan, CheckedQuantity, PlanWarning, Refusal } from '../planning/types.ts';
-import { cardWords } from '../words/card.ts';
-import { planWords, type RefusalText } from '../words/plan.ts';
+import type { RefusalText } from '../words/plan.ts';
 import {
   altitude,
   fillVolume,
@@ -18,9 +17,14 @@ import {
   temperature,
   temperatureBand,
   waterVolume,
+  type NumberStyle,
 } from './format.ts';
+import { asVoice, type Voice } from './voice.ts';
 
-export function refusalText(refusal: Refusal, units: UnitSystem): RefusalText {
+export function refusalText(refusal: Refusal, voice: Voice | UnitSystem): RefusalText {
+  const v = asVoice(voice);
+  const planWords = v.words.plan;
+  const units = v;
   switch (refusal.code) {
     case 'induction-needs-magnetic-base':
       return planWords.inductionNeedsMagneticBase(refusal.facts.potName);
@@ -44,12 +48,15 @@ export function refusalText(refusal: Refusal, units: UnitSystem): RefusalText {
       return planWords.noDelivery();
     case 'no-plan-fits': {
       const f = refusal.facts;
-      return planWords.noPlanFits(seconds(f.lowS), seconds(f.highS), f.tooFast);
+      return planWords.noPlanFits(seconds(f.lowS, v), seconds(f.highS, v), f.tooFast);
     }
   }
 }
 
-export function warningText(warning: PlanWarning, units: UnitSystem): string {
+export function warningText(warning: PlanWarning, voice: Voice | UnitSystem): string {
+  const v = asVoice(voice);
+  const planWords = v.words.plan;
+  const units = v;
   switch (warning.code) {
     case 'outside-checked-range': {
       const f = warning.facts;
@@ -57,21 +64,21 @@ export function warningText(warning: PlanWarning, units: UnitSystem): string {
       return planWords.outsideCheckedRange(f.quantity, say(f.value), say(f.low), say(f.high));
     }
     case 'cool-cup':
-      return planWords.coolCup(share(warning.facts.inBandShare).text);
+      return planWords.coolCup(share(warning.facts.inBandShare, v).text);
     case 'small-fill':
       return planWords.smallFill();
   }
 }
 
-const seconds = (s: number): string => quantity(s, 0, 's').text;
+const seconds = (s: number, style: NumberStyle): string => quantity(s, 0, 's', style).text;
 
 /** A checked input in the output's units, to three significant digits where it has no unit choice. */
-function checkedValue(what: CheckedQuantity, value: number, units: UnitSystem): string {
+function checkedValue(what: CheckedQuantity, value: number, units: NumberStyle): string {
   switch (what) {
     case 'permeabilityM2':
-      return `${value.toPrecision(2)}\u00a0m²`;
+      return `${value.toPrecision(2).replace('.', units.decimal)}\u00a0m²`;
     case 'heatToPotW':
-      return quantity(value, 0, 'W').text;
+      return quantity(value, 0, 'W', units).text;
     case 'altitudeM':
       return altitude(value, units).text;
     case 'sealedVolumeM3':
@@ -82,22 +89,23 @@ function checkedValue(what: CheckedQuantity, value: number, units: UnitSystem): 
 }
 
 /** The binding cause's facts, formatted once here and said by words/card.ts. */
-export function bindingCauseText(plan: AcceptedPlan, units: UnitSystem): string {
+export function bindingCauseText(plan: AcceptedPlan, voice: Voice | UnitSystem): string {
+  const units = asVoice(voice);
   const cause = plan.bindingCause!;
   const f = cause.facts;
   const opt = <T>(v: T | undefined, fmt: (v: T) => object): object =>
     v === undefined ? {} : fmt(v);
-  return cardWords.expect.bindingCause(cause.code, {
-    share: share(f.share).text,
+  return units.words.card.expect.bindingCause(cause.code, {
+    share: share(f.share, units).text,
     band: temperatureBand([f.bandLowK, f.bandHighK], units),
     mean: temperature(f.meanK, units).text,
     delivery: `${Math.round(f.deliveryS)} s`,
     window: `${Math.round(f.windowLowS)}–${Math.round(f.windowHighS)} s`,
     cups: String(f.cups ?? ''),
     ...opt(f.gentlestW, (w) => ({ gentlest: `${Math.round(w)} W into the pot` })),
-    ...opt(f.shareAtHalfHeat, (v) => ({ shareAtHalfHeat: share(v).text })),
-    ...opt(f.shareAtHalfPermeability, (v) => ({ shareAtHalfPermeability: share(v).text })),
-    ...opt(f.shareIfAllowed, (v) => ({ shareIfAllowed: share(v).text })),
+    ...opt(f.shareAtHalfHeat, (v) => ({ shareAtHalfHeat: share(v, units).text })),
+    ...opt(f.shareAtHalfPermeability, (v) => ({ shareAtHalfPermeability: share(v, units).text })),
+    ...opt(f.shareIfAllowed, (v) => ({ shareIfAllowed: share(v, units).text })),
     ...opt(f.highCornerGaugePa, (v) => ({ highCorner: pressure(v, units).text })),
     ...opt(f.limitGaugePa, (v) => ({ limit: pressure(v, units).text })),
   });

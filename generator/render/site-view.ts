@@ -5,13 +5,15 @@
  */
 import type { Catalogue } from '../content/types.ts';
 import type { AcceptedPlan } from '../planning/types.ts';
-import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
-import { langTag } from '../words/catalogue.ts';
+import type { Messages } from '../words/catalogue.ts';
 import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
-import { pageSetup } from './card-view.ts';
+import { cautions as cautionsView, pageNav, pageSetup, type PageNav } from './card-view.ts';
 import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts';
 import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './format.ts';
 import { setPaths, type CardPaths } from './paths.ts';
+import { voiceFor, type Voice } from './voice.ts';
+
+export type { PageNav } from './card-view.ts';
 
 export interface SiteInfo {
   readonly title: string;
@@ -50,8 +52,13 @@ export interface SetView {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
-  /** Document language tag of the set's page and PDF. */
+  /** Language code of the set (its cards, page and PDF) and its document language tag. */
+  readonly language: string;
   readonly lang: string;
+  /** The set page's links, table headings and cautions, in the set's language. */
+  readonly nav: PageNav;
+  readonly columns: IndexView['columns'];
+  readonly cautions: Cautions;
   /** "Station cards" or "Bag inserts". */
   readonly layoutLabel: string;
   readonly paths: CardPaths;
@@ -98,21 +105,21 @@ export interface MoveRow {
 export interface MovesView {
   readonly heading: string;
   readonly intro: string;
-  readonly columns: typeof troubleshootingWords.movesColumns;
+  readonly columns: Messages['troubleshooting']['movesColumns'];
   readonly rows: readonly MoveRow[];
 }
 
 export interface TroubleshootingView {
   readonly title: string;
   readonly intro: string;
-  readonly columns: typeof troubleshootingWords.columns;
-  readonly rows: typeof troubleshootingWords.rows;
+  readonly columns: Messages['troubleshooting']['columns'];
+  readonly rows: Messages['troubleshooting']['rows'];
   readonly moves: MovesView | null;
 }
 
 export interface SiteData {
   readonly site: SiteInfo;
-  readonly nav: typeof cardWords.nav;
+  readonly nav: PageNav;
   readonly index: IndexView;
   readonly sets: readonly SetView[];
   readonly stationCards: readonly StationCardView[];
@@ -121,6 +128,14 @@ export interface SiteData {
   readonly troubleshooting: TroubleshootingView;
   /** The full cautions and the deferral, on the index, set, method and troubleshooting pages. */
   readonly cautions: Cautions;
+  /**
+   * A training binder's front matter in each language a set speaks (SetView.language):
+   * the method and troubleshooting pages of that language. The site's own pages are
+   * `method` and `troubleshooting` above, in the site's language.
+   */
+  readonly frontMatter?: Readonly<
+    Record<string, { readonly method: MethodView; readonly troubleshooting: TroubleshootingView }>
+  >;
 }
 
 /** What the build knows about a set: its id, title, layout and card slugs in order. */
@@ -143,16 +158,22 @@ const FACE_CSS: Record<FontFace, { weight: string; style: string }> = {
 /** Where the build copies the fonts, site-relative. */
 export const FONTS_DIR = 'assets/fonts';
 
-/** The links at the top of every page. */
-export function siteNav(): SiteData['nav'] {
-  return cardWords.nav;
+/** The site's voice: its own pages speak the site's language in its units. */
+export function siteVoice(catalogue: Catalogue): Voice {
+  return voiceFor(catalogue.site.language, catalogue.site.units);
+}
+
+/** The links at the top of a page and its print hint, in the voice's language (default English). */
+export function siteNav(voice: Voice = voiceFor()): PageNav {
+  return pageNav(voice);
 }
 
 export function siteInfo(catalogue: Catalogue, builtOn: string): SiteInfo {
   const site = catalogue.site;
+  const voice = siteVoice(catalogue);
   return {
-    title: cardWords.siteTitle,
-    lang: langTag(site.language),
+    title: voice.words.card.siteTitle,
+    lang: voice.lang,
     businessName: site.business.name,
     contact: site.business.contact,
     page: pageSetup(site.units, site.paper),
@@ -166,7 +187,7 @@ export function siteInfo(catalogue: Catalogue, builtOn: string): SiteInfo {
   };
 }
 
-function stationLink(card: StationCardView): CardLink {
+function stationLink(card: StationCardView, voice: Voice): CardLink {
   return {
     kind: 'station',
     title: card.title,
@@ -175,7 +196,7 @@ function stationLink(card: StationCardView): CardLink {
     stoveName: card.stoveName,
     pageUrl: card.paths.pageUrl,
     pdfFile: card.paths.pdfFile,
-    status: card.refusal ? cardWords.index.refused : '',
+    status: card.refusal ? voice.words.card.index.refused : '',
     refused: card.refusal !== null,
   };
 }
@@ -200,28 +221,50 @@ export function setViews(
   inserts: ReadonlyMap<string, InsertCardView>,
   baseUrl?: string,
 ): SetView[] {
-  return outlines.map((set) => ({
-    id: set.id,
-    title: set.title,
-    layout: set.layout,
-    lang: langTag(set.language),
-    layoutLabel: set.layout === 'station' ? cardWords.index.station : cardWords.index.insert,
-    paths: setPaths(set.id, baseUrl),
-    cards: set.cardSlugs.map((slug) => {
-      if (set.layout === 'station') {
-        const card = stations.get(slug);
-        if (!card) throw new Error(`site view: no station card "${slug}"`);
-        return stationLink(card);
-      }
-      const card = inserts.get(slug);
-      if (!card) throw new Error(`site view: no insert card "${slug}"`);
-      return insertLink(card);
-    }),
-  }));
+  return outlines.map((set) => {
+    const voice = voiceFor(set.language);
+    const words = voice.words.card.index;
+    return {
+      id: set.id,
+      title: set.title,
+      layout: set.layout,
+      language: set.language,
+      lang: voice.lang,
+      nav: siteNav(voice),
+      columns: indexColumns(voice),
+      cautions: cautionsView('full', voice),
+      layoutLabel: set.layout === 'station' ? words.station : words.insert,
+      paths: setPaths(set.id, baseUrl),
+      cards: set.cardSlugs.map((slug) => {
+        if (set.layout === 'station') {
+          const card = stations.get(slug);
+          if (!card) throw new Error(`site view: no station card "${slug}"`);
+          return stationLink(card, voice);
+        }
+        const card = inserts.get(slug);
+        if (!card) throw new Error(`site view: no insert card "${slug}"`);
+        return insertLink(card);
+      }),
+    };
+  });
+}
+
+function indexColumns(voice: Voice): IndexView['columns'] {
+  const words = voice.words.card.index;
+  return {
+    pot: words.pot,
+    coffee: words.coffee,
+    stove: words.stove,
+    page: words.page,
+    pdf: words.pdf,
+    open: words.open,
+    download: words.download,
+  };
 }
 
 export function indexView(catalogue: Catalogue): IndexView {
-  const words = cardWords.index;
+  const voice = siteVoice(catalogue);
+  const words = voice.words.card.index;
   return {
     title: words.title,
     intro: words.intro(catalogue.site.business.name),
@@ -231,15 +274,7 @@ export function indexView(catalogue: Catalogue): IndexView {
       { label: words.method, url: 'method/' },
       { label: words.troubleshooting, url: 'troubleshooting/' },
     ],
-    columns: {
-      pot: words.pot,
-      coffee: words.coffee,
-      stove: words.stove,
-      page: words.page,
-      pdf: words.pdf,
-      open: words.open,
-      download: words.download,
-    },
+    columns: indexColumns(voice),
   };
 }
 
@@ -249,8 +284,10 @@ const aboutClock = (s: number): string => clock(Math.round(s / TIME_STEP_S) * TI
 export function methodView(
   example: { plan: AcceptedPlan; potName: string; coffeeName: string; stoveName: string } | null,
   catalogue: Catalogue,
+  voice: Voice = siteVoice(catalogue),
 ): MethodView {
-  const units = catalogue.site.units;
+  const methodWords = voice.words.method;
+  const units = voice;
   let text: string | null = null;
   if (example && example.plan.coldStart.firstCoffeeS !== null) {
     const p = example.plan;
@@ -260,9 +297,9 @@ export function methodView(
       stove: example.stoveName,
       start: temperature(p.startK, units).text,
       planFirst: aboutClock(p.firstCoffeeS.midS),
-      planShare: share(p.extraction.inBandShare).text,
+      planShare: share(p.extraction.inBandShare, units).text,
       coldFirst: aboutClock(p.coldStart.firstCoffeeS!),
-      coldShare: share(p.coldStart.inBandShare).text,
+      coldShare: share(p.coldStart.inBandShare, units).text,
       band: temperatureBand(p.targetBandK, units),
     });
   }
@@ -274,7 +311,11 @@ export function methodView(
   };
 }
 
-export function troubleshootingView(moves: MovesView | null): TroubleshootingView {
+export function troubleshootingView(
+  moves: MovesView | null,
+  voice: Voice = voiceFor(),
+): TroubleshootingView {
+  const troubleshootingWords = voice.words.troubleshooting;
   return {
     title: troubleshootingWords.title,
     intro: troubleshootingWords.intro,

@@ -3,7 +3,7 @@
  * document language tag for an output.
  *
  * Structure: `en.ts` is the reference catalogue. `Messages` is its shape with every string
- * widened to `string` (functions keep their parameters), so a second catalogue typed
+ * widened to `string` (functions keep their parameters and declared results), so a second catalogue typed
  * `Messages` fails tsc on a missing or misspelt key or a function with other parameters.
  * tests/words/catalogues.test.ts holds every catalogue complete at run time too (no empty
  * strings, the same keys and list lengths as English) and the schema's `language` enum
@@ -19,7 +19,7 @@ import { es } from './es.ts';
 type Widen<T> = T extends string
   ? string
   : T extends (...args: infer A) => infer R
-    ? (...args: A) => Widen<R>
+    ? (...args: A) => R
     : T extends readonly (infer U)[]
       ? readonly Widen<U>[]
       : T extends object
