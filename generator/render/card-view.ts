@@ -113,6 +113,8 @@ export interface Footer {
   /** QR code of the card's web page (SVG), when the site has a base_url. */
   readonly qrSvg: string | null;
   readonly qrCaption: string | null;
+  /** Text alternative of the QR code, when there is one. */
+  readonly qrAlt: string | null;
   /** The web page the QR code opens, when the site has a base_url. */
   readonly webUrl: string | null;
 }
@@ -141,6 +143,8 @@ export interface WaterStep {
   /** "The fill line is 27 mm above the floor of the base, 5 mm below …". */
   readonly fillLineText: string;
   readonly crossSectionSvg: string;
+  /** Text alternative of the cross-section: its title and the fill-line sentence. */
+  readonly crossSectionAlt: string;
   readonly crossSection: CrossSectionLayout;
 }
 
@@ -382,6 +386,7 @@ async function footer(
     fingerprint: options.fingerprint,
     qrSvg: paths.webUrl ? await qrSvg(paths.webUrl) : null,
     qrCaption: paths.webUrl ? words.qr : null,
+    qrAlt: paths.webUrl ? voice.words.pdf.qrAlt(paths.webUrl) : null,
     webUrl: paths.webUrl,
   };
 }
@@ -499,6 +504,10 @@ async function recipe(
       belowValve,
       fillLineText: words.water.fillLine(fillHeight.text, belowValve.text),
       crossSectionSvg: drawing.svg,
+      crossSectionAlt: voice.words.pdf.crossSectionAlt(
+        voice.words.card.crossSection.title(e.pot.name),
+        words.water.fillLine(fillHeight.text, belowValve.text),
+      ),
       crossSection: drawing.layout,
     },
     coffee: {

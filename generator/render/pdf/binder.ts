@@ -20,8 +20,7 @@ import {
   type StationCardView,
 } from '../card-view.ts';
 import type { MethodView, SetView, TroubleshootingView } from '../site-view.ts';
-import { cardWords } from '../../words/card.ts';
-import { pdfWords } from '../../words/pdf.ts';
+import { voiceFor } from '../voice.ts';
 import { cardTitle, pageBox, type CardView } from './card.ts';
 import { openPdf, pageSizePt, pdfDate } from './document.ts';
 import type { Block, PageBox } from './layout.ts';
@@ -40,13 +39,13 @@ export interface FrontMatter {
  * A whole CardView is one; `setCard` picks these out for a worker thread.
  */
 export type SetCard = Pick<CardView, 'kind' | 'title' | 'subtitle' | 'page'> &
-  Partial<Pick<StationCardView, 'refusal'>>;
+  Partial<Pick<StationCardView, 'refusal' | 'language'>>;
 
 export function setCard(view: CardView): SetCard {
-  const { kind, title, subtitle, page } = view;
+  const { kind, title, subtitle, page, language } = view;
   return view.kind === 'station'
-    ? { kind, title, subtitle, page, refusal: view.refusal }
-    : { kind, title, subtitle, page };
+    ? { kind, title, subtitle, page, language, refusal: view.refusal }
+    : { kind, title, subtitle, page, language };
 }
 
 export interface SetPdfInput {
@@ -278,7 +277,7 @@ function contentsItems(
   cards: readonly ContentsEntry[],
   st: TextPageStyle,
 ): FlowItem[] {
-  const words = pdfWords.contents;
+  const words = voiceFor(set.language).words.pdf.contents;
   const toc = (entries: readonly ContentsEntry[]): FlowItem[] => [
     { block: (pen) => (pen.open('TOC'), 0), keepWithNext: true },
     ...entries.map((e) => ({ block: contentsLine(e.text, e.page, st) })),
@@ -294,11 +293,12 @@ function contentsItems(
   ];
 }
 
-function contentsText(card: SetCard): string {
-  const words = pdfWords.contents;
+function contentsText(card: SetCard, language: string): string {
+  const voice = voiceFor(language);
+  const words = voice.words.pdf.contents;
   if (card.kind === 'insert') return card.title;
   const line = words.station(card.title, card.subtitle);
-  return card.refusal ? words.refused(line, cardWords.index.refused) : line;
+  return card.refusal ? words.refused(line, voice.words.card.index.refused) : line;
 }
 
 /** A set's cards in one PDF; with front matter, the training binder. */
@@ -306,7 +306,9 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   const [widthPt, heightPt] = pageSizePt(input.page.widthMm, input.page.heightMm);
   const textPage: PageBox = { widthPt, heightPt };
   const st = textPageStyle(input.page.paper);
-  const foot = cautionsFoot(cautionsView('compact'), st);
+  const voice = voiceFor(input.set.language);
+  const pdfWords = voice.words.pdf;
+  const foot = cautionsFoot(cautionsView('compact', voice), st);
   const open = openPdf({
     title: pdfWords.setTitle(input.set.title),
     author: input.author,
@@ -344,7 +346,10 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
         page += part.pages;
         return entry;
       });
-      const cards = input.cards.map((card, i) => ({ text: contentsText(card), page: page + i }));
+      const cards = input.cards.map((card, i) => ({
+        text: contentsText(card, input.set.language),
+        page: page + i,
+      }));
       return contentsItems(input.set, front, cards, st);
     };
     contentsPages = flowPages(measure, frame, contentsFor(2), () => {});

@@ -4,7 +4,10 @@
  * strings as they are; nothing is reworded or recomputed here.
  */
 import type { Cautions, Footer, Warnings } from '../card-view.ts';
-import { pdfWords } from '../../words/pdf.ts';
+import { voiceFor } from '../voice.ts';
+
+/** Step numbers, list markers and bullets: the same figures in every catalogue there is. */
+const pdfWords = voiceFor().words.pdf;
 import { balancedSplit, type Block } from './layout.ts';
 import type { Pen } from './pen.ts';
 import { INK, PAPER, WARNING_FILL, type CardStyle, type TextFont } from './style.ts';
@@ -228,7 +231,7 @@ export function footerBlock(footer: Footer, st: CardStyle): Block {
           qx,
           top + boxH - st.qrSize,
           st.qrSize,
-          pdfWords.qrAlt(footer.webUrl ?? ''),
+          footer.qrAlt ?? pdfWords.qrAlt(footer.webUrl ?? ''),
         );
       }
       return st.ruleLight + st.padding + boxH;

@@ -8,7 +8,7 @@
  * (binder.ts, merge.ts) instead of drawing them again.
  */
 import type { InsertCardView, StationCardView } from '../card-view.ts';
-import { pdfWords } from '../../words/pdf.ts';
+import { voiceFor } from '../voice.ts';
 import { openPdf, pageSizePt, pdfDate, type OpenPdf } from './document.ts';
 import { insertFrame } from './insert-card.ts';
 import { fitCard, placeCard, type CardFit, type CardFrame, type PageBox } from './layout.ts';
@@ -24,7 +24,15 @@ export class PdfLayoutError extends Error {
     readonly cardId: string,
     readonly fit: CardFit,
   ) {
-    super(pdfWords.doesNotFit(cardId, fit.style.paper, fit.usedHeightPt, fit.availableHeightPt));
+    // For the operator (the build log): English, as every build message.
+    super(
+      voiceFor().words.pdf.doesNotFit(
+        cardId,
+        fit.style.paper,
+        fit.usedHeightPt,
+        fit.availableHeightPt,
+      ),
+    );
     this.name = 'PdfLayoutError';
   }
 }
@@ -38,7 +46,11 @@ export function cardFrame(view: CardView, style: CardStyle): CardFrame {
   return view.kind === 'station' ? stationFrame(view, style) : insertFrame(view, style);
 }
 
-export function cardTitle(view: Pick<CardView, 'kind' | 'title' | 'subtitle'>): string {
+/** A card's document title, in its own language (English for a view without one). */
+export function cardTitle(
+  view: Pick<CardView, 'kind' | 'title' | 'subtitle'> & { readonly language?: string },
+): string {
+  const pdfWords = voiceFor(view.language).words.pdf;
   return view.kind === 'station'
     ? pdfWords.stationTitle(view.title, view.subtitle)
     : pdfWords.insertTitle(view.title);

@@ -14,7 +14,10 @@
  */
 import { createHash } from 'node:crypto';
 import PDFDocument from 'pdfkit';
-import { pdfWords } from '../../words/pdf.ts';
+import { voiceFor } from '../voice.ts';
+
+/** The creator tool's name, the same in every language. */
+const pdfWords = voiceFor().words.pdf;
 import { escapeXml } from '../svg.ts';
 import { registerPdfFonts, startingFont } from './fonts.ts';
 

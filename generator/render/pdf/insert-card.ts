@@ -12,7 +12,10 @@
  * (and the layout tries a smaller font step).
  */
 import type { InsertCardView, InsertRow, InsertStep } from '../card-view.ts';
-import { pdfWords } from '../../words/pdf.ts';
+import { voiceFor } from '../voice.ts';
+
+/** Step numbers: the same figures in every catalogue there is. */
+const pdfWords = voiceFor().words.pdf;
 import { cautionsBlock, footerBlock, headerBlock, stepHeading, warningsBlock } from './blocks.ts';
 import { columns, stack, type Block, type CardFrame } from './layout.ts';
 import type { Pen } from './pen.ts';

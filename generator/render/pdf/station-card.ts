@@ -16,8 +16,6 @@ import type {
   TimingsStep,
   WaterStep,
 } from '../card-view.ts';
-import { cardWords } from '../../words/card.ts';
-import { pdfWords } from '../../words/pdf.ts';
 import {
   cautionsBlock,
   footerBlock,
@@ -91,7 +89,7 @@ function bigValue(
 }
 
 function waterBlock(water: WaterStep, potName: string, st: CardStyle): Block {
-  const alt = pdfWords.crossSectionAlt(cardWords.crossSection.title(potName), water.fillLineText);
+  const alt = water.crossSectionAlt;
   const drawing = figureBlock(water.crossSectionSvg, alt, st);
   const text: Block = (pen, x, y, w) => {
     let h = labelLine(pen, water.temperatureLabel, x, y, w, st);
