@@ -19,7 +19,7 @@ import path from 'node:path';
 import { loadCatalogue } from '../content/index.ts';
 import type { Catalogue } from '../content/types.ts';
 import type { SiteData } from '../render/site-view.ts';
-import { insertPaths, stationPaths } from '../render/paths.ts';
+import { insertPaths, pathLanguage, stationPaths } from '../render/paths.ts';
 import { checkQrDensity } from '../render/qr-density.ts';
 import { buildDate } from './build-date.ts';
 import { expandCards, type CardJobs } from './cards.ts';
@@ -148,7 +148,14 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
       const baseUrl = catalogue.site.baseUrl;
       if (baseUrl)
         checkQrDensity([
-          ...jobs.stations.map((job) => stationPaths(job.request, baseUrl).webUrl!),
+          ...jobs.stations.map(
+            (job) =>
+              stationPaths(
+                job.request,
+                baseUrl,
+                pathLanguage(job.language, catalogue.site.language),
+              ).webUrl!,
+          ),
           ...jobs.inserts.map((job) => insertPaths(job.slug, baseUrl).webUrl!),
         ]);
       return { catalogue, jobs };

@@ -10,10 +10,26 @@
  */
 import type { CardRequest, Catalogue } from '../content/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
-import { insertPaths, insertSlug, setPaths, stationPaths, stationSlug } from '../render/paths.ts';
+import {
+  insertPaths,
+  insertSlug,
+  pathLanguage,
+  setPaths,
+  stationKey,
+  stationPaths,
+  stationSlug,
+} from '../render/paths.ts';
 
 export interface StationCardJob {
+  /** The plan's slug (stationSlug): one plan per pot × coffee × stove, whatever the language. */
   readonly slug: string;
+  /**
+   * The card's key (stationKey): the slug, after the language part when the card speaks
+   * another language than the site's. Sets list their cards by it.
+   */
+  readonly key: string;
+  /** Language code of the card (its sets'). */
+  readonly language: string;
   readonly request: CardRequest;
   /** Sets listing this card as a station card, in site order. */
   readonly setIds: readonly string[];
@@ -21,6 +37,8 @@ export interface StationCardJob {
 
 export interface InsertCardJob {
   readonly setId: string;
+  /** Language code of the insert (its set's). */
+  readonly language: string;
   readonly coffeeId: string;
   /** Page slug: the coffee id, or "<coffee>--<set>" when an earlier insert set took it. */
   readonly slug: string;
@@ -39,7 +57,7 @@ export interface SetJob {
 
 export interface CardJobs {
   readonly sets: readonly SetJob[];
-  /** One per distinct request, in first-appearance order. */
+  /** One per distinct request and language, in first-appearance order. */
   readonly stations: readonly StationCardJob[];
   readonly inserts: readonly InsertCardJob[];
 }
@@ -47,19 +65,25 @@ export interface CardJobs {
 const HEAT_ORDER: readonly HeatKind[] = ['gas', 'electric', 'induction'];
 
 export function expandCards(catalogue: Catalogue): CardJobs {
-  const stations = new Map<string, { request: CardRequest; setIds: string[] }>();
-  const addStation = (request: CardRequest, setId: string | null): string => {
-    const slug = stationSlug(request);
-    let job = stations.get(slug);
+  const stations = new Map<
+    string,
+    { slug: string; language: string; request: CardRequest; setIds: string[] }
+  >();
+  const siteLanguage = catalogue.site.language;
+  const addStation = (request: CardRequest, setId: string | null, language: string): string => {
+    const key = stationKey(request, pathLanguage(language, siteLanguage));
+    let job = stations.get(key);
     if (!job) {
       job = {
+        slug: stationSlug(request),
+        language,
         request: { potId: request.potId, coffeeId: request.coffeeId, stoveId: request.stoveId },
         setIds: [],
       };
-      stations.set(slug, job);
+      stations.set(key, job);
     }
     if (setId !== null && !job.setIds.includes(setId)) job.setIds.push(setId);
-    return slug;
+    return key;
   };
 
   const sets: SetJob[] = [];
@@ -67,7 +91,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
   const insertSlugs = new Set<string>();
   for (const set of catalogue.site.sets) {
     if (set.layout === 'station') {
-      const slugs = set.cards.map((request) => addStation(request, set.id));
+      const slugs = set.cards.map((request) => addStation(request, set.id, set.language));
       sets.push({
         id: set.id,
         title: set.title,
@@ -80,13 +104,13 @@ export function expandCards(catalogue: Catalogue): CardJobs {
     const slugs: string[] = [];
     for (const coffeeId of set.coffeeIds) {
       const rows = insertRows(catalogue, set.cards, coffeeId);
-      for (const row of rows) addStation(row, null);
+      for (const row of rows) addStation(row, null, set.language);
       const slug = insertSlug(
         coffeeId,
         insertSlugs.has(insertSlug(coffeeId, null)) ? set.id : null,
       );
       insertSlugs.add(slug);
-      inserts.push({ setId: set.id, coffeeId, slug, rows });
+      inserts.push({ setId: set.id, language: set.language, coffeeId, slug, rows });
       slugs.push(slug);
     }
     sets.push({
@@ -99,7 +123,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
   }
   const jobs = {
     sets,
-    stations: [...stations.entries()].map(([slug, job]) => ({ slug, ...job })),
+    stations: [...stations.entries()].map(([key, job]) => ({ key, ...job })),
     inserts,
   };
   checkPageNames(jobs);
@@ -127,9 +151,9 @@ export function checkPageNames(jobs: CardJobs): void {
     if (first !== undefined && first !== owner) throw new PageCollisionError(page, first, owner);
     owners.set(key, owner);
   };
-  for (const { request } of jobs.stations) {
+  for (const { request, key } of jobs.stations) {
     const owner = `pot ${request.potId} × coffee ${request.coffeeId} × stove ${request.stoveId}`;
-    const paths = stationPaths(request);
+    const paths = stationPaths(request, undefined, key.includes('/') ? key.split('/')[0] : null);
     claim(paths.pageFile, owner);
     claim(paths.pdfFile, owner);
   }

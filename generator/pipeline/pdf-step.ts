@@ -19,8 +19,8 @@
 import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cardPdf, type CardView } from '../render/pdf/card.ts';
-import { setCard, setPdf, type FrontMatter, type SetPdfInput } from '../render/pdf/binder.ts';
-import { isTrainingSet, setCards } from '../render/pdf/site-pdfs.ts';
+import { setCard, setPdf, type SetPdfInput } from '../render/pdf/binder.ts';
+import { frontMatterOf, isTrainingSet, setCards } from '../render/pdf/site-pdfs.ts';
 import type { BuildContext, ViewText } from './build-site.ts';
 import { renderCodeVersion } from './code-version.ts';
 import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
@@ -67,13 +67,12 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started };
     },
   }));
-  const frontMatter: FrontMatter = { method: data.method, troubleshooting: data.troubleshooting };
   const setJobs: PdfJob[] = data.sets.map((set) => {
     const members = setCards(set, data);
     const input: Omit<SetPdfInput, 'cardPdfs'> = {
       set,
       cards: members.map(setCard),
-      frontMatter: isTrainingSet(set) ? frontMatter : null,
+      frontMatter: isTrainingSet(set) ? frontMatterOf(set, data) : null,
       page: data.site.page,
       author,
       builtOn: data.site.builtOn,

@@ -133,11 +133,13 @@ export async function planAll(
   const codeVersion = await planCodeVersion();
   const stats = options.stats ?? emptyStats();
   const pool = options.pool ?? null;
-  const total = jobs.stations.length;
+  // One plan per pot × coffee × stove: the same card in two languages shares it.
+  const unique = [...new Map(jobs.stations.map((job) => [job.slug, job])).values()];
+  const total = unique.length;
   let done = 0;
   onProgress({ phase: 'plan', done, total });
   // Many in flight: lookups are quick, and the pool queues the misses.
-  const cards = await mapConcurrent(jobs.stations, IO_LIMIT * 8, async (job) => {
+  const cards = await mapConcurrent(unique, IO_LIMIT * 8, async (job) => {
     const request = planRequestOf(catalogue, job.request);
     const key = planKey({ ...request, site: catalogue.site, codeVersion });
     let card: PlanText;

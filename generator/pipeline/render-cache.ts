@@ -44,6 +44,8 @@ export interface StationViewKeyInput {
   readonly renderVersion: string;
   readonly builtOn: string;
   readonly site: ViewSite;
+  /** Language code of the card (its set's): the same plan makes one view per language. */
+  readonly language: string;
 }
 
 export function stationViewKey(input: StationViewKeyInput): string {
@@ -55,6 +57,7 @@ export function stationViewKey(input: StationViewKeyInput): string {
       code: input.renderVersion,
       builtOn: input.builtOn,
       site: input.site,
+      language: input.language,
     }),
   );
 }

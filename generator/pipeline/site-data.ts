@@ -26,11 +26,12 @@ import {
   setViews,
   siteInfo,
   siteNav,
+  siteVoice,
   troubleshootingView,
-  type MovesView,
   type SiteData,
 } from '../render/site-view.ts';
 import { movesView } from '../render/moves.ts';
+import { voiceFor } from '../render/voice.ts';
 import { sensitivityMoves } from '../planning/sensitivity.ts';
 import type { CardJobs, InsertCardJob, StationCardJob } from './cards.ts';
 import { renderCodeVersion } from './code-version.ts';
@@ -123,13 +124,18 @@ async function stationView(
     renderVersion,
     builtOn,
     site: viewSite(catalogue.site),
+    language: job.language,
   });
   const hit = cache ? await cache.view<StationCardView>(key) : null;
   if (hit) {
     stats.views.reused += 1;
     return hit;
   }
-  const viewOptions: CardViewOptions = { builtOn, fingerprint: fingerprint([planned.key]) };
+  const viewOptions: CardViewOptions = {
+    builtOn,
+    fingerprint: fingerprint([planned.key]),
+    language: job.language,
+  };
   const own = cardCatalogue(catalogue, [job.request]);
   let text: string;
   if (options.pool) {
@@ -170,7 +176,7 @@ async function insertView(
   const key = sha256(
     stableJson({
       kind: 'insert-view',
-      job: { setId: job.setId, coffeeId: job.coffeeId, slug: job.slug },
+      job: { setId: job.setId, coffeeId: job.coffeeId, slug: job.slug, language: job.language },
       coffee: coffee ? { ...coffee, source: null } : null,
       rows: rows.map((row) => row.planned.key),
       code: renderVersion,
@@ -193,7 +199,11 @@ async function insertView(
       })),
     },
     cardCatalogue(catalogue, job.rows, [job.coffeeId]),
-    { builtOn, fingerprint: fingerprint(rows.map((row) => row.planned.key)) },
+    {
+      builtOn,
+      fingerprint: fingerprint(rows.map((row) => row.planned.key)),
+      language: job.language,
+    },
   );
   const text = toTaggedJson(view);
   await cache?.views.put(key, text);
@@ -230,7 +240,7 @@ export async function renderSite(
   const stations = new Map<string, StationCardView>();
   jobs.stations.forEach((job, i) => {
     const { view, hash, text } = stationViews[i]!;
-    stations.set(job.slug, view);
+    stations.set(job.key, view);
     viewTexts.set(view.paths.pdfFile, { text, hash });
   });
   const inserts = new Map<string, InsertCardView>();
@@ -241,30 +251,48 @@ export async function renderSite(
   });
 
   const example = methodExample(catalogue, jobs, plans, stations);
+  const moveRows = example ? sensitivityMoves(example.plan, catalogue) : null;
+  const languages = [...new Set([catalogue.site.language, ...jobs.sets.map((s) => s.language)])];
+  const frontMatter = Object.fromEntries(
+    languages.map((language) => {
+      const voice = voiceFor(language, catalogue.site.units);
+      return [
+        language,
+        {
+          method: methodView(example, catalogue, voice),
+          troubleshooting: troubleshootingView(
+            example && moveRows
+              ? movesView(moveRows, exampleNames(example.plan, catalogue), voice)
+              : null,
+            voice,
+          ),
+        },
+      ];
+    }),
+  );
+  const site = frontMatter[catalogue.site.language]!;
   const data: SiteData = {
     site: siteInfo(catalogue, builtOn),
-    nav: siteNav(),
+    nav: siteNav(siteVoice(catalogue)),
     index: indexView(catalogue),
     sets: setViews(jobs.sets, stations, inserts, catalogue.site.baseUrl),
     stationCards: [...stations.values()],
     insertCards: [...inserts.values()],
-    method: methodView(example, catalogue),
-    troubleshooting: troubleshootingView(example ? exampleMoves(example.plan, catalogue) : null),
-    cautions: cautions('full'),
+    method: site.method,
+    troubleshooting: site.troubleshooting,
+    cautions: cautions('full', siteVoice(catalogue)),
+    frontMatter,
   };
   return { data, viewTexts };
 }
 
-/** The troubleshooting table for the method page's example card, in the site's units. */
-function exampleMoves(plan: AcceptedPlan, catalogue: Catalogue): MovesView | null {
-  const rows = sensitivityMoves(plan, catalogue);
-  if (rows === null) return null;
-  const names = {
+/** The names the troubleshooting table of the method page's example card says. */
+function exampleNames(plan: AcceptedPlan, catalogue: Catalogue) {
+  return {
     pot: catalogue.pots.get(plan.potId)!.name,
     coffee: catalogue.coffees.get(plan.coffeeId)!.name,
     stove: catalogue.stoves.get(plan.stoveId)!.name,
   };
-  return movesView(rows, names, catalogue.site.units);
 }
 
 /** The data of every page: card views, set lists, method and troubleshooting. */
@@ -291,11 +319,12 @@ function methodExample(
 ) {
   const ordered = [
     ...jobs.sets.filter((s) => s.layout === 'station').flatMap((s) => s.cardSlugs),
-    ...jobs.stations.map((s) => s.slug),
+    ...jobs.stations.map((s) => s.key),
   ];
-  for (const slug of ordered) {
-    if (stations.get(slug)?.recipe === null) continue;
-    const plan = plans.get(slug)?.plan;
+  const slugOf = new Map(jobs.stations.map((s) => [s.key, s.slug]));
+  for (const key of ordered) {
+    if (stations.get(key)?.recipe === null) continue;
+    const plan = plans.get(slugOf.get(key) ?? key)?.plan;
     if (plan && plan.refused === null && plan.coldStart.firstCoffeeS !== null) {
       return {
         plan: plan as AcceptedPlan,

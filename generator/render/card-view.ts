@@ -41,7 +41,7 @@ import {
   type TimeRangeText,
 } from './format.ts';
 import { heatFeel, insertSteps, type InsertStep } from './insert-steps.ts';
-import { insertPaths, stationPaths, type CardPaths } from './paths.ts';
+import { insertPaths, pathLanguage, stationPaths, type CardPaths } from './paths.ts';
 import { bindingCauseText, refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
 import { asVoice, voiceFor, type Voice } from './voice.ts';
@@ -570,7 +570,11 @@ export async function stationCardView(
   );
   const paper = options.paper ?? catalogue.site.paper;
   const request = { potId: plan.potId, coffeeId: plan.coffeeId, stoveId: plan.stoveId };
-  const paths = stationPaths(request, catalogue.site.baseUrl);
+  const paths = stationPaths(
+    request,
+    catalogue.site.baseUrl,
+    pathLanguage(voice.language, catalogue.site.language),
+  );
   return {
     kind: 'station',
     lang: voice.lang,
@@ -618,6 +622,7 @@ function insertRow(
     stationPaths: stationPaths(
       { potId: row.potId, coffeeId: plan.coffeeId, stoveId: row.stoveId },
       catalogue.site.baseUrl,
+      pathLanguage(voice.language, catalogue.site.language),
     ),
   };
   if (plan.refused !== null) {

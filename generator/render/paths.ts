@@ -5,6 +5,9 @@
  *   index.html                                  every card, by set
  *   sets/<set>/index.html                       one set
  *   cards/<pot>--<coffee>--<stove>/index.html   a station card   (+ cards/<…>.pdf)
+ *   cards/<lang>/<pot>--<coffee>--<stove>/…      the same card in a set of another language than
+ *                                               the site's (a slug always holds `--`, a
+ *                                               language code never: no collision)
  *     (ids holding `--` are escaped so no two cards share a name: pagePart)
  *   inserts/<coffee>/index.html                 an insert card   (+ inserts/<coffee>.pdf)
  *   method/index.html, troubleshooting/index.html
@@ -58,8 +61,26 @@ function paths(folder: string, baseUrl: string | undefined): CardPaths {
   };
 }
 
-export function stationPaths(request: CardRequest, baseUrl?: string): CardPaths {
-  return paths(`cards/${stationSlug(request)}`, baseUrl);
+/**
+ * A station card's page and PDF. `language` is the card's language when it is not the
+ * site's (pathLanguage); the site's own language keeps the plain address.
+ */
+export function stationPaths(
+  request: CardRequest,
+  baseUrl?: string,
+  language?: string | null,
+): CardPaths {
+  return paths(`cards/${language ? `${language}/` : ''}${stationSlug(request)}`, baseUrl);
+}
+
+/** The language part of a card's address: none for the site's language, else the code. */
+export function pathLanguage(language: string, siteLanguage: string): string | null {
+  return language === siteLanguage ? null : language;
+}
+
+/** A station card's key among the build's cards: its slug, after its language part if any. */
+export function stationKey(request: CardRequest, language?: string | null): string {
+  return language ? `${language}/${stationSlug(request)}` : stationSlug(request);
 }
 
 /** `slug` is the coffee id, or `<coffee>--<set>` when a coffee is in more than one insert set. */

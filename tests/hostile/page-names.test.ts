@@ -134,12 +134,24 @@ describe('pageName', () => {
     const jobs = {
       sets: [],
       stations: [
-        { slug: 'a', request: { potId: 'a', coffeeId: 'b', stoveId: 'c' }, setIds: [] },
-        { slug: 'b', request: { potId: 'a', coffeeId: 'b', stoveId: 'c' }, setIds: [] },
+        {
+          slug: 'a',
+          key: 'a',
+          language: 'en',
+          request: { potId: 'a', coffeeId: 'b', stoveId: 'c' },
+          setIds: [],
+        },
+        {
+          slug: 'b',
+          key: 'b',
+          language: 'en',
+          request: { potId: 'a', coffeeId: 'b', stoveId: 'c' },
+          setIds: [],
+        },
       ],
       inserts: [
-        { setId: 's1', coffeeId: 'k', slug: 'k', rows: [] },
-        { setId: 's2', coffeeId: 'k', slug: 'k', rows: [] },
+        { setId: 's1', language: 'en', coffeeId: 'k', slug: 'k', rows: [] },
+        { setId: 's2', language: 'en', coffeeId: 'k', slug: 'k', rows: [] },
       ],
     };
     let caught: unknown;

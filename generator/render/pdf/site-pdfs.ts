@@ -43,6 +43,16 @@ export function isTrainingSet(set: Pick<SetView, 'id'>): boolean {
   return /training/i.test(set.id);
 }
 
+/** A training binder's method and troubleshooting pages, in the set's language. */
+export function frontMatterOf(set: Pick<SetView, 'language'>, data: SiteData): FrontMatter {
+  return (
+    data.frontMatter?.[set.language] ?? {
+      method: data.method,
+      troubleshooting: data.troubleshooting,
+    }
+  );
+}
+
 /** The set's cards as views, in the set's order. */
 export function setCards(set: SetView, data: SiteData): CardView[] {
   const byPdf = new Map<string, CardView>();
@@ -89,7 +99,6 @@ export async function writeSitePdfs(
     });
     onProgress({ phase: 'steps', done: files.length, total });
   }
-  const frontMatter: FrontMatter = { method: data.method, troubleshooting: data.troubleshooting };
   for (const set of data.sets) {
     const t = performance.now();
     const members = setCards(set, data);
@@ -97,7 +106,7 @@ export async function writeSitePdfs(
       set,
       cards: members,
       cardPdfs: members.map((card) => cardPdfs.get(card.paths.pdfFile)!),
-      frontMatter: isTrainingSet(set) ? frontMatter : null,
+      frontMatter: isTrainingSet(set) ? frontMatterOf(set, data) : null,
       page: data.site.page,
       author,
       builtOn: data.site.builtOn,
