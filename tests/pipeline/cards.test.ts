@@ -14,7 +14,11 @@ describe('expandCards(demo)', () => {
   it('plans each distinct pot × coffee × stove once, station cards and insert rows alike', () => {
     const jobs = expandCards(catalogue);
     const slugs = jobs.stations.map((s) => s.slug);
-    expect(new Set(slugs).size).toBe(slugs.length);
+    // One card per request and language (its key); a request's slug once per language.
+    const keys = jobs.stations.map((s) => s.key);
+    expect(new Set(keys).size).toBe(keys.length);
+    const perLanguage = jobs.stations.map((s) => `${s.language}/${s.slug}`);
+    expect(new Set(perLanguage).size).toBe(perLanguage.length);
     const requested = new Set(
       catalogue.site.sets
         .filter((s) => s.layout === 'station')
@@ -32,7 +36,7 @@ describe('expandCards(demo)', () => {
     const shared = jobs.stations.find((s) => s.setIds.length > 1);
     expect(shared).toBeDefined();
     for (const setId of shared!.setIds) {
-      expect(jobs.sets.find((s) => s.id === setId)!.cardSlugs).toContain(shared!.slug);
+      expect(jobs.sets.find((s) => s.id === setId)!.cardSlugs).toContain(shared!.key);
     }
   });
 

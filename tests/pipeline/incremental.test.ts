@@ -75,8 +75,15 @@ describe('a rebuild after editing one coffee', () => {
   it('plans and renders that coffee’s station cards only', () => {
     const mine = rebuilt.data.stationCards.filter((c) => c.coffeeId === COFFEE).length;
     expect(mine).toBeGreaterThan(0);
-    expect(first.stats.plans.made).toBe(first.stationCards);
-    expect(rebuilt.stats.plans).toMatchObject({ made: mine, reused: rebuilt.stationCards - mine });
+    // One plan per pot × coffee × stove; one view per card and language.
+    const slug = (c: { potId: string; coffeeId: string; stoveId: string }) =>
+      `${c.potId}|${c.coffeeId}|${c.stoveId}`;
+    const plans = new Set(rebuilt.data.stationCards.map(slug)).size;
+    const myPlans = new Set(
+      rebuilt.data.stationCards.filter((c) => c.coffeeId === COFFEE).map(slug),
+    ).size;
+    expect(first.stats.plans.made).toBe(plans);
+    expect(rebuilt.stats.plans).toMatchObject({ made: myPlans, reused: plans - myPlans });
     expect(rebuilt.stats.views).toMatchObject({ made: mine, reused: rebuilt.stationCards - mine });
   });
 
