@@ -23,6 +23,15 @@ const grindNames: Record<GrindClass, string> = {
   coarse: 'gruesa',
 };
 
+/** Roast degrees (the coffee schema's `roast` enum) after "tueste". */
+const roastNames: Record<string, string> = {
+  light: 'claro',
+  'medium-light': 'medio-claro',
+  medium: 'medio',
+  'medium-dark': 'medio-oscuro',
+  dark: 'oscuro',
+};
+
 const coarser: Record<GrindClass, GrindClass> = {
   fine: 'medium-fine',
   'medium-fine': 'medium',
@@ -50,7 +59,7 @@ const card: Messages['card'] = {
   stationSubtitle: (potName: string, stoveName: string): string =>
     `en ${potName} · sobre ${stoveName}`,
   insertSubtitle: (roast: string, grind: GrindClass): string =>
-    `tueste ${roast} · molienda ${grindNames[grind]}`,
+    `tueste ${roastNames[roast] ?? roast} · molienda ${grindNames[grind]}`,
 
   water: {
     heading: 'Agua',

@@ -55,7 +55,10 @@ const example = {
 const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'format.date': [['2026-12-03']],
   'card.stationSubtitle': [['Pot A', 'Stove B']],
-  'card.insertSubtitle': GRINDS.map((g) => ['dark', g]),
+  'card.insertSubtitle': [
+    ...GRINDS.map((g) => ['dark', g]),
+    ...['light', 'medium-light', 'medium', 'medium-dark'].map((r) => [r, 'medium']),
+  ],
   'card.water.kettlePreset': [['80 °C']],
   'card.water.thermometer': [['86 °C']],
   'card.water.roomTemperatureNote': [['20 °C']],
