@@ -77,6 +77,11 @@ export function cupChartSpec(input: ChartInput): TopLevelSpec {
   const yMax = Math.ceil(Math.max(...temps) / step) * step;
   const xMax = Math.max(0, ...values.map((v) => v.cup));
   const bandLabel = words.band(temperatureBand(input.bandK, voice));
+  // Tick labels in the voice's decimal mark (vega writes a point; no thousands separator).
+  const decimalAxis =
+    voice.decimal === '.'
+      ? {}
+      : { labelExpr: `replace(format(datum.value, '~g'), '.', '${voice.decimal}')` };
 
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -131,14 +136,14 @@ export function cupChartSpec(input: ChartInput): TopLevelSpec {
             type: 'quantitative',
             title: words.xTitle(u.volumeUnit),
             scale: { domain: [0, xMax], nice: true },
-            axis: { tickCount: 6, grid: false },
+            axis: { tickCount: 6, grid: false, ...decimalAxis },
           },
           y: {
             field: 'temp',
             type: 'quantitative',
             title: words.yTitle(u.temperatureUnit),
             scale: { domain: [yMin, yMax], nice: false, zero: false },
-            axis: { tickCount: 5, grid: true },
+            axis: { tickCount: 5, grid: true, ...decimalAxis },
           },
           color: {
             field: 'series',
