@@ -99,7 +99,7 @@ const card: Messages['card'] = {
       'Al principio el café sube en un chorro oscuro y regular.',
       'Hacia el final se aclara y sale más deprisa.',
       'Un gorgoteo o un silbido indica que el depósito está casi vacío: el borboteo está cerca.',
-      'Retire entonces la cafetera del fuego, o a la hora indicada si llega antes, y enfríe el depósito bajo el grifo de agua fría para cortar la extracción.',
+      'Retire entonces la cafetera del fuego, o al tiempo indicado si llega antes, y enfríe el depósito bajo el grifo de agua fría para cortar la extracción.',
     ],
   },
   chart: {
@@ -252,7 +252,7 @@ const card: Messages['card'] = {
       heat: (setting: string | null, column: string): string =>
         `Póngala al fuego en ${setting === null ? `la posición de la columna «${column}»` : `la posición ${setting}`}, con una llama que no sobresalga del depósito (en placa: una zona no mayor que el depósito).`,
       time: (offHeat: string | null, column: string): string =>
-        `Cuente desde que la pone al fuego. Retírela a ${offHeat === null ? `la hora de la columna «${column}»` : `los ${offHeat}`}, o antes si empieza a gorgotear.`,
+        `Cuente desde que la pone al fuego. Retírela ${offHeat === null ? `en el tiempo de la columna «${column}»` : `a los ${offHeat}`}, o antes si empieza a gorgotear.`,
       cool: 'Enfríe el depósito bajo el grifo de agua fría, sujetándola solo por el asa, y sirva.',
     },
     unsuitableHeading: 'No adecuada',
@@ -322,7 +322,7 @@ const method: Messages['method'] = {
       heading: 'El final de la extracción',
       paragraphs: [
         'Cuando el agua del depósito baja hasta el extremo inferior del tubo del embudo, el gas se abre paso: la cafetera gorgotea y borbotea. La última agua que sube es la más caliente, y detrás viene el vapor.',
-        'Retirar antes la cafetera del fuego y enfriar el depósito bajo el grifo de agua fría corta la extracción antes de ese final áspero. La hora de retirada de cada ficha se elige para la mayor parte de la taza en el objetivo.',
+        'Retirar antes la cafetera del fuego y enfriar el depósito bajo el grifo de agua fría corta la extracción antes de ese final áspero. El momento de retirarla de cada ficha se elige para la mayor parte de la taza en el objetivo.',
       ],
     },
     {
@@ -372,7 +372,7 @@ const troubleshooting: Messages['troubleshooting'] = {
       cause:
         'Demasiada parte de la taza se extrajo por encima del objetivo: la cafetera siguió al fuego hasta el borboteo, cuando pasan el agua más caliente y el vapor.',
       change:
-        'Retírela del fuego a la hora de la ficha o al primer gorgoteo, y enfríe el depósito enseguida bajo el grifo de agua fría.',
+        'Retírela del fuego en el tiempo de la ficha o al primer gorgoteo, y enfríe el depósito enseguida bajo el grifo de agua fría.',
     },
     {
       symptom: 'Sabe flojo, aguado o ácido',
