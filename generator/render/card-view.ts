@@ -384,7 +384,7 @@ async function footer(
     built: words.built(voice.date(options.builtOn), options.fingerprint),
     builtOn: options.builtOn,
     fingerprint: options.fingerprint,
-    qrSvg: paths.webUrl ? await qrSvg(paths.webUrl) : null,
+    qrSvg: paths.webUrl ? await qrSvg(paths.webUrl, words.qrLabel) : null,
     qrCaption: paths.webUrl ? words.qr : null,
     qrAlt: paths.webUrl ? voice.words.pdf.qrAlt(paths.webUrl) : null,
     webUrl: paths.webUrl,

@@ -90,6 +90,9 @@ export function cupChartSpec(input: ChartInput): TopLevelSpec {
     background: '#ffffff',
     padding: 4,
     config: {
+      // No vega-made ARIA text ("Y-axis titled … for a linear scale", English whatever the
+      // card's language): the figure's own text alternative (chart.alt) names the chart.
+      aria: false,
       font: FONT_FAMILY,
       view: { stroke: null },
       axis: {

@@ -5,7 +5,9 @@
  */
 import QRCode from 'qrcode';
 
-export async function qrSvg(url: string): Promise<string> {
+/** `label` is the code's accessible name, in the card's language (the voice's card.footer.qrLabel). */
+export async function qrSvg(url: string, label = 'QR code'): Promise<string> {
   const svg = await QRCode.toString(url, { type: 'svg', margin: 0, errorCorrectionLevel: 'M' });
-  return svg.replace('<svg ', '<svg class="qr" role="img" aria-label="QR code" ').trim();
+  const name = label.replace(/&/g, '&amp;').replace(/"/g, '&quot;').replace(/</g, '&lt;');
+  return svg.replace('<svg ', `<svg class="qr" role="img" aria-label="${name}" `).trim();
 }

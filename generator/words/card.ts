@@ -197,6 +197,8 @@ export const cardWords = {
     printedBy: (business: string, contact: string): string => `From ${business} · ${contact}`,
     built: (date: string, fingerprint: string): string => `computed ${date} · card ${fingerprint}`,
     qr: 'On the web:',
+    /** Accessible name of the QR code drawing. */
+    qrLabel: 'QR code',
   },
   crossSection: {
     title: (potName: string): string => `Cross-section of the ${potName}`,

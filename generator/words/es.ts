@@ -198,6 +198,7 @@ const card: Messages['card'] = {
     built: (date: string, fingerprint: string): string =>
       `calculada el ${date} · ficha ${fingerprint}`,
     qr: 'En la web:',
+    qrLabel: 'Código QR',
   },
   crossSection: {
     title: (potName: string): string => `Corte de ${potName}`,
