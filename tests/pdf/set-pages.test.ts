@@ -184,7 +184,9 @@ describe('setPdf(set, cardPdfs) read by pdfjs', () => {
       expect(read.info.Title).toBe(pdfWords.setTitle(set.title));
       const text = pdf.bytes.toString('latin1');
       expect(text).toContain('/OutputIntents');
-      expect(text).toContain('/Lang (en-GB)');
+      // The set's own language: the demo has English and Spanish sets (BCP 47 tags).
+      expect(set.lang, set.id).toBe(set.language === 'es' ? 'es-ES' : 'en-GB');
+      expect(text).toContain(`/Lang (${set.lang})`);
     }
   });
 });
