@@ -11,7 +11,13 @@ import { measureText } from './text-measure.browser.ts';
 
 import { cupChartSpec, type ChartInput } from '../render/chart.ts';
 
-export { cupChartSpec, thin, CHART_WIDTH_PX, CHART_HEIGHT_PX, MAX_POINTS } from '../render/chart.ts';
+export {
+  cupChartSpec,
+  thin,
+  CHART_WIDTH_PX,
+  CHART_HEIGHT_PX,
+  MAX_POINTS,
+} from '../render/chart.ts';
 export type { ChartInput, CupPoint } from '../render/chart.ts';
 
 interface BandRow {

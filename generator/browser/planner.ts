@@ -30,6 +30,7 @@ import { stationCardHtml } from '../render/card-html.ts';
 import { stationCardView } from '../render/card-view.ts';
 import { dose, fillVolume, temperature, timeRange, waterVolume } from '../render/format.ts';
 import { planJson } from '../render/plan-json.ts';
+import { refusalText } from '../render/plan-text.ts';
 import type { AnswerField, PlannerData } from '../render/planner-view.ts';
 import { fromCelsius, fromFahrenheit, M_PER_FT, toCelsius, toFahrenheit, toMl } from '../units.ts';
 import { wording } from '../words/content.ts';
@@ -57,7 +58,11 @@ class FieldProblems {
   addIssues(issues: readonly ContentIssue[], fallbackField: string): void {
     for (const issue of issues) {
       const { problem, fix } = wording(issue.message);
-      const leaf = issue.field.split('.').pop()?.replace(/\[\d+\]$/, '') ?? '';
+      const leaf =
+        issue.field
+          .split('.')
+          .pop()
+          ?.replace(/\[\d+\]$/, '') ?? '';
       this.add(leaf === '' ? fallbackField : leaf, `${problem}. ${fix}`);
     }
   }
@@ -78,6 +83,12 @@ function fieldValues(form: Form): Record<string, string> {
 function chosenPot(form: Form, data: PlannerData, units: 'metric' | 'us', problems: FieldProblems) {
   const cups = value(form, 'cups');
   if (cups !== OWN) return data.pots.find((pot) => String(pot.cups) === cups) ?? data.pots[0]!;
+  // An empty field is said in the form's words; a value written wrong gets the build's message.
+  for (const control of form.querySelectorAll<HTMLInputElement>(
+    'fieldset[data-when="own-pot"] input[required]',
+  ))
+    if (control.value.trim() === '') problems.add(control.name, words.form.missing);
+  if (problems.byField.size > 0) return undefined;
   const text = ownPotYaml(words.pot.ownName, value(form, 'own_cups'), fieldValues(form), units);
   const valid = validText<PotFileYaml>('pot', text, 'form', OWN_POT_ID, words.pot.ownName);
   if (!valid.value) return problems.addIssues(valid.issues, 'own_cups');
@@ -172,7 +183,7 @@ function catalogueOf(data: PlannerData, planned: Planned, coffee: CoffeeEntry): 
 
 /** The visible text of an answer row, in the page's units; its data-value is the --json value. */
 function answerText(field: AnswerField, p: CardPlan, units: 'metric' | 'us'): string {
-  if (p.refused !== null) return field === 'refused' ? p.refused.code : '—';
+  if (p.refused !== null) return field === 'refused' ? refusalText(p.refused, units).reason : '—';
   switch (field) {
     case 'startC':
       return temperature(p.startK, units).text;
@@ -216,8 +227,10 @@ function showProblems(form: Form, problems: FieldProblems, box: HTMLElement): vo
 function syncSections(form: Form): void {
   const ownPot = value(form, 'cups') === OWN;
   const ownStove = value(form, 'stove') === OWN;
-  for (const el of document.querySelectorAll<HTMLElement>('[data-when="own-pot"]')) el.hidden = !ownPot;
-  for (const el of document.querySelectorAll<HTMLElement>('[data-when="own-stove"]')) el.hidden = !ownStove;
+  for (const el of document.querySelectorAll<HTMLElement>('[data-when="own-pot"]'))
+    el.hidden = !ownPot;
+  for (const el of document.querySelectorAll<HTMLElement>('[data-when="own-stove"]'))
+    el.hidden = !ownStove;
   // Hidden sections take no part in the address or the checks.
   for (const section of document.querySelectorAll<HTMLFieldSetElement>('fieldset[data-when]'))
     section.disabled = section.hidden;
@@ -307,7 +320,10 @@ async function start(): Promise<void> {
 
   let queued: Promise<void> = Promise.resolve();
   const schedule = () => {
-    queued = queued.then(replan, replan);
+    queued = queued.then(replan).catch((error: unknown) => {
+      answer.dataset.state = 'failed';
+      console.error(error);
+    });
   };
   form.addEventListener('input', schedule);
   form.addEventListener('change', schedule);
@@ -336,7 +352,12 @@ function syncTimer(planned: Planned, units: 'metric' | 'us'): void {
     }),
   );
   const p = planned.plan;
-  level.value = labels.includes(before) && timer.dataset.touched ? before : p.refused ? labels[0]! : String(p.levelLabel);
+  level.value =
+    labels.includes(before) && timer.dataset.touched
+      ? before
+      : p.refused
+        ? labels[0]!
+        : String(p.levelLabel);
   if (timer.dataset.touched || p.refused) return;
   const us = units === 'us';
   const set = (name: string, v: string) => {
@@ -344,8 +365,14 @@ function syncTimer(planned: Planned, units: 'metric' | 'us'): void {
     if (control) control.value = v;
   };
   set('fill_ml', String(Math.floor(toMl(p.fillM3))));
-  set(us ? 'start_f' : 'start_c', String(Math.round(us ? toFahrenheit(p.startK) : toCelsius(p.startK))));
-  set(us ? 'room_f' : 'room_c', String(Math.round(us ? toFahrenheit(p.ambientK) : toCelsius(p.ambientK))));
+  set(
+    us ? 'start_f' : 'start_c',
+    String(Math.round(us ? toFahrenheit(p.startK) : toCelsius(p.startK))),
+  );
+  set(
+    us ? 'room_f' : 'room_c',
+    String(Math.round(us ? toFahrenheit(p.ambientK) : toCelsius(p.ambientK))),
+  );
 }
 
 interface TimerState {
@@ -372,7 +399,8 @@ function startTimer(data: PlannerData, currentPlan: () => Planned | null): void 
     const planned = currentPlan();
     if (state.heatOnMs === null) return void (status.textContent = words.timer.notStarted);
     if (state.end === null || state.endS === null) {
-      status.textContent = state.firstCoffeeS === null ? words.timer.needFirst : words.timer.needEnd;
+      status.textContent =
+        state.firstCoffeeS === null ? words.timer.needFirst : words.timer.needEnd;
       return;
     }
     if (!planned) return;

@@ -13,7 +13,7 @@ export type StovePower = 'gentle' | 'usual' | 'strong';
 /** The pot keys the form asks for, by section of a pot entry; `_in` twins replace `_mm` on a US page. */
 export const OWN_POT_FIELDS = {
   base: ['sealed_volume_ml', 'inner_diameter_mm', 'valve_height_mm', 'material', 'mass_g'],
-  funnel: ['basket_diameter_mm', 'basket_depth_mm'],
+  funnel: ['basket_diameter_mm', 'basket_depth_mm', 'tube_inner_diameter_mm', 'tube_gap_mm'],
   upper: ['spout_height_mm', 'capacity_ml'],
 } as const;
 
@@ -130,8 +130,11 @@ export function brewLogYaml(
     `    start_c: ${r1(brew.startC)}`,
     `    room_c: ${r1(brew.roomC)}`,
   ];
-  if (brew.firstCoffeeS !== null) lines.push(`    first_coffee_s: ${Math.round(brew.firstCoffeeS)}`);
-  lines.push(`    ${brew.end === 'sputter' ? 'sputter_s' : 'off_heat_s'}: ${Math.round(brew.endS)}`);
+  if (brew.firstCoffeeS !== null)
+    lines.push(`    first_coffee_s: ${Math.round(brew.firstCoffeeS)}`);
+  lines.push(
+    `    ${brew.end === 'sputter' ? 'sputter_s' : 'off_heat_s'}: ${Math.round(brew.endS)}`,
+  );
   if (brew.cupG !== null) lines.push(`    yield_ml: ${Math.round(brew.cupG)}`);
   return lines.join('\n') + '\n';
 }

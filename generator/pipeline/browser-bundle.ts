@@ -84,7 +84,10 @@ async function folderHash(folders: readonly string[]): Promise<string> {
       const full = path.join(dir, entry.name);
       if (entry.isDirectory()) await visit(full);
       else if (/\.(ts|json)$/.test(entry.name)) {
-        hash.update(path.relative(generator, full)).update('\0').update(await readFile(full));
+        hash
+          .update(path.relative(generator, full))
+          .update('\0')
+          .update(await readFile(full));
       }
     }
   };

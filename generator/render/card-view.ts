@@ -43,13 +43,7 @@ import {
   type TimeRangeText,
 } from './format.ts';
 import { heatFeel, insertSteps, type InsertStep } from './insert-steps.ts';
-import {
-  insertPaths,
-  plannerPaths,
-  plannerSlug,
-  stationPaths,
-  type CardPaths,
-} from './paths.ts';
+import { insertPaths, plannerPaths, plannerSlug, stationPaths, type CardPaths } from './paths.ts';
 import { bindingCauseText, refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
 

@@ -1,6 +1,6 @@
 /**
  * The customer's page: where to measure an own pot. A cut-through pot (base, funnel
- * basket, upper chamber and spout column) with five dimension lines lettered A–E, the
+ * basket, upper chamber and spout column) with seven dimension lines lettered A–G, the
  * letters the form's labels start with (words/planner.ts). Our own drawing; not to scale.
  */
 import { FONT_FAMILY } from './fonts.ts';
@@ -40,6 +40,8 @@ export function measureDrawingSvg(alt: string): string {
     dimension(196, 200, 196, 40, 'C'),
     dimension(70, 104, 130, 104, 'D'),
     dimension(36, 112, 36, 132, 'E'),
+    dimension(82, 160, 96, 160, 'F'),
+    dimension(86, 190, 86, 200, 'G'),
     `<line x1="160" y1="154" x2="178" y2="154" stroke="${DIM}" stroke-dasharray="2,2"/>`,
     `<line x1="105" y1="40" x2="202" y2="40" stroke="${DIM}" stroke-dasharray="2,2"/>`,
     `<line x1="40" y1="200" x2="202" y2="200" stroke="${INK}" stroke-width="1"/>`,

@@ -182,7 +182,7 @@ export function plannerPageView(
           field === 'material'
             ? Object.entries(words.pot.materials).map(([value, label]) => ({ value, label }))
             : null,
-        required: !field.startsWith('basket_'),
+        required: true,
         step: name.endsWith('_in') ? '0.01' : '1',
       };
     });

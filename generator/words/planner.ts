@@ -28,7 +28,7 @@ export const plannerWords = {
     ownIntro:
       'Measure with the funnel taken out, inside the pot. A kitchen ruler and a measuring jug are enough; the drawing shows where each measure goes.',
     drawingAlt:
-      'Cut-through drawing of a stovetop pot: A inner width of the base, B floor to the lowest edge of the safety valve, C floor to the top of the spout, D width and E depth of the funnel basket.',
+      'Cut-through drawing of a stovetop pot: A inner width of the base, B floor to the lowest edge of the safety valve, C floor to the top of the spout, D width and E depth of the funnel basket, F inner width of the funnel tube, G gap between the tube’s end and the floor.',
     ownCups: 'Cups it is sold as',
     fields: {
       sealed_volume_ml: 'Base full to the brim (with the funnel in), mL',
@@ -38,15 +38,22 @@ export const plannerWords = {
       valve_height_in: 'B: floor to the lowest edge of the valve, in',
       spout_height_mm: 'C: floor to the top of the spout, mm',
       spout_height_in: 'C: floor to the top of the spout, in',
-      basket_diameter_mm: 'D: basket width, mm (optional)',
-      basket_diameter_in: 'D: basket width, in (optional)',
-      basket_depth_mm: 'E: basket depth, mm (optional)',
-      basket_depth_in: 'E: basket depth, in (optional)',
+      basket_diameter_mm: 'D: inner width of the funnel basket, mm',
+      basket_diameter_in: 'D: inner width of the funnel basket, in',
+      basket_depth_mm: 'E: depth of the funnel basket, mm',
+      basket_depth_in: 'E: depth of the funnel basket, in',
+      tube_inner_diameter_mm: 'F: inner width of the funnel tube, mm',
+      tube_inner_diameter_in: 'F: inner width of the funnel tube, in',
+      tube_gap_mm: 'G: gap from the tube’s end to the floor, funnel seated, mm',
+      tube_gap_in: 'G: gap from the tube’s end to the floor, funnel seated, in',
       capacity_ml: 'Top chamber full, mL',
       mass_g: 'Base on the kitchen scale, g',
       material: 'Base metal',
     },
-    materials: { aluminium: 'Aluminium (dull grey, light)', 'stainless-steel': 'Stainless steel (shiny, heavier, works on induction)' },
+    materials: {
+      aluminium: 'Aluminium (dull grey, light)',
+      'stainless-steel': 'Stainless steel (shiny, heavier, works on induction)',
+    },
     ownName: 'Your pot',
   },
   stove: {
@@ -72,6 +79,7 @@ export const plannerWords = {
       `Height above sea level, ${units === 'us' ? 'ft' : 'm'}`,
   },
   form: {
+    missing: 'Needed for the recipe: measure it as the drawing shows.',
     badList: (text: string): string =>
       `“${text}” is not a list of numbers. Write the settings as numbers separated by commas, such as 70, 80, 90, or leave the field empty`,
     badAltitude: (text: string, units: UnitSystem): string =>
