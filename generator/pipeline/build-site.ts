@@ -14,12 +14,20 @@
  *
  * A failure anywhere leaves <out> as it was and removes the temporary folder.
  */
+import { mkdir, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { loadCatalogue } from '../content/index.ts';
 import type { Catalogue } from '../content/types.ts';
 import type { SiteData } from '../render/site-view.ts';
-import { insertPaths, pathLanguage, stationPaths } from '../render/paths.ts';
+import {
+  insertPaths,
+  pathLanguage,
+  plannerPaths,
+  plannerSlug,
+  stationPaths,
+} from '../render/paths.ts';
+import { PLANNER_SCRIPT, plannerScript } from './browser-bundle.ts';
 import { checkQrDensity } from '../render/qr-density.ts';
 import { buildDate } from './build-date.ts';
 import { expandCards, type CardJobs } from './cards.ts';
@@ -157,6 +165,14 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
               ).webUrl!,
           ),
           ...jobs.inserts.map((job) => insertPaths(job.slug, baseUrl).webUrl!),
+          // An insert's code opens its coffee's page for customers (the longest, other languages).
+          ...jobs.inserts.map(
+            (job) =>
+              plannerPaths(
+                plannerSlug(job.coffeeId, job.language, catalogue.site.language),
+                baseUrl,
+              ).webUrl!,
+          ),
         ]);
       return { catalogue, jobs };
     });
@@ -191,6 +207,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
         env,
         stats,
       };
+      if (data.plannerPages.length > 0) {
+        // The customer's pages' script (generator/browser/), bundled once per process.
+        const script = path.join(siteDir, PLANNER_SCRIPT);
+        await mkdir(path.dirname(script), { recursive: true });
+        await writeFile(script, await plannerScript(cacheDir));
+      }
       for (const step of options.extraSteps ?? []) {
         onProgress({ phase: 'steps', done: 0, total: 0 });
         await timedPhase(stats, 'steps', () => step(context));

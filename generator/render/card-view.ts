@@ -41,7 +41,14 @@ import {
   type TimeRangeText,
 } from './format.ts';
 import { heatFeel, insertSteps, type InsertStep } from './insert-steps.ts';
-import { insertPaths, pathLanguage, stationPaths, type CardPaths } from './paths.ts';
+import {
+  insertPaths,
+  pathLanguage,
+  plannerPaths,
+  plannerSlug,
+  stationPaths,
+  type CardPaths,
+} from './paths.ts';
 import { bindingCauseText, refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
 import { asVoice, voiceFor, type Voice } from './voice.ts';
@@ -242,6 +249,18 @@ export interface StationCardView {
   readonly warnings: Warnings | null;
   readonly cautions: Cautions;
   readonly footer: Footer;
+  /** The coffee's page for customers (planner-view.ts), linked from the card's page. */
+  readonly planner: PlannerLink;
+}
+
+/** A card's link to its coffee's page for customers. */
+export interface PlannerLink {
+  /** Site-relative page address, e.g. "brew/house-blend/". */
+  readonly pageUrl: string;
+  readonly webUrl: string | null;
+  readonly label: string;
+  /** Language code of the page (the card's). */
+  readonly language: string;
 }
 
 /** One row of an insert card: a pot size on a kind of stove. */
@@ -315,7 +334,9 @@ export interface InsertCardView {
   readonly paths: CardPaths;
   readonly warnings: Warnings | null;
   readonly cautions: Cautions;
+  /** Its QR code opens the coffee's page for customers (the planner), not the insert's page. */
   readonly footer: Footer;
+  readonly planner: PlannerLink;
 }
 
 /** What the build hands insertCardView: the set, the coffee and one plan per row. */
@@ -373,9 +394,10 @@ function warnings(items: readonly string[], voice: Voice): Warnings | null {
 
 async function footer(
   catalogue: Catalogue,
-  paths: CardPaths,
+  webUrl: string | null,
   options: CardViewOptions,
   voice: Voice,
+  caption: string = voice.words.card.footer.qr,
 ): Promise<Footer> {
   const { business } = catalogue.site;
   const words = voice.words.card.footer;
@@ -384,10 +406,23 @@ async function footer(
     built: words.built(voice.date(options.builtOn), options.fingerprint),
     builtOn: options.builtOn,
     fingerprint: options.fingerprint,
-    qrSvg: paths.webUrl ? await qrSvg(paths.webUrl, words.qrLabel) : null,
-    qrCaption: paths.webUrl ? words.qr : null,
-    qrAlt: paths.webUrl ? voice.words.pdf.qrAlt(paths.webUrl) : null,
+    qrSvg: webUrl ? await qrSvg(webUrl, words.qrLabel) : null,
+    qrCaption: webUrl ? caption : null,
+    qrAlt: webUrl ? voice.words.pdf.qrAlt(webUrl) : null,
+    webUrl,
+  };
+}
+
+/** The coffee's page for customers, in the card's language (paths.ts plannerSlug). */
+function plannerLink(coffee: CoffeeEntry, catalogue: Catalogue, voice: Voice): PlannerLink {
+  const site = catalogue.site;
+  const language = voice.language;
+  const paths = plannerPaths(plannerSlug(coffee.id, language, site.language), site.baseUrl);
+  return {
+    language,
+    pageUrl: paths.pageUrl,
     webUrl: paths.webUrl,
+    label: voice.words.card.planner.link(coffee.name),
   };
 }
 
@@ -596,7 +631,8 @@ export async function stationCardView(
       voice,
     ),
     cautions: cautions(pageSetup(voice.units, paper).compact ? 'compact' : 'full', voice),
-    footer: await footer(catalogue, paths, options, voice),
+    footer: await footer(catalogue, paths.webUrl, options, voice),
+    planner: plannerLink(e.coffee, catalogue, voice),
   };
 }
 
@@ -717,6 +753,7 @@ export async function insertCardView(
           voice,
         );
   const refusedRows = rows.filter((row) => row.refused !== null);
+  const planner = plannerLink(coffee, catalogue, voice);
   return {
     kind: 'insert',
     lang: voice.lang,
@@ -748,6 +785,13 @@ export async function insertCardView(
     paths,
     warnings: insertWarnings(rows, input.rows, voice),
     cautions: cautions(pageSetup(voice.units, paper).compact ? 'compact' : 'full', voice),
-    footer: await footer(catalogue, paths, options, voice),
+    footer: await footer(
+      catalogue,
+      planner.webUrl,
+      options,
+      voice,
+      voice.words.card.footer.qrPlanner,
+    ),
+    planner,
   };
 }

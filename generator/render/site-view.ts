@@ -8,6 +8,7 @@ import type { AcceptedPlan } from '../planning/types.ts';
 import type { Messages } from '../words/catalogue.ts';
 import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
 import { cautions as cautionsView, pageNav, pageSetup, type PageNav } from './card-view.ts';
+import type { PlannerPageView } from './planner-view.ts';
 import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts';
 import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './format.ts';
 import { setPaths, type CardPaths } from './paths.ts';
@@ -136,6 +137,8 @@ export interface SiteData {
   readonly frontMatter?: Readonly<
     Record<string, { readonly method: MethodView; readonly troubleshooting: TroubleshootingView }>
   >;
+  /** The customer's page of each coffee a card links (render/planner-view.ts). */
+  readonly plannerPages: readonly PlannerPageView[];
 }
 
 /** What the build knows about a set: its id, title, layout and card slugs in order. */

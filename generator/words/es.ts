@@ -199,6 +199,10 @@ const card: Messages['card'] = {
       `calculada el ${date} · ficha ${fingerprint}`,
     qr: 'En la web:',
     qrLabel: 'Código QR',
+    qrPlanner: 'Su cafetera y su fuego:',
+  },
+  planner: {
+    link: (coffee: string): string => `Calcule ${coffee} para su propia cafetera y su fuego`,
   },
   crossSection: {
     title: (potName: string): string => `Corte de ${potName}`,

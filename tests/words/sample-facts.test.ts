@@ -89,6 +89,7 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   ],
   'card.footer.printedBy': [['Roaster', 'cards@roaster.example']],
   'card.footer.built': [['2026-12-03', 'abcd1234']],
+  'card.planner.link': [['Coffee C']],
   'card.crossSection.title': [['Pot A']],
   'card.crossSection.margin': [['6 mm']],
   'card.insert.heatKind': KINDS.map((k) => [k]),
