@@ -34,7 +34,11 @@ import { refusalText } from '../render/plan-text.ts';
 import type { AnswerField, PlannerData } from '../render/planner-view.ts';
 import { fromCelsius, fromFahrenheit, M_PER_FT, toCelsius, toFahrenheit, toMl } from '../units.ts';
 import { wording } from '../words/content.ts';
-import { plannerWords as words } from '../words/planner.ts';
+import { voiceFor } from '../render/voice.ts';
+import type { Messages } from '../words/catalogue.ts';
+
+/** The page's words: its language's (set in start() from the page's data). */
+let words: Messages['planner'] = voiceFor().words.planner;
 
 type Form = HTMLFormElement;
 
@@ -262,6 +266,7 @@ async function start(): Promise<void> {
   if (!form || !dataElement) return;
   const data = JSON.parse(dataElement.textContent ?? '{}') as PlannerData;
   const units = data.site.units;
+  words = voiceFor(data.language, units).words.planner;
   const answer = document.getElementById('planner-answer')!;
   const cardBox = document.getElementById('planner-card')!;
   const messages = document.getElementById('planner-messages')!;

@@ -18,10 +18,16 @@ import type {
   StoveEntry,
   UnitSystem,
 } from '../content/types.ts';
-import { langTag } from '../words/catalogue.ts';
-import { plannerWords } from '../words/planner.ts';
+import { voiceFor } from './voice.ts';
 import { fieldKey, OWN_POT_FIELDS, STOVE_KINDS, STOVE_POWERS } from '../content/own-entries.ts';
-import { cautions, pageSetup, type Cautions, type PageSetup } from './card-view.ts';
+import {
+  cautions,
+  pageNav,
+  pageSetup,
+  type Cautions,
+  type PageNav,
+  type PageSetup,
+} from './card-view.ts';
 import { measureDrawingSvg } from './measure-drawing.ts';
 import { plannerPaths, type CardPaths } from './paths.ts';
 import { temperature } from './format.ts';
@@ -69,6 +75,8 @@ export interface FormField {
 export interface PlannerPageView {
   readonly kind: 'planner';
   readonly lang: string;
+  /** The page's links at the top, in its language. */
+  readonly nav: PageNav;
   readonly language: string;
   readonly id: string;
   readonly coffeeId: string;
@@ -152,7 +160,8 @@ export function plannerPageView(
   const coffee = catalogue.coffees.get(coffeeId)!;
   const site = catalogue.site;
   const units = site.units;
-  const words = plannerWords;
+  const voice = voiceFor(language, units);
+  const words = voice.words.planner;
   const pots = [...catalogue.pots.values()];
   const stoves = [...catalogue.stoves.values()];
   const data: PlannerData = {
@@ -192,7 +201,8 @@ export function plannerPageView(
     units === 'us' ? Math.round(site.room.altitudeM / 0.3048) : Math.round(site.room.altitudeM);
   return {
     kind: 'planner',
-    lang: langTag(language),
+    lang: voice.lang,
+    nav: pageNav(voice),
     language,
     id: slug,
     coffeeId,
@@ -268,7 +278,7 @@ export function plannerPageView(
       copy: words.timer.copy,
       download: words.timer.download,
     },
-    cautions: cautions('full'),
+    cautions: cautions('full', voice),
     dataJson: scriptJson(data),
   };
 }

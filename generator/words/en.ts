@@ -6,6 +6,7 @@
 import { cardWords, methodWords, troubleshootingWords } from './card.ts';
 import { pdfWords } from './pdf.ts';
 import { planWords } from './plan.ts';
+import { plannerWords } from './planner.ts';
 
 export const en = {
   /** BCP 47 tag of this catalogue's text: HTML `lang` and the PDFs' `/Lang` and dc:language. */
@@ -20,4 +21,6 @@ export const en = {
   troubleshooting: troubleshootingWords,
   plan: planWords,
   pdf: pdfWords,
+  /** The customer's page of a coffee (render/planner-view.ts, browser/planner.ts). */
+  planner: plannerWords,
 } as const;

@@ -8,7 +8,8 @@
  * tueste, hervidor, placa (a hob), fuego.
  */
 import type { HeatKind } from '../content/heat-kind.ts';
-import type { GrindClass } from '../content/types.ts';
+import type { StovePower } from '../content/own-entries.ts';
+import type { GrindClass, StoveKind, UnitSystem } from '../content/types.ts';
 import type { BindingCauseCode, CheckedQuantity, RefusalCode } from '../planning/types.ts';
 import type { Messages } from './catalogue.ts';
 import type { BindingCauseText, HeatFeel } from './card.ts';
@@ -449,6 +450,134 @@ const plan: Messages['plan'] = {
     'El llenado apenas supera el tubo del embudo; el modelo no se comprobó para preparaciones tan pequeñas.',
 };
 
+const stoveKindNamesEs: Record<StoveKind, string> = {
+  gas: 'Fuego de gas',
+  'electric-coil': 'Placa eléctrica de resistencia',
+  radiant: 'Vitrocerámica (radiante)',
+  induction: 'Placa de inducción',
+};
+
+const planner: Messages['planner'] = {
+  pageTitle: (coffee: string): string => `Prepare ${coffee} en su propia cafetera`,
+  intro:
+    'Díganos cómo son su cafetera, su fuego y su hervidor. La página calcula la receta aquí, en su navegador, con el mismo cálculo que nuestras fichas impresas; no se envía nada.',
+  noScript:
+    'Esta página necesita JavaScript para calcular una receta. Las fichas impresas y sus PDF funcionan sin él.',
+  pot: {
+    legend: 'Su cafetera',
+    cups: 'Tamaño de la cafetera',
+    cupsOption: (cups: number, name: string): string =>
+      `${cups} ${cups === 1 ? 'taza' : 'tazas'} (como nuestra ${name})`,
+    own: 'Otra cafetera: la mediré',
+    ownIntro:
+      'Mida por dentro, con el embudo fuera. Basta con una regla de cocina y una jarra medidora; el dibujo muestra dónde va cada medida.',
+    drawingAlt:
+      'Dibujo en corte de una cafetera italiana: A ancho interior del depósito, B del fondo al borde inferior de la válvula de seguridad, C del fondo a lo alto del caño, D ancho y E profundidad del filtro, F ancho interior del tubo del embudo, G separación entre el extremo del tubo y el fondo.',
+    ownCups: 'Tazas con que se vende',
+    fields: {
+      sealed_volume_ml: 'Depósito lleno hasta el borde (con el embudo puesto), mL',
+      inner_diameter_mm: 'A: ancho interior del depósito, mm',
+      inner_diameter_in: 'A: ancho interior del depósito, in',
+      valve_height_mm: 'B: del fondo al borde inferior de la válvula, mm',
+      valve_height_in: 'B: del fondo al borde inferior de la válvula, in',
+      spout_height_mm: 'C: del fondo a lo alto del caño, mm',
+      spout_height_in: 'C: del fondo a lo alto del caño, in',
+      basket_diameter_mm: 'D: ancho interior del filtro, mm',
+      basket_diameter_in: 'D: ancho interior del filtro, in',
+      basket_depth_mm: 'E: profundidad del filtro, mm',
+      basket_depth_in: 'E: profundidad del filtro, in',
+      tube_inner_diameter_mm: 'F: ancho interior del tubo del embudo, mm',
+      tube_inner_diameter_in: 'F: ancho interior del tubo del embudo, in',
+      tube_gap_mm: 'G: del extremo del tubo al fondo, con el embudo puesto, mm',
+      tube_gap_in: 'G: del extremo del tubo al fondo, con el embudo puesto, in',
+      capacity_ml: 'Parte superior llena, mL',
+      mass_g: 'Depósito en la báscula de cocina, g',
+      material: 'Metal del depósito',
+    },
+    materials: {
+      aluminium: 'Aluminio (gris mate, ligero)',
+      'stainless-steel': 'Acero inoxidable (brillante, más pesado, sirve para inducción)',
+    },
+    ownName: 'Su cafetera',
+  },
+  stove: {
+    legend: 'Su fuego',
+    stove: 'Fuego',
+    own: 'Otro fuego',
+    kind: 'Tipo de calor',
+    kinds: stoveKindNamesEs,
+    power: 'Su fuerza al máximo',
+    powers: {
+      gentle: 'Suave: un fuego pequeño, tarda en hervir un hervidor',
+      usual: 'Normal: un fuego doméstico corriente',
+      strong: 'Fuerte: un quemador grande o de wok',
+    },
+    ownName: (kind: StoveKind, power: StovePower): string =>
+      `Su ${stoveKindNamesEs[kind].toLowerCase()} (${{ gentle: 'suave', usual: 'normal', strong: 'fuerte' }[power]} al máximo), mando del 1 al 6`,
+  },
+  kettle: {
+    legend: 'Su hervidor',
+    presets: (units: UnitSystem): string =>
+      `Sus temperaturas programadas, ${units === 'us' ? '°F' : '°C'}, separadas por comas (déjelo vacío si solo hierve)`,
+    altitude: (units: UnitSystem): string =>
+      `Altitud sobre el nivel del mar, ${units === 'us' ? 'ft' : 'm'}`,
+  },
+  form: {
+    missing: 'Hace falta para la receta: mídalo como muestra el dibujo.',
+    badList: (text: string): string =>
+      `«${text}» no es una lista de números. Escriba las temperaturas como números separados por comas, como 70, 80, 90, o deje el campo vacío`,
+    badAltitude: (text: string, units: UnitSystem): string =>
+      units === 'us'
+        ? `«${text}» no es una altitud para la que esta página pueda calcular. Escriba un número de pies de -1640 a 16400`
+        : `«${text}» no es una altitud para la que esta página pueda calcular. Escriba un número de metros de -500 a 5000`,
+  },
+  answer: {
+    heading: 'Su receta',
+    startC: 'Agua antes de cerrar',
+    fillMl: 'Agua en el depósito',
+    doseG: 'Café en el filtro',
+    level: 'Posición del fuego',
+    firstCoffeeS: 'Primer café',
+    offHeatS: 'Retirar del fuego',
+    yieldMl: 'En la taza',
+    refused: 'Sin receta',
+    working: 'Calculando su receta…',
+    print: 'Imprimir esta ficha',
+    share: 'La dirección de esta página guarda sus elecciones: añádala a favoritos o envíela.',
+    fixFirst: 'Corrija los campos marcados para ver una receta.',
+  },
+  timer: {
+    heading: 'Cronómetro: cuéntenos cómo le salió',
+    intro:
+      'Ponga en marcha el cronómetro cuando la cafetera vaya al fuego y pulse cada botón cuando ocurra. La página escribe la preparación en el formato de registro con el que ajustamos las fichas; cópiela o guárdela como archivo.',
+    heatOn: 'Al fuego',
+    firstCoffee: 'Primer café',
+    sputter: 'Borboteo',
+    offHeat: 'Retirada del fuego',
+    reset: 'Empezar de nuevo',
+    level: 'Posición del fuego usada',
+    fill: 'Agua en el depósito, mL',
+    start: (units: UnitSystem): string =>
+      `Temperatura del agua al cerrar, ${units === 'us' ? '°F' : '°C'}`,
+    room: (units: UnitSystem): string => `Temperatura ambiente, ${units === 'us' ? '°F' : '°C'}`,
+    cup: 'Café en la taza al final, g',
+    output: 'La preparación, como entrada del registro',
+    copy: 'Copiar',
+    download: 'Guardar como archivo',
+    copied: 'Copiado.',
+    notStarted: 'Pulse primero «Al fuego».',
+    stopped: 'La preparación ha terminado: pulse «Empezar de nuevo» para otra.',
+    elapsed: (seconds: number): string => `${seconds} s al fuego`,
+    mark: (what: string, seconds: number): string => `${what} a los ${seconds} s`,
+    needEnd: 'Pulse «Borboteo» o «Retirada del fuego» para terminar la preparación.',
+    needFirst: 'Pulse «Primer café» cuando aparezca el primer café.',
+    ownPotNote:
+      'Su cafetera no está en nuestra lista: la entrada la llama «your-pot»; envíenos también sus medidas.',
+    comment: (pot: string, coffee: string, stove: string): string =>
+      `Cronometrado en la página de preparación: ${pot}, ${coffee}, ${stove}.`,
+  },
+};
+
 const pdf: Messages['pdf'] = {
   creator: 'stovecard',
   stationTitle: (coffee: string, subtitle: string): string => `${coffee} — ${subtitle}`,
@@ -490,4 +619,5 @@ export const es: Messages = {
   troubleshooting,
   plan,
   pdf,
+  planner,
 };

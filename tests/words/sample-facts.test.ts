@@ -145,6 +145,26 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'pdf.contents.refused': [['Coffee C', 'no recipe']],
   'pdf.doesNotFit': [['card', 'A6', 500.2, 400.7]],
   'pdf.pageNumber': [[2, 9]],
+  'planner.pageTitle': [['Coffee C']],
+  'planner.pot.cupsOption': [
+    [1, 'Pot A'],
+    [6, 'Pot A'],
+  ],
+  'planner.stove.ownName': ['gas', 'electric-coil', 'radiant', 'induction'].flatMap((k) =>
+    ['gentle', 'usual', 'strong'].map((p) => [k, p]),
+  ),
+  'planner.kettle.presets': [['metric'], ['us']],
+  'planner.kettle.altitude': [['metric'], ['us']],
+  'planner.form.badList': [['70; x']],
+  'planner.form.badAltitude': [
+    ['9000', 'metric'],
+    ['30000', 'us'],
+  ],
+  'planner.timer.start': [['metric'], ['us']],
+  'planner.timer.room': [['metric'], ['us']],
+  'planner.timer.elapsed': [[42]],
+  'planner.timer.mark': [['First coffee', 42]],
+  'planner.timer.comment': [['Pot A', 'Coffee C', 'Stove B']],
 };
 
 function functions(value: unknown, at = ''): Map<string, (...args: unknown[]) => unknown> {
