@@ -148,12 +148,15 @@ describeWithBrowser('the customer’s page in Chromium', () => {
 
   it('is built for every coffee, and every insert’s QR code and station card page leads to it', async () => {
     const pages = metric.result.data.plannerPages.map((p) => p.paths.pageUrl).sort();
-    const coffees = [...new Set(metric.result.data.stationCards.map((c) => c.coffeeId))];
-    expect(pages).toEqual(coffees.map((c) => `brew/${c}/`).sort());
+    // One page per coffee and language of the cards that link it: the site's language
+    // (the demo's: en) at brew/<coffee>/, another (the demo's Spanish sets) at brew/<coffee>--es/.
+    const page = (c: { coffeeId: string; language: string }) =>
+      `brew/${c.coffeeId}${c.language === 'en' ? '' : `--${c.language}`}/`;
+    const cards = [...metric.result.data.stationCards, ...metric.result.data.insertCards];
+    expect(pages).toEqual([...new Set(cards.map(page))].sort());
+    expect(pages).toContain('brew/house-blend--es/');
     for (const insert of metric.result.data.insertCards) {
-      expect(insert.footer.webUrl).toBe(
-        `https://cards.brindlemoss.example/brew/${insert.coffeeId}/`,
-      );
+      expect(insert.footer.webUrl).toBe(`https://cards.brindlemoss.example/${page(insert)}`);
     }
     const card = metric.result.data.stationCards[0]!;
     const html = await readFile(path.join(metric.outDir, card.paths.pageFile), 'utf8');
