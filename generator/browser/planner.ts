@@ -325,6 +325,8 @@ async function start(): Promise<void> {
     answer.dataset.state = planned.plan.refused ? 'refused' : 'planned';
     answer.dataset.runs = String(++runs);
     answer.dataset.ms = String(Math.round(performance.now() - started));
+    // When the first card was in the page, ms since navigation (bench/planner.ts).
+    answer.dataset.at ??= String(Math.round(performance.now()));
   };
 
   let queued: Promise<void> = Promise.resolve();
