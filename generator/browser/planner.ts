@@ -32,7 +32,16 @@ import { dose, fillVolume, temperature, timeRange, waterVolume } from '../render
 import { planJson } from '../render/plan-json.ts';
 import { refusalText } from '../render/plan-text.ts';
 import type { AnswerField, PlannerData } from '../render/planner-view.ts';
-import { fromCelsius, fromFahrenheit, M_PER_FT, toCelsius, toFahrenheit, toMl } from '../units.ts';
+import {
+  fromCelsius,
+  fromFahrenheit,
+  M_PER_FT,
+  ML_PER_US_FL_OZ,
+  toCelsius,
+  toFahrenheit,
+  toFlOz,
+  toMl,
+} from '../units.ts';
 import { wording } from '../words/content.ts';
 import { voiceFor } from '../render/voice.ts';
 import type { Messages } from '../words/catalogue.ts';
@@ -321,6 +330,8 @@ async function start(): Promise<void> {
     answer.dataset.state = planned.plan.refused ? 'refused' : 'planned';
     answer.dataset.runs = String(++runs);
     answer.dataset.ms = String(Math.round(performance.now() - started));
+    // When the first card was in the page, ms since navigation (bench/planner.ts).
+    answer.dataset.at ??= String(Math.round(performance.now()));
   };
 
   let queued: Promise<void> = Promise.resolve();
@@ -369,7 +380,10 @@ function syncTimer(planned: Planned, units: 'metric' | 'us'): void {
     const control = timer.elements.namedItem(name) as HTMLInputElement | null;
     if (control) control.value = v;
   };
-  set('fill_ml', String(Math.floor(toMl(p.fillM3))));
+  set(
+    us ? 'fill_floz' : 'fill_ml',
+    us ? String(Math.floor(toFlOz(p.fillM3) * 10) / 10) : String(Math.floor(toMl(p.fillM3))),
+  );
   set(
     us ? 'start_f' : 'start_c',
     String(Math.round(us ? toFahrenheit(p.startK) : toCelsius(p.startK))),
@@ -416,7 +430,7 @@ function startTimer(data: PlannerData, currentPlan: () => Planned | null): void 
       { pot: planned.pot.id, coffee: data.coffee.id, stove: planned.stove.id },
       {
         level: value(timer!, 'level'),
-        fillMl: num('fill_ml'),
+        fillMl: units === 'us' ? num('fill_floz') * ML_PER_US_FL_OZ : num('fill_ml'),
         startC: toC(num(units === 'us' ? 'start_f' : 'start_c')),
         roomC: toC(num(units === 'us' ? 'room_f' : 'room_c')),
         cupG: cup === '' ? null : Number(cup),

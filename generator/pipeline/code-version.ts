@@ -34,7 +34,7 @@ export const RENDER_SOURCES: readonly string[] = [
   'generator/words',
   'generator/units.ts', // the conversions the views print through
   'generator/content/heat-kind.ts', // how an insert groups its stoves
-  'generator/content/own-entries.ts', // the customer's page's own pot and stove (planner-view.ts)
+  'generator/content/own-entries.ts', // the customer's page's form fields
   'generator/pipeline/site-data.ts', // what a view is given (its catalogue, its fingerprint)
   'generator/pipeline/render-cache.ts',
   'generator/pipeline/pdf-step.ts', // what a set's PDF is given

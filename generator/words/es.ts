@@ -476,6 +476,7 @@ const planner: Messages['planner'] = {
     ownCups: 'Tazas con que se vende',
     fields: {
       sealed_volume_ml: 'Depósito lleno hasta el borde (con el embudo puesto), mL',
+      sealed_volume_floz: 'Depósito lleno hasta el borde (con el embudo puesto), fl oz',
       inner_diameter_mm: 'A: ancho interior del depósito, mm',
       inner_diameter_in: 'A: ancho interior del depósito, in',
       valve_height_mm: 'B: del fondo al borde inferior de la válvula, mm',
@@ -491,6 +492,7 @@ const planner: Messages['planner'] = {
       tube_gap_mm: 'G: del extremo del tubo al fondo, con el embudo puesto, mm',
       tube_gap_in: 'G: del extremo del tubo al fondo, con el embudo puesto, in',
       capacity_ml: 'Parte superior llena, mL',
+      capacity_floz: 'Parte superior llena, fl oz',
       mass_g: 'Depósito en la báscula de cocina, g',
       material: 'Metal del depósito',
     },
@@ -556,7 +558,7 @@ const planner: Messages['planner'] = {
     offHeat: 'Retirada del fuego',
     reset: 'Empezar de nuevo',
     level: 'Posición del fuego usada',
-    fill: 'Agua en el depósito, mL',
+    fill: (units: UnitSystem): string => `Agua en el depósito, ${units === 'us' ? 'fl oz' : 'mL'}`,
     start: (units: UnitSystem): string =>
       `Temperatura del agua al cerrar, ${units === 'us' ? '°F' : '°C'}`,
     room: (units: UnitSystem): string => `Temperatura ambiente, ${units === 'us' ? '°F' : '°C'}`,

@@ -161,6 +161,7 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
     ['30000', 'us'],
   ],
   'planner.timer.start': [['metric'], ['us']],
+  'planner.timer.fill': [['metric'], ['us']],
   'planner.timer.room': [['metric'], ['us']],
   'planner.timer.elapsed': [[42]],
   'planner.timer.mark': [['First coffee', 42]],
