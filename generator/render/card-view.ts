@@ -20,6 +20,7 @@ import type {
 } from '../content/types.ts';
 import type { AcceptedPlan, CardPlan, RefusedPlan } from '../planning/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
+import type { Provenance } from '../content/provenance.ts';
 import { cardWords } from '../words/card.ts';
 import { langTag } from '../words/catalogue.ts';
 import { cupChartSpec, renderChartSvg } from './chart.ts';
@@ -491,9 +492,17 @@ async function recipe(
   }
   const grindAssumed = e.coffee.permeabilityAssumed ? e.coffee.grind : null;
   const stoveAssumed = e.stove.efficiencyAssumed && !e.stove.levels[plan.levelIndex]?.fitted;
+  const level = e.stove.levels[plan.levelIndex];
+  const measured = [
+    ...(e.coffee.permeabilityProvenance
+      ? [{ what: 'grind' as const, ...provenanceText(e.coffee.permeabilityProvenance) }]
+      : []),
+    ...(level?.provenance ? [{ what: 'heat' as const, ...provenanceText(level.provenance) }] : []),
+  ];
   const notes = [
     ...(plan.bindingCause ? [bindingCauseText(plan, units)] : []),
     ...(grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : []),
+    ...(measured.length > 0 ? [words.expect.measured(measured)] : []),
   ];
 
   return {
@@ -545,6 +554,11 @@ async function recipe(
     },
     expect: { heading: words.expect.heading, rows: expectRows, notes },
   };
+}
+
+/** A fitted value's σ (in percent, two figures), its log and date, as the card prints them. */
+function provenanceText(p: Provenance): { percent: string; log: string; date: string } {
+  return { percent: String(Number((p.sigmaRel * 100).toPrecision(2))), log: p.log, date: p.date };
 }
 
 function refusal(plan: RefusedPlan, units: UnitSystem): RefusalBlock {
