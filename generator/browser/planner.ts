@@ -96,12 +96,18 @@ function fieldValues(form: Form): Record<string, string> {
 function chosenPot(form: Form, data: PlannerData, units: 'metric' | 'us', problems: FieldProblems) {
   const cups = value(form, 'cups');
   if (cups !== OWN) return data.pots.find((pot) => String(pot.cups) === cups) ?? data.pots[0]!;
-  // An empty field is said in the form's words; a value written wrong gets the build's message.
-  for (const control of form.querySelectorAll<HTMLInputElement>(
-    'fieldset[data-when="own-pot"] input[required]',
-  ))
-    if (control.value.trim() === '') problems.add(control.name, words.form.missing);
-  if (problems.byField.size > 0) return undefined;
+  // An empty field is said in the form's words (once the customer has been at it; until
+  // every one is filled a general line asks for them); a value written wrong gets the
+  // build's own message.
+  const empty = [
+    ...form.querySelectorAll<HTMLInputElement>('fieldset[data-when="own-pot"] input[required]'),
+  ].filter((control) => control.value.trim() === '');
+  for (const control of empty)
+    if (control.dataset.touched) problems.add(control.name, words.form.missing);
+  if (empty.length > 0) {
+    problems.add('', words.form.fillIn);
+    return undefined;
+  }
   const text = ownPotYaml(words.pot.ownName, value(form, 'own_cups'), fieldValues(form), units);
   const valid = validText<PotFileYaml>('pot', text, 'form', OWN_POT_ID, words.pot.ownName);
   if (!valid.value) return problems.addIssues(valid.issues, 'own_cups');
@@ -231,10 +237,15 @@ function showProblems(form: Form, problems: FieldProblems, box: HTMLElement): vo
   const unplaced = [...problems.byField.entries()].filter(
     ([field]) => !document.getElementById(`problem-${field}`),
   );
+  const general = problems.byField.get('');
+  const placed = problems.byField.size - (general === undefined ? 0 : 1) - unplaced.length;
   box.textContent =
     problems.byField.size === 0
       ? ''
-      : [words.answer.fixFirst, ...unplaced.map(([field, text]) => `${field}: ${text}`)].join(' ');
+      : [
+          ...(placed > 0 ? [words.answer.fixFirst] : []),
+          ...unplaced.map(([field, text]) => (field === '' ? text : `${field}: ${text}`)),
+        ].join(' ');
 }
 
 function syncSections(form: Form): void {
@@ -341,7 +352,16 @@ async function start(): Promise<void> {
       console.error(error);
     });
   };
-  form.addEventListener('input', schedule);
+  form.addEventListener('input', (event) => {
+    const target = event.target as HTMLElement;
+    target.dataset.touched = '1';
+    schedule();
+  });
+  form.addEventListener(
+    'blur',
+    (event) => ((event.target as HTMLElement).dataset.touched = '1'),
+    true,
+  );
   form.addEventListener('change', schedule);
   form.addEventListener('submit', (event) => {
     event.preventDefault();

@@ -8,6 +8,7 @@
  *   values spliced into its text, written to a temp file beside it, loaded and validated
  *   again, then renamed over the entry (a crash leaves the old file or the new, never half)
  */
+import { provenanceNote } from '../content/provenance.ts';
 import { randomBytes } from 'node:crypto';
 import { readdir, readFile, rename, stat, unlink, writeFile } from 'node:fs/promises';
 import { basename, dirname, extname, join, resolve } from 'node:path';
@@ -252,7 +253,7 @@ export async function writeFitted(report: FitReport, loaded: LoadedFit): Promise
     return e?.status === 'fitted'
       ? {
           ...edit,
-          note: fitWords.provenance(
+          note: provenanceNote(
             percent(e.relativeSigma),
             `logs/${basename(loaded.log.source.file)}`,
             date,

@@ -3,6 +3,7 @@
  * high, the defaults for what the file leaves out, and the conversion to SI.
  */
 import { message } from './messages.ts';
+import { provenanceAt } from './provenance.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import { GRIND_PERMEABILITY_M2 } from './grind-permeability.ts';
 import type { ContentIssue } from './issues.ts';
@@ -44,6 +45,8 @@ export function buildCoffee(file: ValidFile<CoffeeYaml>): Checked<CoffeeEntry> {
   ];
   if (issues.length > 0) return { issues };
   const [lowC, highC] = data.target_c ?? DEFAULT_TARGET_C;
+  const provenance =
+    data.permeability_m2 === undefined ? undefined : provenanceAt(source, ['permeability_m2']);
   const entry: CoffeeEntry = {
     kind: 'coffee',
     id: file.id,
@@ -60,6 +63,7 @@ export function buildCoffee(file: ValidFile<CoffeeYaml>): Checked<CoffeeEntry> {
       targetBandK: [celsiusToK(lowC), celsiusToK(highC)],
     },
     permeabilityAssumed: data.permeability_m2 === undefined,
+    ...(provenance ? { permeabilityProvenance: provenance } : {}),
     deliveryWindowS: data.delivery_window_s
       ? [data.delivery_window_s[0], data.delivery_window_s[1]]
       : null,

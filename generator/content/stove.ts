@@ -3,6 +3,7 @@
  * power, the kind's default efficiency, and the heat each level puts into the pot.
  */
 import { message } from './messages.ts';
+import { provenanceAt } from './provenance.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { DEFAULT_STOVE_EFFICIENCY } from './stove-efficiency.ts';
@@ -59,12 +60,19 @@ export function buildStove(file: ValidFile<StoveYaml>): Checked<StoveEntry> {
   if (issues.length > 0) return { issues };
   const { data } = file;
   const efficiency = data.efficiency ?? DEFAULT_STOVE_EFFICIENCY[data.kind];
-  const levels: StoveLevel[] = data.levels.map((level) => ({
-    label: String(level.label),
-    powerW: level.power_w,
-    heatToPotW: level.heat_to_pot_w ?? level.power_w * efficiency,
-    fitted: level.heat_to_pot_w !== undefined,
-  }));
+  const levels: StoveLevel[] = data.levels.map((level, i) => {
+    const provenance =
+      level.heat_to_pot_w === undefined
+        ? undefined
+        : provenanceAt(file.source, ['levels', i, 'heat_to_pot_w']);
+    return {
+      label: String(level.label),
+      powerW: level.power_w,
+      heatToPotW: level.heat_to_pot_w ?? level.power_w * efficiency,
+      fitted: level.heat_to_pot_w !== undefined,
+      ...(provenance ? { provenance } : {}),
+    };
+  });
   const entry: StoveEntry = {
     kind: 'stove',
     id: file.id,

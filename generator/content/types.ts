@@ -2,6 +2,7 @@
  * Entries as the rest of the generator sees them after loading and validation: the names
  * and labels a person wrote, plus the SI models the physics takes. Trade units stay in YAML.
  */
+import type { Provenance } from './provenance.ts';
 import type { BedModel, PotModel } from '../brew/types.ts';
 
 /** Where a value came from, for error messages and card footers. */
@@ -41,6 +42,8 @@ export interface CoffeeEntry extends EntryBase {
   readonly bed: BedModel;
   /** True when permeability_m2 was not given and the grind-class default was used. */
   readonly permeabilityAssumed: boolean;
+  /** Which log measured permeability_m2, when, and its σ (provenance.ts). */
+  readonly permeabilityProvenance?: Provenance;
   /**
    * Delivery phase (first coffee to off-heat) a three-cup pot's plan must fit in, s; null
    * when the file gives none. Smaller pots scale it (planning/delivery.ts).
@@ -57,6 +60,8 @@ export interface StoveLevel {
   /** Heat reaching the pot, W: a fitted value when the entry has one, else power × efficiency. */
   readonly heatToPotW: number;
   readonly fitted: boolean;
+  /** Which log measured heatToPotW, when, and its σ (the note `fit --write` leaves; provenance.ts). */
+  readonly provenance?: Provenance;
 }
 
 export interface StoveEntry extends EntryBase {

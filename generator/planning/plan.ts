@@ -409,17 +409,19 @@ export function fillFor(pot: PotEntry, startK: number, ambientPa: number): numbe
 }
 
 /**
- * How uncertain the two inputs that move the timings most are: measured ones (a fitted σ
- * when the entry has one) or assumed ones (heat from a default efficiency ±30 %, a
+ * How uncertain the two inputs that move the timings most are: measured ones (the σ of
+ * the note `fit --write` left beside the value, content/provenance.ts) or assumed ones (heat from a default efficiency ±30 %, a
  * grind-derived permeability ×/÷ 2: our choices, from the spread of stove efficiencies
  * and of grinds within one class).
  */
 export function inputSpread(coffee: CoffeeEntry, stove: StoveEntry): InputSpread {
   const sigma = (v: number | undefined) =>
     v !== undefined && Number.isFinite(v) && v > 0 ? v : undefined;
-  const kSigma = sigma((coffee as { permeabilitySigmaRel?: number }).permeabilitySigmaRel);
+  const kSigma = sigma(coffee.permeabilityProvenance?.sigmaRel);
   const anyFitted = stove.levels.some((l) => l.fitted);
-  const heatSigma = sigma((stove as { heatSigmaRel?: number }).heatSigmaRel);
+  // The widest σ of the levels fitted (one stove's levels share a log, usually one fit).
+  const levelSigmas = stove.levels.flatMap((l) => (l.provenance ? [l.provenance.sigmaRel] : []));
+  const heatSigma = sigma(levelSigmas.length > 0 ? Math.max(...levelSigmas) : undefined);
   const permeabilityMeasured = !coffee.permeabilityAssumed;
   const heatMeasured = anyFitted || !stove.efficiencyAssumed;
   return {

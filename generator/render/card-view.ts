@@ -20,6 +20,7 @@ import type {
 } from '../content/types.ts';
 import type { AcceptedPlan, CardPlan, RefusedPlan } from '../planning/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
+import type { Provenance } from '../content/provenance.ts';
 import { cupChartSpec, renderChartSvg } from './chart.ts';
 import { crossSection, type CrossSectionLayout } from './cross-section.ts';
 import {
@@ -374,10 +375,7 @@ export function pageSetup(units: UnitSystem, paper: PaperSize): PageSetup {
 }
 
 /** The cautions every page carries: the compact list where space is short (A6). */
-export function cautions(
-  form: 'full' | 'compact' = 'full',
-  voice?: Voice | UnitSystem,
-): Cautions {
+export function cautions(form: 'full' | 'compact' = 'full', voice?: Voice | UnitSystem): Cautions {
   const words = asVoice(voice).words.card.cautions;
   return {
     heading: words.heading,
@@ -519,9 +517,19 @@ async function recipe(
   }
   const grindAssumed = e.coffee.permeabilityAssumed ? e.coffee.grind : null;
   const stoveAssumed = e.stove.efficiencyAssumed && !e.stove.levels[plan.levelIndex]?.fitted;
+  const level = e.stove.levels[plan.levelIndex];
+  const measured = [
+    ...(e.coffee.permeabilityProvenance
+      ? [{ what: 'grind' as const, ...provenanceText(e.coffee.permeabilityProvenance, voice) }]
+      : []),
+    ...(level?.provenance
+      ? [{ what: 'heat' as const, ...provenanceText(level.provenance, voice) }]
+      : []),
+  ];
   const notes = [
     ...(plan.bindingCause ? [bindingCauseText(plan, voice)] : []),
     ...(grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : []),
+    ...(measured.length > 0 ? [words.expect.measured(measured)] : []),
   ];
 
   return {
@@ -576,6 +584,19 @@ async function recipe(
       alt: words.chart.alt(planShare, coldShare, band),
     },
     expect: { heading: words.expect.heading, rows: expectRows, notes },
+  };
+}
+
+/** A fitted value's σ (in percent, two figures), its log and date, as the card prints them. */
+function provenanceText(
+  p: Provenance,
+  voice: Voice,
+): { percent: string; log: string; date: string } {
+  const percent = String(Number((p.sigmaRel * 100).toPrecision(2))).replace('.', voice.decimal);
+  return {
+    percent,
+    log: p.log,
+    date: /^\d{4}-\d\d-\d\d$/.test(p.date) ? voice.date(p.date) : p.date,
   };
 }
 
@@ -664,7 +685,10 @@ function insertRow(
   if (plan.refused !== null) {
     return {
       ...base,
-      refused: { label: words.notSuitable, reason: voice.words.card.refusal.short[plan.refused.code] },
+      refused: {
+        label: words.notSuitable,
+        reason: voice.words.card.refusal.short[plan.refused.code],
+      },
       fill: null,
       dose: null,
       start: null,

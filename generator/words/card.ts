@@ -143,6 +143,21 @@ export const cardWords = {
       ];
       return `Times assume ${parts.join(' and ')}; a timed brew log narrows them.`;
     },
+    /** Inputs `stovecard fit` measured: which, from which log, when, how closely. */
+    measured: (
+      items: readonly {
+        readonly what: 'grind' | 'heat';
+        readonly percent: string;
+        readonly log: string;
+        readonly date: string;
+      }[],
+    ): string =>
+      `Measured from timed brews: ${items
+        .map(
+          (m) =>
+            `${m.what === 'grind' ? 'how fast this coffee flows' : 'this setting’s heat'} (± ${m.percent} %, ${m.log}, ${m.date})`,
+        )
+        .join('; ')}.`,
   },
   warningsHeading: 'Check',
   refusal: {

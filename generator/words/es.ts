@@ -151,6 +151,20 @@ const card: Messages['card'] = {
       ];
       return `Los tiempos suponen ${parts.join(' y ')}; un registro de preparaciones cronometradas los afina.`;
     },
+    measured: (
+      items: readonly {
+        readonly what: 'grind' | 'heat';
+        readonly percent: string;
+        readonly log: string;
+        readonly date: string;
+      }[],
+    ): string =>
+      `Medido con preparaciones cronometradas: ${items
+        .map(
+          (m) =>
+            `${m.what === 'grind' ? 'lo deprisa que pasa este café' : 'el calor de esta posición'} (± ${m.percent} %, ${m.log}, ${m.date})`,
+        )
+        .join('; ')}.`,
   },
   warningsHeading: 'Compruebe',
   refusal: {
@@ -526,6 +540,7 @@ const planner: Messages['planner'] = {
   },
   form: {
     missing: 'Hace falta para la receta: mídalo como muestra el dibujo.',
+    fillIn: 'Rellene todas las medidas de su cafetera para ver su receta.',
     badList: (text: string): string =>
       `«${text}» no es una lista de números. Escriba las temperaturas como números separados por comas, como 70, 80, 90, o deje el campo vacío`,
     badAltitude: (text: string, units: UnitSystem): string =>

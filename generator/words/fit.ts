@@ -216,8 +216,6 @@ export const fitWords = {
   written: (l: WrittenLine): string =>
     `Wrote ${l.file}: ${l.field} ${l.value}${l.was === null ? ' (new)' : ` (was ${l.was})`}`,
   /** The comment `fit --write` leaves beside a value it writes (kept short: one line). */
-  provenance: (percent: string, logFile: string, date: string): string =>
-    `fitted ± ${percent} % from ${logFile}, ${date}`,
   nothingWritten: 'Nothing written: the log cannot pin down any of the values.',
   notWritten: (keys: readonly string[]): string =>
     `Not written (not identifiable): ${keys.join(', ')}`,

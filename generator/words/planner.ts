@@ -82,6 +82,7 @@ export const plannerWords = {
   },
   form: {
     missing: 'Needed for the recipe: measure it as the drawing shows.',
+    fillIn: 'Fill in every measure of your pot to see its recipe.',
     badList: (text: string): string =>
       `“${text}” is not a list of numbers. Write the settings as numbers separated by commas, such as 70, 80, 90, or leave the field empty`,
     badAltitude: (text: string, units: UnitSystem): string =>

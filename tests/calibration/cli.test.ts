@@ -298,12 +298,25 @@ describe('stovecard fit --write', () => {
         Number(report.written.find((w) => w.field === field)!.value);
       expect(coffee.bed.permeabilityM2).toBe(written('permeability_m2'));
       expect(coffee.permeabilityAssumed).toBe(false);
+      // The note beside each written value is read back: its log, the day and the fit's σ.
+      const today = new Date().toISOString().slice(0, 10);
+      const sigmaOf = (id: string) => {
+        const p = report.parameters.find((x) => x.id === id)!;
+        return Number(((p.sigma! / p.value) * 100).toPrecision(2)) / 100;
+      };
+      expect(coffee.permeabilityProvenance).toEqual({
+        sigmaRel: sigmaOf('permeability'),
+        log: 'logs/first-morning.yaml',
+        date: today,
+      });
       for (const level of stove.levels.filter((l) => l.label === 'medium' || l.label === 'high')) {
         const index = stove.levels.indexOf(level);
         expect(level).toMatchObject({
           fitted: true,
           heatToPotW: written(`levels[${index}].heat_to_pot_w`),
+          provenance: { log: 'logs/first-morning.yaml', date: today },
         });
+        expect(level.provenance!.sigmaRel).toBeGreaterThan(0);
       }
       const ua = report.parameters.find((p) => p.id === 'heat-loss')!;
       if (ua.identifiable) expect(pot.model.heatLossWPerK).toBe(written('base.heat_loss_w_per_k'));

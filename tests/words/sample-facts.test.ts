@@ -82,6 +82,15 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   ],
   'card.expect.bindingCause': CAUSES.map((c) => [c, cause]),
   'card.expect.boilingValue': [['93 °C', '2000 m']],
+  'card.expect.measured': [
+    [[{ what: 'grind', percent: '7,5', log: 'first-morning', date: '2026-12-01' }]],
+    [
+      [
+        { what: 'grind', percent: '7.5', log: 'a', date: '2026-12-01' },
+        { what: 'heat', percent: '12', log: 'b', date: '2026-12-02' },
+      ],
+    ],
+  ],
   'card.expect.assumed': [
     ['medium', true],
     ['fine', false],
