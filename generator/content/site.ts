@@ -23,6 +23,7 @@ interface SetYaml {
   readonly title: string;
   readonly layout: 'station' | 'insert';
   readonly language?: string;
+  readonly include_refused?: boolean;
   readonly cards?: readonly CardYaml[];
   readonly coffees?: readonly string[];
   readonly pots?: readonly string[];
@@ -45,6 +46,8 @@ export interface SiteYaml {
 /** Cards of one set, with the issues found while reading them. */
 interface Expanded {
   readonly cards: readonly CardRequest[];
+  /** Cards from `every_coffee_with_every_pot`, left out when refused (unless include_refused). */
+  readonly expanded: readonly CardRequest[];
   readonly coffeeIds: readonly string[];
   readonly issues: readonly ContentIssue[];
 }
@@ -92,6 +95,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
     const example = '`cards:` with `- { pot: …, coffee: …, stove: … }` lines';
     return {
       cards: [],
+      expanded: [],
       coffeeIds: [],
       issues: [
         ...issues,
@@ -100,6 +104,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
     };
   }
   const cards: CardRequest[] = [];
+  const expanded: CardRequest[] = [];
   const firstLineOf = new Map<string, number>();
   set.cards.forEach((card, index) => {
     const at = [...path, 'cards', index];
@@ -133,6 +138,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
       if (firstLine === undefined) {
         firstLineOf.set(key, line);
         cards.push(request);
+        if (card.every_coffee_with_every_pot === true) expanded.push(request);
       } else {
         const wording = message(
           'repeatedCard',
@@ -146,11 +152,11 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
     }
   });
   const coffeeIds = [...new Set(cards.map((card) => card.coffeeId))];
-  return { cards, coffeeIds, issues };
+  return { cards, expanded, coffeeIds, issues };
 }
 
 function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: KnownIds): Expanded {
-  const issues = keysNotFor(source, path, set, ['cards']);
+  const issues = keysNotFor(source, path, set, ['cards', 'include_refused']);
   if (set.coffees === undefined) {
     const example = '`coffees: [house-blend, …]`';
     issues.push(
@@ -168,7 +174,7 @@ function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: Kn
   const cards = coffeeIds.flatMap((coffeeId) =>
     potIds.flatMap((potId) => stoveIds.map((stoveId) => ({ potId, coffeeId, stoveId }))),
   );
-  return { cards, coffeeIds, issues };
+  return { cards, expanded: [], coffeeIds, issues };
 }
 
 /** The kettle presets in K, ascending, from °C or °F (the schema allows one of the two). */
@@ -205,6 +211,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
       layout: set.layout,
       language: set.language ?? data.language ?? DEFAULT_LANGUAGE,
       cards: expanded.cards,
+      leaveOutIfRefused: set.include_refused === true ? [] : expanded.expanded,
       coffeeIds: expanded.coffeeIds,
       source: refAt(source, path),
     };

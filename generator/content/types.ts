@@ -122,6 +122,11 @@ export interface CardSet {
    */
   readonly language: string;
   readonly cards: readonly CardRequest[];
+  /**
+   * Station sets: the cards of `cards` that came from `every_coffee_with_every_pot` and are
+   * left out of the set when their plan is refused (empty with `include_refused: true`).
+   */
+  readonly leaveOutIfRefused: readonly CardRequest[];
   /** For insert sets: the coffees, one insert each. */
   readonly coffeeIds: readonly string[];
   readonly source: SourceRef;

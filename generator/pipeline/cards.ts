@@ -10,6 +10,7 @@
  */
 import type { CardRequest, Catalogue } from '../content/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
+import type { RefusalCode } from '../planning/types.ts';
 import { insertPaths, insertSlug, setPaths, stationPaths, stationSlug } from '../render/paths.ts';
 
 export interface StationCardJob {
@@ -35,6 +36,10 @@ export interface SetJob {
   readonly language: string;
   /** Station sets: slugs of their station cards; insert sets: slugs of their inserts. */
   readonly cardSlugs: readonly string[];
+  /** Station sets: slugs left out when their plan is refused (CardSet.leaveOutIfRefused). */
+  readonly optionalSlugs?: readonly string[];
+  /** Why each card left out was refused, one code per card (leave-out.ts; empty before). */
+  readonly leftOut?: readonly RefusalCode[];
 }
 
 export interface CardJobs {
@@ -74,6 +79,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
         layout: 'station',
         language: set.language,
         cardSlugs: [...new Set(slugs)],
+        optionalSlugs: set.leaveOutIfRefused.map(stationSlug),
       });
       continue;
     }

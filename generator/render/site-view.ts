@@ -4,7 +4,8 @@
  * card-view.ts, every string is final: templates only place them.
  */
 import type { Catalogue } from '../content/types.ts';
-import type { AcceptedPlan } from '../planning/types.ts';
+import type { AcceptedPlan, RefusalCode } from '../planning/types.ts';
+import { printWords } from '../words/print.ts';
 import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
 import { langTag } from '../words/catalogue.ts';
 import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
@@ -56,6 +57,8 @@ export interface SetView {
   readonly layoutLabel: string;
   readonly paths: CardPaths;
   readonly cards: readonly CardLink[];
+  /** How many cards were left out for getting no recipe, and why; null when none. */
+  readonly leftOut: string | null;
 }
 
 export interface IndexView {
@@ -131,6 +134,8 @@ export interface SetOutline {
   /** Language code of the set (content CardSet.language). */
   readonly language: string;
   readonly cardSlugs: readonly string[];
+  /** Refusal codes of the cards left out of the set (pipeline/leave-out.ts), one each. */
+  readonly leftOut?: readonly RefusalCode[];
 }
 
 const FACE_CSS: Record<FontFace, { weight: string; style: string }> = {
@@ -217,6 +222,7 @@ export function setViews(
       if (!card) throw new Error(`site view: no insert card "${slug}"`);
       return insertLink(card);
     }),
+    leftOut: printWords.leftOut(set.leftOut ?? []),
   }));
 }
 
