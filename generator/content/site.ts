@@ -21,7 +21,7 @@ interface CardYaml {
 interface SetYaml {
   readonly id: string;
   readonly title: string;
-  readonly layout: 'station' | 'insert';
+  readonly layout: 'station' | 'insert' | 'binder';
   readonly language?: string;
   readonly include_refused?: boolean;
   readonly cards?: readonly CardYaml[];
@@ -68,7 +68,7 @@ function keysNotFor(
   set: SetYaml,
   keys: readonly (keyof SetYaml)[],
 ): ContentIssue[] {
-  const belongsTo = set.layout === 'station' ? 'insert' : 'station';
+  const belongsTo = set.layout === 'insert' ? 'station' : 'insert';
   return keys
     .filter((key) => set[key] !== undefined)
     .map((key) =>
@@ -99,7 +99,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
       coffeeIds: [],
       issues: [
         ...issues,
-        issueAt(source, path, 'layout', message('missingForLayout', 'cards', 'station', example)),
+        issueAt(source, path, 'layout', message('missingForLayout', 'cards', set.layout, example)),
       ],
     };
   }
@@ -198,7 +198,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
       issues.push(
         issueAt(source, [...path, 'id'], 'repeated', message('repeatedSetId', set.id, firstLine)),
       );
-    const expanded = (set.layout === 'station' ? stationCards : insertCards)(
+    const expanded = (set.layout === 'insert' ? insertCards : stationCards)(
       source,
       path,
       set,
@@ -208,7 +208,9 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
     return {
       id: set.id,
       title: set.title,
-      layout: set.layout,
+      // A binder is a station set with the training front matter in its PDF.
+      layout: set.layout === 'insert' ? 'insert' : 'station',
+      binder: set.layout === 'binder',
       language: set.language ?? data.language ?? DEFAULT_LANGUAGE,
       cards: expanded.cards,
       leaveOutIfRefused: set.include_refused === true ? [] : expanded.expanded,

@@ -116,6 +116,8 @@ export interface CardSet {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** `layout: binder`: a station set whose PDF opens with the training front matter. */
+  readonly binder: boolean;
   /**
    * Language code of the set's cards, pages and PDFs (`language:` of the set, else of the
    * site, else en); one of the schema's enum, which matches generator/words/ catalogues.

@@ -32,6 +32,8 @@ export interface SetJob {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** `layout: binder` (CardSet.binder): the PDF opens with the training front matter. */
+  readonly binder?: boolean;
   /** Language code of the set's page and PDF (CardSet.language). */
   readonly language: string;
   /** Station sets: slugs of their station cards; insert sets: slugs of their inserts. */
@@ -77,6 +79,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
         id: set.id,
         title: set.title,
         layout: 'station',
+        binder: set.binder,
         language: set.language,
         cardSlugs: [...new Set(slugs)],
         optionalSlugs: set.leaveOutIfRefused.map(stationSlug),

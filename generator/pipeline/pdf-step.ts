@@ -1,7 +1,7 @@
 /**
  * The site's PDFs as a build step, incremental and on the worker pool: the same files and
  * bytes as the PDF module's own step (render/pdf/site-pdfs.ts, writeSitePdfs), made with
- * the same pure cores (cardPdf, setPdf, setCards, isTrainingSet), but
+ * the same pure cores (cardPdf, setPdf, setCards, isBinderSet), but
  *
  *   - each PDF is keyed by the hashes of the views it is drawn from (render-cache.ts); a
  *     key already in the cache is copied from there instead of made;
@@ -20,7 +20,7 @@ import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cardPdf, type CardView } from '../render/pdf/card.ts';
 import { setCard, setPdf, type FrontMatter, type SetPdfInput } from '../render/pdf/binder.ts';
-import { isTrainingSet, setCards } from '../render/pdf/site-pdfs.ts';
+import { isBinderSet, setCards } from '../render/pdf/site-pdfs.ts';
 import type { BuildContext, ViewText } from './build-site.ts';
 import { renderCodeVersion } from './code-version.ts';
 import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
@@ -73,7 +73,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     const input: Omit<SetPdfInput, 'cardPdfs'> = {
       set,
       cards: members.map(setCard),
-      frontMatter: isTrainingSet(set) ? frontMatter : null,
+      frontMatter: isBinderSet(set) ? frontMatter : null,
       page: data.site.page,
       author,
       builtOn: data.site.builtOn,

@@ -51,6 +51,8 @@ export interface SetView {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** A training binder (`layout: binder`): its PDF opens with the front matter. */
+  readonly binder: boolean;
   /** Document language tag of the set's page and PDF. */
   readonly lang: string;
   /** "Station cards" or "Bag inserts". */
@@ -131,6 +133,7 @@ export interface SetOutline {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  readonly binder?: boolean;
   /** Language code of the set (content CardSet.language). */
   readonly language: string;
   readonly cardSlugs: readonly string[];
@@ -209,8 +212,13 @@ export function setViews(
     id: set.id,
     title: set.title,
     layout: set.layout,
+    binder: set.binder === true,
     lang: langTag(set.language),
-    layoutLabel: set.layout === 'station' ? cardWords.index.station : cardWords.index.insert,
+    layoutLabel: set.binder
+      ? printWords.binderLabel
+      : set.layout === 'station'
+        ? cardWords.index.station
+        : cardWords.index.insert,
     paths: setPaths(set.id, baseUrl),
     cards: set.cardSlugs.map((slug) => {
       if (set.layout === 'station') {

@@ -13,6 +13,8 @@ const plural = (n: number, one: string, many: string): string =>
   n === 1 ? `one ${one}` : `${n} ${many}`;
 
 export const printWords = {
+  /** A binder set's kind, on the index and its page (beside "Station cards", "Bag inserts"). */
+  binderLabel: 'Training binder',
   /**
    * A set page's note on the pot × coffee combinations it left out because none of them
    * gets a recipe, with how many of each reason ("2 × base does not work on induction").

@@ -175,3 +175,19 @@ sets:
     ).toContain('include_refused');
   });
 });
+
+describe('layout: binder, not the set id, makes a binder', () => {
+  it('a station set whose id says training is a plain station set; layout: binder is a binder', async () => {
+    const station = siteYaml('').replace('id: hob', 'id: hob-training');
+    const plain = await build('training-id', station);
+    expect(plain.result.data.sets[0]!.binder).toBe(false);
+    const binder = siteYaml('').replace('layout: station', 'layout: binder');
+    const made = await build('binder', binder);
+    const set = made.result.data.sets[0]!;
+    expect(set.binder).toBe(true);
+    expect(set.layoutLabel).toBe('Training binder');
+    // A binder is a station set: refused combinations are left out the same way.
+    expect(set.cards).toHaveLength(1);
+    expect(set.leftOut).not.toBeNull();
+  });
+});

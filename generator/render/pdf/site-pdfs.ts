@@ -4,9 +4,9 @@
  *
  *   cards/<pot>--<coffee>--<stove>.pdf   each station card, beside its index.html folder
  *   inserts/<slug>.pdf                   each bag insert
- *   sets/<set>.pdf                       each set's cards in order; a training set (its id
- *                                        contains "training") opens with the binder's
- *                                        contents, method and troubleshooting pages
+ *   sets/<set>.pdf                       each set's cards in order; a set with
+ *                                        `layout: binder` opens with the binder's front
+ *                                        matter (binder.ts)
  *
  * The cards first: a set is assembled from its cards' PDFs (binder.ts), not drawn again.
  *
@@ -38,9 +38,9 @@ export interface PdfReport {
   readonly ms: number;
 }
 
-/** A set gets the binder's front matter when its id says it is for training. */
-export function isTrainingSet(set: Pick<SetView, 'id'>): boolean {
-  return /training/i.test(set.id);
+/** A set gets the binder's front matter when it says `layout: binder`. */
+export function isBinderSet(set: Pick<SetView, 'binder'>): boolean {
+  return set.binder;
 }
 
 /** The set's cards as views, in the set's order. */
@@ -97,7 +97,7 @@ export async function writeSitePdfs(
       set,
       cards: members,
       cardPdfs: members.map((card) => cardPdfs.get(card.paths.pdfFile)!),
-      frontMatter: isTrainingSet(set) ? frontMatter : null,
+      frontMatter: isBinderSet(set) ? frontMatter : null,
       page: data.site.page,
       author,
       builtOn: data.site.builtOn,
