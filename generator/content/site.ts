@@ -24,6 +24,7 @@ interface SetYaml {
   readonly layout: 'station' | 'insert' | 'binder';
   readonly language?: string;
   readonly include_refused?: boolean;
+  readonly paper?: PaperSize;
   readonly cards?: readonly CardYaml[];
   readonly coffees?: readonly string[];
   readonly pots?: readonly string[];
@@ -211,6 +212,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
       // A binder is a station set with the training front matter in its PDF.
       layout: set.layout === 'insert' ? 'insert' : 'station',
       binder: set.layout === 'binder',
+      paper: set.paper ?? data.paper,
       language: set.language ?? data.language ?? DEFAULT_LANGUAGE,
       cards: expanded.cards,
       leaveOutIfRefused: set.include_refused === true ? [] : expanded.expanded,

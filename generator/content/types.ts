@@ -104,7 +104,7 @@ export interface LogEntry extends EntryBase {
 }
 
 export type UnitSystem = 'metric' | 'us';
-export type PaperSize = 'A4' | 'A5' | 'A6' | 'letter' | 'half-letter';
+export type PaperSize = 'A4' | 'A5' | 'A6' | 'letter' | 'half-letter' | '4x6in';
 
 export interface CardRequest {
   readonly potId: string;
@@ -118,6 +118,8 @@ export interface CardSet {
   readonly layout: 'station' | 'insert';
   /** `layout: binder`: a station set whose PDF opens with the training front matter. */
   readonly binder: boolean;
+  /** Paper of the set's PDF: the set's `paper:`, else the site's. */
+  readonly paper: PaperSize;
   /**
    * Language code of the set's cards, pages and PDFs (`language:` of the set, else of the
    * site, else en); one of the schema's enum, which matches generator/words/ catalogues.

@@ -8,7 +8,7 @@
  * page, so an insert's rows can point to their full cards. Each distinct request is
  * planned once.
  */
-import type { CardRequest, Catalogue } from '../content/types.ts';
+import type { CardRequest, Catalogue, PaperSize } from '../content/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
 import type { RefusalCode } from '../planning/types.ts';
 import { insertPaths, insertSlug, setPaths, stationPaths, stationSlug } from '../render/paths.ts';
@@ -34,6 +34,8 @@ export interface SetJob {
   readonly layout: 'station' | 'insert';
   /** `layout: binder` (CardSet.binder): the PDF opens with the training front matter. */
   readonly binder?: boolean;
+  /** Paper of the set's PDF (CardSet.paper); default the site's. */
+  readonly paper?: PaperSize;
   /** Language code of the set's page and PDF (CardSet.language). */
   readonly language: string;
   /** Station sets: slugs of their station cards; insert sets: slugs of their inserts. */
@@ -80,6 +82,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
         title: set.title,
         layout: 'station',
         binder: set.binder,
+        paper: set.paper,
         language: set.language,
         cardSlugs: [...new Set(slugs)],
         optionalSlugs: set.leaveOutIfRefused.map(stationSlug),
@@ -102,6 +105,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
       id: set.id,
       title: set.title,
       layout: 'insert',
+      paper: set.paper,
       language: set.language,
       cardSlugs: slugs,
     });

@@ -16,7 +16,7 @@
  *   then sets  ─ key ─▶ cached? ── yes ─▶ copy
  *                                └─ no ──▶ setPdf of the site's card PDFs (pool) ─▶ site, cache
  */
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cardPdf, type CardView } from '../render/pdf/card.ts';
 import { setCard, setPdf, type FrontMatter, type SetPdfInput } from '../render/pdf/binder.ts';
@@ -26,6 +26,9 @@ import { renderCodeVersion } from './code-version.ts';
 import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
 import { cardPdfKey, RenderCache, setPdfKey, sha256 } from './render-cache.ts';
 import { toTaggedJson } from './plan-cache.ts';
+
+/** Scratch folder of the site for the cards of sets on their own paper (removed after). */
+const SET_CARDS_DIR = '.set-paper-cards';
 
 interface PdfJob {
   readonly file: string;
@@ -41,8 +44,11 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   // Of the environment, a PDF reads only the date setting (render/pdf/document.ts pdfDate).
   const epoch = context.env.SOURCE_DATE_EPOCH;
   const env: NodeJS.ProcessEnv = epoch === undefined ? {} : { SOURCE_DATE_EPOCH: epoch };
+  const sitePaper = data.site.page.paper;
   const textOf = (card: CardView): ViewText => {
-    const known = context.viewTexts.get(card.paths.pdfFile);
+    // A card re-laid for a set's own paper is another view than the site's card.
+    const known =
+      card.page.paper === sitePaper ? context.viewTexts.get(card.paths.pdfFile) : undefined;
     if (known) return known;
     const text = toTaggedJson(card);
     return { text, hash: sha256(text) };
@@ -50,8 +56,8 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const hashOf = (card: CardView) => textOf(card).hash;
 
   const cards: CardView[] = [...data.stationCards, ...data.insertCards];
-  const cardJobs: PdfJob[] = cards.map((view) => ({
-    file: view.paths.pdfFile,
+  const cardJob = (view: CardView, file: string): PdfJob => ({
+    file,
     key: cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion }),
     async render() {
       if (pool) {
@@ -66,7 +72,13 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       const pdf = await cardPdf(view, { author, env });
       return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started };
     },
-  }));
+  });
+  const cardJobs: PdfJob[] = cards.map((view) => cardJob(view, view.paths.pdfFile));
+  // Cards of a set on other paper than the site's: drawn at that paper into a scratch
+  // folder of the site (removed once the sets are made), once per set paper and card.
+  const setPaperJobs = new Map<string, PdfJob>();
+  const setPaperFile = (card: CardView) =>
+    path.join(SET_CARDS_DIR, card.page.paper, card.paths.pdfFile);
   const frontMatter: FrontMatter = { method: data.method, troubleshooting: data.troubleshooting };
   const setJobs: PdfJob[] = data.sets.map((set) => {
     const members = setCards(set, data);
@@ -74,12 +86,17 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       set,
       cards: members.map(setCard),
       frontMatter: isBinderSet(set) ? frontMatter : null,
-      page: data.site.page,
+      page: set.page,
       author,
       builtOn: data.site.builtOn,
       env,
     };
-    const cardFiles = members.map((card) => path.join(siteDir, card.paths.pdfFile));
+    const cardFiles = members.map((card) => {
+      if (card.page.paper === sitePaper) return path.join(siteDir, card.paths.pdfFile);
+      const file = setPaperFile(card);
+      if (!setPaperJobs.has(file)) setPaperJobs.set(file, cardJob(card, file));
+      return path.join(siteDir, file);
+    });
     return {
       file: set.paths.pdfFile,
       key: setPdfKey({
@@ -105,11 +122,13 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     };
   });
 
-  const total = cardJobs.length + setJobs.length;
+  const total = cardJobs.length + setPaperJobs.size + setJobs.length;
   let done = 0;
   context.onProgress({ phase: 'steps', done, total });
   const folders = new Set(
-    [...cardJobs, ...setJobs].map((job) => path.dirname(path.join(siteDir, job.file))),
+    [...cardJobs, ...setPaperJobs.values(), ...setJobs].map((job) =>
+      path.dirname(path.join(siteDir, job.file)),
+    ),
   );
   await Promise.all([...folders].map((folder) => mkdir(folder, { recursive: true })));
 
@@ -146,5 +165,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     else for (const job of misses) await make(job);
   };
   await run(cardJobs);
+  await run([...setPaperJobs.values()]);
   await run(setJobs);
+  await rm(path.join(siteDir, SET_CARDS_DIR), { recursive: true, force: true });
 }

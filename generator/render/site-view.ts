@@ -3,7 +3,7 @@
  * one global object the templates read (`stovecard`), built from the card views. Like
  * card-view.ts, every string is final: templates only place them.
  */
-import type { Catalogue } from '../content/types.ts';
+import type { Catalogue, PaperSize } from '../content/types.ts';
 import type { AcceptedPlan, RefusalCode } from '../planning/types.ts';
 import { printWords } from '../words/print.ts';
 import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
@@ -53,6 +53,8 @@ export interface SetView {
   readonly layout: 'station' | 'insert';
   /** A training binder (`layout: binder`): its PDF opens with the front matter. */
   readonly binder: boolean;
+  /** Paper of the set's PDF (its cards and text pages): the set's, else the site's. */
+  readonly page: PageSetup;
   /** Document language tag of the set's page and PDF. */
   readonly lang: string;
   /** "Station cards" or "Bag inserts". */
@@ -134,6 +136,8 @@ export interface SetOutline {
   readonly title: string;
   readonly layout: 'station' | 'insert';
   readonly binder?: boolean;
+  /** Paper of the set's PDF; default the site's. */
+  readonly paper?: PaperSize;
   /** Language code of the set (content CardSet.language). */
   readonly language: string;
   readonly cardSlugs: readonly string[];
@@ -206,13 +210,16 @@ export function setViews(
   outlines: readonly SetOutline[],
   stations: ReadonlyMap<string, StationCardView>,
   inserts: ReadonlyMap<string, InsertCardView>,
-  baseUrl?: string,
+  baseUrl: string | undefined,
+  /** The site's page: its units, and the paper of a set that names none. */
+  sitePage: PageSetup,
 ): SetView[] {
   return outlines.map((set) => ({
     id: set.id,
     title: set.title,
     layout: set.layout,
     binder: set.binder === true,
+    page: pageSetup(sitePage.units, set.paper ?? sitePage.paper),
     lang: langTag(set.language),
     layoutLabel: set.binder
       ? printWords.binderLabel

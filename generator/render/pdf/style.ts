@@ -20,6 +20,7 @@ export const PAPER_STYLE: Record<PaperSize, { readonly k: number; readonly margi
   A5: { k: 1, marginMm: 7 },
   'half-letter': { k: 0.95, marginMm: 7 },
   A6: { k: 0.7, marginMm: 4.5 },
+  '4x6in': { k: 0.7, marginMm: 4.5 },
 };
 
 /** Font steps tried in order: the stylesheet's sizes first, then smaller. */
@@ -127,7 +128,7 @@ export function cardStyle(
     step,
     bodyColumns: arrangement.bodyColumns,
     listColumns: arrangement.listColumns,
-    compact: paper === 'A6',
+    compact: paper === 'A6' || paper === '4x6in',
     marginPt: cardMarginPt(paper),
     gap: 1.6 * MM * s,
     gutter: 3 * MM * s,
