@@ -7,6 +7,8 @@ import { ContentErrors } from '../content/index.ts';
 import { formatContentErrors } from '../words/content.ts';
 import { buildWords } from '../words/card.ts';
 import { faultWords } from '../words/build-faults.ts';
+import { printWords } from '../words/print.ts';
+import { PDF_TEXT_FLOOR_PT } from '../render/pdf/style.ts';
 import { UsageError } from './errors.ts';
 import { checkOutFolder } from './out-folder.ts';
 import { parseOptions } from './options.ts';
@@ -37,7 +39,14 @@ export function warningLines(result: BuildResult): string {
 
 /** What the build did besides the site: leftovers removed, cache files made again, a previous site kept. */
 export function noteLines(result: BuildResult): string {
-  const notes: string[] = [];
+  const byBlocks = new Map<string, string[]>();
+  for (const d of result.stats.dropped ?? []) {
+    const key = d.blocks.join('\n');
+    byBlocks.set(key, [...(byBlocks.get(key) ?? []), d.pdf]);
+  }
+  const notes: string[] = [...byBlocks].map(([blocks, pdfs]) =>
+    printWords.dropped(pdfs.sort(), blocks.split('\n'), PDF_TEXT_FLOOR_PT),
+  );
   if ((result.skippedFiles ?? []).length > 0)
     notes.push(faultWords.skippedFiles(result.skippedFiles));
   if (result.sweptLeftovers.length > 0)

@@ -32,8 +32,17 @@ const SET_CARDS_DIR = '.set-paper-cards';
 
 interface PdfJob {
   readonly file: string;
+  /** How the build log names it (the file, or the set and card of a set-paper card). */
+  readonly label: string;
   readonly key: string;
-  render(): Promise<{ bytes: Uint8Array; pages: number; ms: number }>;
+  /** Card PDFs: the optional blocks left out are noted (stats.dropped). */
+  readonly card: boolean;
+  render(): Promise<{
+    bytes: Uint8Array;
+    pages: number;
+    ms: number;
+    dropped?: readonly string[];
+  }>;
 }
 
 export async function sitePdfStep(context: BuildContext): Promise<void> {
@@ -56,8 +65,10 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const hashOf = (card: CardView) => textOf(card).hash;
 
   const cards: CardView[] = [...data.stationCards, ...data.insertCards];
-  const cardJob = (view: CardView, file: string): PdfJob => ({
+  const cardJob = (view: CardView, file: string, label = file): PdfJob => ({
     file,
+    label,
+    card: true,
     key: cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion }),
     async render() {
       if (pool) {
@@ -66,11 +77,12 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
           viewJson: textOf(view).text,
           context: { author, env },
         });
-        return { bytes: result.bytes, pages: 1, ms };
+        return { bytes: result.bytes, pages: 1, ms, dropped: result.dropped };
       }
       const started = performance.now();
       const pdf = await cardPdf(view, { author, env });
-      return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started };
+      const dropped = pdf.fit.dropped ?? [];
+      return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started, dropped };
     },
   });
   const cardJobs: PdfJob[] = cards.map((view) => cardJob(view, view.paths.pdfFile));
@@ -94,11 +106,14 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     const cardFiles = members.map((card) => {
       if (card.page.paper === sitePaper) return path.join(siteDir, card.paths.pdfFile);
       const file = setPaperFile(card);
-      if (!setPaperJobs.has(file)) setPaperJobs.set(file, cardJob(card, file));
+      const label = `${set.paths.pdfFile} (${card.paths.pdfFile} on ${card.page.paper})`;
+      if (!setPaperJobs.has(file)) setPaperJobs.set(file, cardJob(card, file, label));
       return path.join(siteDir, file);
     });
     return {
       file: set.paths.pdfFile,
+      label: set.paths.pdfFile,
+      card: false,
       key: setPdfKey({
         set,
         cardHashes: members.map(hashOf),
@@ -138,6 +153,11 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     const copied = await mapConcurrent(jobs, IO_LIMIT, async (job) => {
       const hit = await cache.pdfs.copyTo(job.key, path.join(siteDir, job.file));
       if (hit) {
+        if (job.card) {
+          const note = await cache.pdfNotes.getText(job.key);
+          const blocks = note === null ? [] : (JSON.parse(note) as string[]);
+          if (blocks.length > 0) stats.dropped.push({ pdf: job.label, blocks });
+        }
         stats.pdfs.reused += 1;
         context.onProgress({ phase: 'steps', done: ++done, total });
       }
@@ -155,6 +175,11 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       const { bytes, pages, ms } = made;
       await writeFile(path.join(siteDir, job.file), bytes);
       await cache.pdfs.put(job.key, bytes);
+      if (job.card) {
+        const blocks = made.dropped ?? [];
+        await cache.pdfNotes.put(job.key, JSON.stringify(blocks));
+        if (blocks.length > 0) stats.dropped.push({ pdf: job.label, blocks });
+      }
       stats.pdfs.made += 1;
       stats.pdfs.pdfPages += pages;
       stats.pdfs.ms += ms;

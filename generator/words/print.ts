@@ -12,7 +12,30 @@ import { cardWords } from './card.ts';
 const plural = (n: number, one: string, many: string): string =>
   n === 1 ? `one ${one}` : `${n} ${many}`;
 
+/** The optional blocks of a card (render/pdf/card.ts OPTIONAL_ORDER), as the log names them. */
+const OPTIONAL_NAMES: Record<string, string> = {
+  chart: 'the chart',
+  'cross-section': 'the cross-section drawing',
+  'long-cautions': 'the long form of the cautions (the short form printed)',
+  expect: 'what to expect',
+  'qr-code': 'the QR code',
+  pictograms: 'the step pictograms',
+  'tasting-notes': 'the tasting notes',
+  'web-line': 'the web address line',
+};
+
 export const printWords = {
+  /**
+   * A build-log line: the card PDFs that left out the same blocks to keep their text at
+   * the floor (the first few named, the rest counted).
+   */
+  dropped: (pdfs: readonly string[], blocks: readonly string[], floorPt: number): string => {
+    const shownPdfs = pdfs.slice(0, 3).join(', ');
+    const rest = pdfs.length > 3 ? ` and ${pdfs.length - 3} more` : '';
+    const what = blocks.map((b) => OPTIONAL_NAMES[b] ?? b).join(', ');
+    const count = pdfs.length === 1 ? 'one card PDF leaves' : `${pdfs.length} card PDFs leave`;
+    return `note: ${count} out ${what} to keep every text at ${floorPt} pt or more on its paper: ${shownPdfs}${rest}`;
+  },
   /** A binder set's kind, on the index and its page (beside "Station cards", "Bag inserts"). */
   binderLabel: 'Training binder',
   /**
