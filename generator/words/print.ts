@@ -20,6 +20,7 @@ const OPTIONAL_NAMES: Record<string, string> = {
   expect: 'what to expect',
   'qr-code': 'the QR code',
   pictograms: 'the step pictograms',
+  'pot-names': 'the pot names under the cup sizes',
   'tasting-notes': 'the tasting notes',
   'web-line': 'the web address line',
 };

@@ -159,6 +159,31 @@ function blankTable(head: readonly string[], rows: number, st: TextPageStyle): B
   };
 }
 
+/**
+ * A blank table, split into two or three tables under one another (each led by the first
+ * column) when its columns do not fit the width with their heads at the floor size.
+ */
+function blankTables(head: readonly string[], rows: number, st: TextPageStyle): Block {
+  const [first, ...rest] = head;
+  return (pen, x, y, w) => {
+    const measure = pen.measuring();
+    for (let parts = 1; parts <= 3; parts++) {
+      const size = Math.ceil(rest.length / parts);
+      const tables = Array.from({ length: parts }, (_, i) =>
+        blankTable([first!, ...rest.slice(i * size, (i + 1) * size)], rows, st),
+      );
+      if (tables.some((t) => !Number.isFinite(t(measure, x, y, w)))) continue;
+      let h = 0;
+      tables.forEach((table, i) => {
+        if (i > 0) h += st.gap;
+        h += table(pen, x, y + h, w);
+      });
+      return h;
+    }
+    return Number.POSITIVE_INFINITY;
+  };
+}
+
 /** Labels with a line to write on, two to a row. */
 function fillLines(labels: readonly string[], st: TextPageStyle): Block {
   return (pen, x, y, w) => {
@@ -193,7 +218,11 @@ export function logSheetItems(st: TextPageStyle, fields = logSheetFields()): Flo
     { block: para('P', words.intro, st.body) },
     { block: fillLines([...fields.header.map(logFieldLabel), words.filledBy, words.date], st) },
     {
-      block: blankTable([words.brewColumn, ...fields.brew.map(logFieldLabel)], words.brewRows, st),
+      block: blankTables(
+        [words.brewColumn, ...fields.brew.map(logFieldLabel)],
+        words.brewRows,
+        st,
+      ),
     },
   ];
   for (const key of fields.readings) {
@@ -204,7 +233,7 @@ export function logSheetItems(st: TextPageStyle, fields = logSheetFields()): Flo
       ...Array.from({ length: words.readingPairs }, () => pair).flat(),
     ];
     items.push({ block: para('P', words.readingsIntro(label), st.bodyStrong), keepWithNext: true });
-    items.push({ block: blankTable(head, words.brewRows, st) });
+    items.push({ block: blankTables(head, words.brewRows, st) });
   }
   return items;
 }

@@ -44,7 +44,7 @@ export function pageBox(view: Pick<CardView, 'page'>): PageBox {
  */
 export const OPTIONAL_ORDER = {
   station: ['chart', 'long-cautions', 'cross-section', 'expect', 'qr-code'],
-  insert: ['pictograms', 'tasting-notes', 'web-line', 'long-cautions', 'qr-code'],
+  insert: ['pictograms', 'web-line', 'pot-names', 'long-cautions', 'tasting-notes', 'qr-code'],
 } as const;
 
 export type StationOptional = (typeof OPTIONAL_ORDER.station)[number];

@@ -104,7 +104,7 @@ function columnWidths(
   return pref.map((p) => p + extra);
 }
 
-function tableBlock(view: InsertCardView, st: CardStyle): Block {
+function tableBlock(view: InsertCardView, st: CardStyle, potNames = true): Block {
   const f: TableFonts = {
     head: st.tableHead,
     cell: st.table,
@@ -113,7 +113,7 @@ function tableBlock(view: InsertCardView, st: CardStyle): Block {
   };
   const pad = st.padding;
   const padY = st.padding * 0.7;
-  const showPot = !st.compact;
+  const showPot = !st.compact && potNames;
   return (pen, x, y, w) => {
     const widths = columnWidths(pen, view, f, pad, w, showPot);
     if (!widths) return Number.POSITIVE_INFINITY;
@@ -249,8 +249,8 @@ function unsuitableBlock(view: InsertCardView, st: CardStyle): Block {
     });
 }
 
-function bodyBlock(view: InsertCardView, st: CardStyle): Block {
-  const table = tableBlock(view, st);
+function bodyBlock(view: InsertCardView, st: CardStyle, potNames = true): Block {
+  const table = tableBlock(view, st, potNames);
   const steps = stepsBlock(view, st);
   const unsuitable = unsuitableBlock(view, st);
   return (pen, x, y, w) =>
@@ -289,7 +289,7 @@ export function insertFrame(
       dropped.has('tasting-notes') ? null : view.notes,
       st,
     ),
-    body: [bodyBlock(shown, st), warningsBlock(view.warnings, st)],
+    body: [bodyBlock(shown, st, !dropped.has('pot-names')), warningsBlock(view.warnings, st)],
     bottom: [
       cautionsBlock(dropped.has('long-cautions') ? cautions('compact') : view.cautions, st),
     ],
