@@ -26,8 +26,30 @@ export function summaryLine(result: BuildResult): string {
   });
 }
 
-/** The build log's copy of every warning the station cards print, one line each. */
+/**
+ * The build log's copy of every warning the station cards print, one line each, then one
+ * line per set of blocks card PDFs left out to keep their text at the floor.
+ */
 export function warningLines(result: BuildResult): string {
+  return cardWarningLines(result) + droppedLines(result);
+}
+
+/** What card PDFs left out to fit at the floor (stats.dropped), grouped by what they left out. */
+export function droppedLines(result: BuildResult): string {
+  const byBlocks = new Map<string, string[]>();
+  for (const d of result.stats?.dropped ?? []) {
+    const key = d.blocks.join('\n');
+    byBlocks.set(key, [...(byBlocks.get(key) ?? []), d.pdf]);
+  }
+  return [...byBlocks]
+    .map(
+      ([blocks, pdfs]) =>
+        `${printWords.dropped(pdfs.sort(), blocks.split('\n'), PDF_TEXT_FLOOR_PT)}\n`,
+    )
+    .join('');
+}
+
+function cardWarningLines(result: BuildResult): string {
   return result.data.stationCards
     .flatMap((card) =>
       (card.warnings?.items ?? []).map(
@@ -39,14 +61,7 @@ export function warningLines(result: BuildResult): string {
 
 /** What the build did besides the site: leftovers removed, cache files made again, a previous site kept. */
 export function noteLines(result: BuildResult): string {
-  const byBlocks = new Map<string, string[]>();
-  for (const d of result.stats.dropped ?? []) {
-    const key = d.blocks.join('\n');
-    byBlocks.set(key, [...(byBlocks.get(key) ?? []), d.pdf]);
-  }
-  const notes: string[] = [...byBlocks].map(([blocks, pdfs]) =>
-    printWords.dropped(pdfs.sort(), blocks.split('\n'), PDF_TEXT_FLOOR_PT),
-  );
+  const notes: string[] = [];
   if ((result.skippedFiles ?? []).length > 0)
     notes.push(faultWords.skippedFiles(result.skippedFiles));
   if (result.sweptLeftovers.length > 0)

@@ -130,7 +130,11 @@ export const binderWords = {
     intro:
       'One sheet per pot, coffee and stove. Time from the moment the pot goes on the heat. Leave blank what you did not measure; each brew needs at least one of the times, the yield or the readings.',
     brewColumn: 'Brew',
-    readingsIntro: (label: string): string => `${label}: a time and a reading per pair, in time order.`,
+    readingsIntro: (label: string): string =>
+      `${label}: a time and a reading per pair, in time order.`,
+    /** Under the sheet of a site in US units: the log files take metric values. */
+    usNote:
+      'The log files take metric values: convert these readings when you type them in (content/README.md, brew logs).',
     time: 'Time, s',
     brewRows: 6,
     readingPairs: 4,
@@ -150,6 +154,23 @@ export const binderWords = {
       yield_ml: 'Coffee out, mL',
       cup_g: 'Cup on the scale, g',
       water_c: 'Water in the base, °C',
+    } as Record<string, string>,
+    /** The same labels for a site in US units (convert when typing into the log). */
+    logFieldsUs: {
+      pot: 'Pot',
+      coffee: 'Coffee',
+      stove: 'Stove',
+      altitude_m: 'Altitude, ft',
+      level: 'Setting',
+      fill_ml: 'Water in, fl oz',
+      start_c: 'Water at sealing, °F',
+      room_c: 'Room, °F',
+      first_coffee_s: 'First coffee, s',
+      sputter_s: 'Gurgle, s',
+      off_heat_s: 'Off heat, s',
+      yield_ml: 'Coffee out, fl oz',
+      cup_g: 'Cup on the scale, oz',
+      water_c: 'Water in the base, °F',
     } as Record<string, string>,
     /** The value column of a readings pair ("g", "°C"): the label's unit. */
     readingUnit: (label: string): string => label.split(', ').pop() ?? label,

@@ -35,7 +35,7 @@ export const printWords = {
     const rest = pdfs.length > 3 ? ` and ${pdfs.length - 3} more` : '';
     const what = blocks.map((b) => OPTIONAL_NAMES[b] ?? b).join(', ');
     const count = pdfs.length === 1 ? 'one card PDF leaves' : `${pdfs.length} card PDFs leave`;
-    return `note: ${count} out ${what} to keep every text at ${floorPt} pt or more on its paper: ${shownPdfs}${rest}`;
+    return `warning: ${count} out ${what} to keep every text at ${floorPt} pt or more on its paper: ${shownPdfs}${rest}`;
   },
   /** A binder set's kind, on the index and its page (beside "Station cards", "Bag inserts"). */
   binderLabel: 'Training binder',

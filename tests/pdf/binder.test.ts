@@ -127,6 +127,7 @@ describe('setPdf(training set)', () => {
     expect([...fields.header, ...fields.brew, ...fields.readings].sort()).toEqual([...keys].sort());
     // Every label the words have is a field of the schema (none left from an older log).
     expect(Object.keys(binderWords.logSheet.logFields).sort()).toEqual([...keys].sort());
+    expect(Object.keys(binderWords.logSheet.logFieldsUs).sort()).toEqual([...keys].sort());
     // The demo's own log uses only fields the sheet has.
     const demoLog = parse(await readFile('content/logs/first-morning.yaml', 'utf8')) as {
       brews: Record<string, unknown>[];
@@ -152,7 +153,7 @@ describe('setPdf(training set)', () => {
     };
     const fields = logSheetFields(schema);
     expect(fields.brew).toEqual(['level', 'new_reading_s']);
-    expect(() => fields.brew.map(logFieldLabel)).toThrow(/new_reading_s/);
+    expect(() => fields.brew.map((key) => logFieldLabel(key))).toThrow(/new_reading_s/);
   });
 
   it('numbers its pages "n / total"', () => {

@@ -19,7 +19,7 @@ import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
 import { sitePdfStep } from '../../generator/pipeline/pdf-step.ts';
 import { OPTIONAL_ORDER } from '../../generator/render/pdf/card.ts';
-import { noteLines } from '../../generator/cli/build.ts';
+import { droppedLines } from '../../generator/cli/build.ts';
 import { BUILD_ENV } from '../browser/demo-builds.ts';
 import { DEMO_CONTENT } from '../hostile/cli-run.ts';
 import { describeWithTools, pdfinfoSizes } from './poppler.ts';
@@ -165,7 +165,7 @@ describeWithTools(
         expect(blocks, pdf).toEqual(order.slice(0, blocks.length));
       }
       expect(dropped.some((d) => d.blocks[0] === 'chart')).toBe(true);
-      const log = noteLines(result);
+      const log = droppedLines(result);
       expect(log).toContain('leave out the chart');
       expect(log).toMatch(/7 pt or more/);
     });

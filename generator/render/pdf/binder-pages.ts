@@ -11,6 +11,7 @@
  * says so.
  */
 import logSchema from '../../content/schemas/log.schema.json' with { type: 'json' };
+import type { UnitSystem } from '../../content/types.ts';
 import { binderWords } from '../../words/binder.ts';
 import type { Block } from './layout.ts';
 import type { FlowItem } from './pages.ts';
@@ -44,8 +45,9 @@ export function logSheetFields(schema: SchemaNode = logSchema as unknown as Sche
 }
 
 /** The sheet's label of a log key; a key without one is a bug the build must not hide. */
-export function logFieldLabel(key: string): string {
-  const label = binderWords.logSheet.logFields[key];
+export function logFieldLabel(key: string, units: UnitSystem = 'metric'): string {
+  const words = binderWords.logSheet;
+  const label = (units === 'us' ? words.logFieldsUs : words.logFields)[key];
   if (label === undefined)
     throw new Error(
       `binder: the brew-log sheet has no label for the log key "${key}" (words/binder.ts)`,
@@ -211,22 +213,27 @@ function fillLines(labels: readonly string[], st: TextPageStyle): Block {
   };
 }
 
-export function logSheetItems(st: TextPageStyle, fields = logSheetFields()): FlowItem[] {
+export function logSheetItems(
+  st: TextPageStyle,
+  units: UnitSystem,
+  fields = logSheetFields(),
+): FlowItem[] {
   const words = binderWords.logSheet;
+  const labelOf = (key: string) => logFieldLabel(key, units);
   const items: FlowItem[] = [
     title(words.title, st),
     { block: para('P', words.intro, st.body) },
-    { block: fillLines([...fields.header.map(logFieldLabel), words.filledBy, words.date], st) },
+    { block: fillLines([...fields.header.map(labelOf), words.filledBy, words.date], st) },
     {
       block: blankTables(
-        [words.brewColumn, ...fields.brew.map(logFieldLabel)],
+        [words.brewColumn, ...fields.brew.map(labelOf)],
         words.brewRows,
         st,
       ),
     },
   ];
   for (const key of fields.readings) {
-    const label = logFieldLabel(key);
+    const label = labelOf(key);
     const pair = [words.time, words.readingUnit(label)];
     const head = [
       words.brewColumn,
@@ -235,6 +242,7 @@ export function logSheetItems(st: TextPageStyle, fields = logSheetFields()): Flo
     items.push({ block: para('P', words.readingsIntro(label), st.bodyStrong), keepWithNext: true });
     items.push({ block: blankTables(head, words.brewRows, st) });
   }
+  if (units === 'us') items.push({ block: para('P', words.usNote, st.body) });
   return items;
 }
 

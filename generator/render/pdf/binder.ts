@@ -351,7 +351,7 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
       { title: words.cleaning.title, items: cleaningItems(st), pages: 0 },
       { title: words.glossary.title, items: glossaryItems(st), pages: 0 },
       { title: troubleshooting.title, items: troubleshootingItems(troubleshooting, st), pages: 0 },
-      { title: words.logSheet.title, items: logSheetItems(st), pages: 0 },
+      { title: words.logSheet.title, items: logSheetItems(st, input.page.units), pages: 0 },
       { title: words.signOff.title, items: signOffItems(st), pages: 0 },
     ];
     for (const part of parts) part.pages = flowPages(measure, frame, part.items, () => {});
