@@ -17,6 +17,7 @@ export const M_PER_FT = 0.3048;
 export const toCelsius = (k: number): number => k - CELSIUS_OFFSET_K;
 export const toFahrenheit = (k: number): number => (k - CELSIUS_OFFSET_K) * 1.8 + 32;
 export const fromCelsius = (c: number): number => c + CELSIUS_OFFSET_K;
+export const fromFahrenheit = (f: number): number => ((f - 32) * 5) / 9 + CELSIUS_OFFSET_K;
 export const toMl = (m3: number): number => m3 * 1e6;
 export const toFlOz = (m3: number): number => (m3 * 1e6) / ML_PER_US_FL_OZ;
 export const fromMl = (ml: number): number => ml * 1e-6;

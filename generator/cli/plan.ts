@@ -4,12 +4,13 @@ import { planCard } from '../planning/plan.ts';
 import { maxSafeFill } from '../planning/fill.ts';
 import { DEFAULT_ROOM, roomModel } from '../planning/setup.ts';
 import type { CardPlan } from '../planning/types.ts';
-import { refusalText, warningText } from '../render/plan-text.ts';
+import { refusalText } from '../render/plan-text.ts';
+import { planJson } from '../render/plan-json.ts';
 import { cliWords } from '../words/cli.ts';
 import { bindingCauseText } from '../render/plan-text.ts';
 import { faultWords } from '../words/build-faults.ts';
 import { pressure, pressureRough } from '../render/format.ts';
-import { fromCelsius, fromMl, round, toBar, toCelsius, toMl, toMm } from '../units.ts';
+import { fromCelsius, fromMl, toMl } from '../units.ts';
 import { InputError, UsageError } from './errors.ts';
 import { allEntries } from './load-entries.ts';
 import { numberOption, parseOptions, requiredString } from './options.ts';
@@ -92,71 +93,6 @@ function parsePresets(raw: string): number[] {
   });
 }
 
-const times = (r: { lowS: number; midS: number; highS: number }) => ({
-  low: round(r.lowS),
-  mid: round(r.midS),
-  high: round(r.highS),
-});
-
-export function planJson(plan: CardPlan) {
-  const context = {
-    pot: plan.potId,
-    coffee: plan.coffeeId,
-    stove: plan.stoveId,
-    boilingC: round(toCelsius(plan.boilingK), 1),
-    warnings: plan.warnings.map((w) => warningText(w, 'metric')),
-  };
-  if (plan.refused) {
-    const text = refusalText(plan.refused, 'metric');
-    return {
-      ...context,
-      refused: {
-        code: text.code,
-        reason: text.reason,
-        suggestion: text.suggestion,
-        facts: plan.refused.facts,
-      },
-    };
-  }
-  return {
-    ...context,
-    fillMl: round(toMl(plan.fillM3)),
-    fillG: round(plan.fillKg * 1000),
-    fillHeightMm: round(toMm(plan.fillHeightM), 1),
-    belowValveMm: round(toMm(plan.belowValveM), 1),
-    doseG: round(plan.doseKg * 1000, 1),
-    startC: round(toCelsius(plan.startK)),
-    kettlePresetC: plan.kettlePresetK === null ? null : round(toCelsius(plan.kettlePresetK)),
-    level: plan.levelLabel,
-    firstCoffeeS: times(plan.firstCoffeeS),
-    offHeatS: times(plan.offHeatS),
-    yieldMl: round(toMl(plan.yieldM3)),
-    extraction: {
-      meanC: round(toCelsius(plan.extraction.meanK), 1),
-      p10C: round(toCelsius(plan.extraction.p10K), 1),
-      p90C: round(toCelsius(plan.extraction.p90K), 1),
-      inBandShare: round(plan.extraction.inBandShare, 3),
-    },
-    coldStart: {
-      meanC: round(toCelsius(plan.coldStart.meanK), 1),
-      inBandShare: round(plan.coldStart.inBandShare, 3),
-      firstCoffeeS:
-        plan.coldStart.firstCoffeeS === null ? null : round(plan.coldStart.firstCoffeeS),
-    },
-    peakGaugeBar: round(toBar(plan.peakGaugePa), 3),
-    peakGaugeRangeBar: {
-      low: round(toBar(plan.peakGaugeRangePa.lowPa), 3),
-      high: round(toBar(plan.peakGaugeRangePa.highPa), 3),
-    },
-    deliveryS: round(plan.deliveryS),
-    deliveryWindowS: plan.deliveryWindowS.map((s) => round(s)),
-    spread: plan.spread,
-    bindingCause: plan.bindingCause,
-    simulations: plan.simulations,
-    refused: null,
-  };
-}
-
 export function planSummary(plan: CardPlan, valveAssumed: boolean): string {
   const j = planJson(plan);
   const cautions = cliWords.planCautions().join('\n') + '\n';
@@ -191,3 +127,5 @@ export function planSummary(plan: CardPlan, valveAssumed: boolean): string {
 function valveText(pa: number, assumed: boolean): string {
   return (assumed ? pressureRough(pa, 'metric') : pressure(pa, 'metric')).text;
 }
+
+export { planJson };

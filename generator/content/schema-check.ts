@@ -4,11 +4,9 @@
  * ajv error into an issue at the YAML node's line and column, as a message key and facts
  * (./messages.ts; the words are generator/words/content.ts).
  */
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
 import { message, type ContentMessage, type ValueSpec } from './messages.ts';
-import { PROJECT_ROOT } from '../project-root.ts';
+import { readSchema } from './schema-files.ts';
 import { ID_PATTERN, idLike } from './ids.ts';
 import { ContentIssue, type ContentIssueCode, wholeFile } from './issues.ts';
 import { nearest } from './nearest.ts';
@@ -81,9 +79,7 @@ const compiled = new Map<SchemaName, ValidateFunction>();
 function validator(name: SchemaName): ValidateFunction {
   let validate = compiled.get(name);
   if (!validate) {
-    // The sources' folder, also when running compiled from dist/ (tsc copies no JSON).
-    const url = path.join(PROJECT_ROOT, 'generator', 'content', 'schemas', `${name}.schema.json`);
-    validate = ajv.compile(JSON.parse(readFileSync(url, 'utf8')) as object);
+    validate = ajv.compile(readSchema(name));
     compiled.set(name, validate);
   }
   return validate;

@@ -14,12 +14,14 @@
  *
  * A failure anywhere leaves <out> as it was and removes the temporary folder.
  */
+import { mkdir, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { loadCatalogue } from '../content/index.ts';
 import type { Catalogue } from '../content/types.ts';
 import type { SiteData } from '../render/site-view.ts';
-import { insertPaths, stationPaths } from '../render/paths.ts';
+import { insertPaths, plannerPaths, plannerSlug, stationPaths } from '../render/paths.ts';
+import { PLANNER_SCRIPT, plannerScript } from './browser-bundle.ts';
 import { checkQrDensity } from '../render/qr-density.ts';
 import { buildDate } from './build-date.ts';
 import { expandCards, type CardJobs } from './cards.ts';
@@ -151,6 +153,14 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
         checkQrDensity([
           ...jobs.stations.map((job) => stationPaths(job.request, baseUrl).webUrl!),
           ...jobs.inserts.map((job) => insertPaths(job.slug, baseUrl).webUrl!),
+          // An insert's code opens its coffee's page for customers (the longest, other languages).
+          ...jobs.inserts.map(
+            (job) =>
+              plannerPaths(
+                plannerSlug(job.coffeeId, catalogue.site.language, catalogue.site.language),
+                baseUrl,
+              ).webUrl!,
+          ),
         ]);
       return { catalogue, jobs };
     });
@@ -186,6 +196,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
         env,
         stats,
       };
+      if (data.plannerPages.length > 0) {
+        // The customer's pages' script (generator/browser/), bundled once per process.
+        const script = path.join(siteDir, PLANNER_SCRIPT);
+        await mkdir(path.dirname(script), { recursive: true });
+        await writeFile(script, await plannerScript(cacheDir));
+      }
       for (const step of options.extraSteps ?? []) {
         onProgress({ phase: 'steps', done: 0, total: 0 });
         await timedPhase(stats, 'steps', () => step(context));

@@ -46,6 +46,7 @@ export const PAGE_SOURCES: readonly string[] = [
   'templates',
   '.eleventy.js',
   'generator/render/eleventy-setup.ts',
+  'generator/render/card-html.ts', // the card markup the templates call as filters
   'generator/pipeline/eleventy.ts',
   'generator/pipeline/pages.ts',
   'package-lock.json',

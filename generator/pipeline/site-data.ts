@@ -21,6 +21,7 @@ import {
   type StationCardView,
 } from '../render/card-view.ts';
 import { stationSlug } from '../render/paths.ts';
+import { plannerPageView, type PlannerPageView } from '../render/planner-view.ts';
 import {
   indexView,
   methodView,
@@ -258,8 +259,29 @@ export async function renderSite(
     method: methodView(example, catalogue),
     troubleshooting: troubleshootingView(example ? exampleMoves(example.plan, catalogue) : null),
     cautions: cautions('full'),
+    plannerPages: plannerPages(stations, inserts, catalogue, builtOn),
   };
   return { data, viewTexts };
+}
+
+/**
+ * The customer's page of every coffee a card links (its `planner`), one per page address:
+ * the views name the page, so no card links a page that is not built.
+ */
+function plannerPages(
+  stations: ReadonlyMap<string, StationCardView>,
+  inserts: ReadonlyMap<string, InsertCardView>,
+  catalogue: Catalogue,
+  builtOn: string,
+): PlannerPageView[] {
+  const pages = new Map<string, PlannerPageView>();
+  for (const card of [...stations.values(), ...inserts.values()]) {
+    const url = card.planner.pageUrl;
+    if (pages.has(url)) continue;
+    const slug = url.slice('brew/'.length, -1);
+    pages.set(url, plannerPageView(card.coffeeId, slug, card.planner.language, catalogue, builtOn));
+  }
+  return [...pages.values()];
 }
 
 /** The troubleshooting table for the method page's example card, in the site's units. */

@@ -43,7 +43,7 @@ import {
   type TimeRangeText,
 } from './format.ts';
 import { heatFeel, insertSteps, type InsertStep } from './insert-steps.ts';
-import { insertPaths, stationPaths, type CardPaths } from './paths.ts';
+import { insertPaths, plannerPaths, plannerSlug, stationPaths, type CardPaths } from './paths.ts';
 import { bindingCauseText, refusalText, warningText } from './plan-text.ts';
 import { qrSvg } from './qr.ts';
 
@@ -226,6 +226,18 @@ export interface StationCardView {
   readonly warnings: Warnings | null;
   readonly cautions: Cautions;
   readonly footer: Footer;
+  /** The coffee's page for customers (planner-view.ts), linked from the card's page. */
+  readonly planner: PlannerLink;
+}
+
+/** A card's link to its coffee's page for customers. */
+export interface PlannerLink {
+  /** Site-relative page address, e.g. "brew/house-blend/". */
+  readonly pageUrl: string;
+  readonly webUrl: string | null;
+  readonly label: string;
+  /** Language code of the page (the card's). */
+  readonly language: string;
 }
 
 /** One row of an insert card: a pot size on a kind of stove. */
@@ -295,7 +307,9 @@ export interface InsertCardView {
   readonly paths: CardPaths;
   readonly warnings: Warnings | null;
   readonly cautions: Cautions;
+  /** Its QR code opens the coffee's page for customers (the planner), not the insert's page. */
   readonly footer: Footer;
+  readonly planner: PlannerLink;
 }
 
 /** What the build hands insertCardView: the set, the coffee and one plan per row. */
@@ -367,8 +381,9 @@ function warnings(items: readonly string[]): Warnings | null {
 
 async function footer(
   catalogue: Catalogue,
-  paths: CardPaths,
+  webUrl: string | null,
   options: CardViewOptions,
+  caption: string = cardWords.footer.qr,
 ): Promise<Footer> {
   const { business } = catalogue.site;
   const words = cardWords.footer;
@@ -377,9 +392,26 @@ async function footer(
     built: words.built(options.builtOn, options.fingerprint),
     builtOn: options.builtOn,
     fingerprint: options.fingerprint,
-    qrSvg: paths.webUrl ? await qrSvg(paths.webUrl) : null,
-    qrCaption: paths.webUrl ? words.qr : null,
+    qrSvg: webUrl ? await qrSvg(webUrl) : null,
+    qrCaption: webUrl ? caption : null,
+    webUrl,
+  };
+}
+
+/** The coffee's page for customers, in the card's language (paths.ts plannerSlug). */
+function plannerLink(
+  coffee: CoffeeEntry,
+  catalogue: Catalogue,
+  options: CardViewOptions,
+): PlannerLink {
+  const site = catalogue.site;
+  const language = options.language ?? site.language;
+  const paths = plannerPaths(plannerSlug(coffee.id, language, site.language), site.baseUrl);
+  return {
+    language,
+    pageUrl: paths.pageUrl,
     webUrl: paths.webUrl,
+    label: cardWords.planner.link(coffee.name),
   };
 }
 
@@ -572,7 +604,8 @@ export async function stationCardView(
     refusal: plan.refused === null ? null : refusal(plan, units),
     warnings: warnings(plan.warnings.map((w) => warningText(w, units))),
     cautions: cautions(pageSetup(units, paper).compact ? 'compact' : 'full'),
-    footer: await footer(catalogue, paths, options),
+    footer: await footer(catalogue, paths.webUrl, options),
+    planner: plannerLink(e.coffee, catalogue, options),
   };
 }
 
@@ -687,6 +720,7 @@ export async function insertCardView(
           words.columns,
         );
   const refusedRows = rows.filter((row) => row.refused !== null);
+  const planner = plannerLink(coffee, catalogue, options);
   return {
     kind: 'insert',
     lang: langTag(options.language ?? catalogue.site.language),
@@ -716,6 +750,7 @@ export async function insertCardView(
     paths,
     warnings: insertWarnings(rows, input.rows, units),
     cautions: cautions(pageSetup(units, paper).compact ? 'compact' : 'full'),
-    footer: await footer(catalogue, paths, options),
+    footer: await footer(catalogue, planner.webUrl, options, cardWords.footer.qrPlanner),
+    planner,
   };
 }

@@ -5,6 +5,7 @@
 import path from 'node:path';
 import { PROJECT_ROOT as projectRoot } from '../project-root.ts';
 import { FONT_FACES, FONT_LICENSE_PATH, fontFileName, fontPath } from './fonts.ts';
+import { cautionsHtml, footerHtml, stationCardHtml, warningsHtml } from './card-html.ts';
 import { relativeHref } from './paths.ts';
 import { FONTS_DIR } from './site-view.ts';
 
@@ -12,6 +13,11 @@ import { FONTS_DIR } from './site-view.ts';
 export const filters = {
   /** `{{ 'assets/card.css' | rel(page.url) }}`: a link relative to the current page. */
   rel: (target: string, fromUrl: string): string => relativeHref(fromUrl ?? '', target ?? ''),
+  // The card's markup, one source for the pages and the customer's page (card-html.ts).
+  stationCardHtml,
+  warningsHtml,
+  cautionsHtml,
+  footerHtml,
 };
 
 /** Passthrough copies: absolute source → site-relative destination. */

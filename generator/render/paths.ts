@@ -7,6 +7,8 @@
  *   cards/<pot>--<coffee>--<stove>/index.html   a station card   (+ cards/<…>.pdf)
  *     (ids holding `--` are escaped so no two cards share a name: pagePart)
  *   inserts/<coffee>/index.html                 an insert card   (+ inserts/<coffee>.pdf)
+ *   brew/<coffee>/index.html                    the customer's page of a coffee (planner)
+ *     (brew/<coffee>--<language>/ for a language other than the site's)
  *   method/index.html, troubleshooting/index.html
  */
 import type { CardRequest } from '../content/types.ts';
@@ -65,6 +67,16 @@ export function stationPaths(request: CardRequest, baseUrl?: string): CardPaths 
 /** `slug` is the coffee id, or `<coffee>--<set>` when a coffee is in more than one insert set. */
 export function insertPaths(slug: string, baseUrl?: string): CardPaths {
   return paths(`inserts/${slug}`, baseUrl);
+}
+
+/** The customer's page of a coffee: in the site's language, or a set's other language. */
+export function plannerSlug(coffeeId: string, language: string, siteLanguage: string): string {
+  return language === siteLanguage ? pageName(coffeeId) : pageName(coffeeId, language);
+}
+
+/** The customer's page (no PDF of its own: `pdfFile` is unused). */
+export function plannerPaths(slug: string, baseUrl?: string): CardPaths {
+  return paths(`brew/${slug}`, baseUrl);
 }
 
 export function setPaths(setId: string, baseUrl?: string): CardPaths {

@@ -10,6 +10,7 @@ import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
 import { langTag } from '../words/catalogue.ts';
 import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
 import { pageSetup } from './card-view.ts';
+import type { PlannerPageView } from './planner-view.ts';
 import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts';
 import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './format.ts';
 import { setPaths, type CardPaths } from './paths.ts';
@@ -128,6 +129,8 @@ export interface SiteData {
   readonly troubleshooting: TroubleshootingView;
   /** The full cautions and the deferral, on the index, set, method and troubleshooting pages. */
   readonly cautions: Cautions;
+  /** The customer's page of each coffee a card links (render/planner-view.ts). */
+  readonly plannerPages: readonly PlannerPageView[];
 }
 
 /** What the build knows about a set: its id, title, layout and card slugs in order. */

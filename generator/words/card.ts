@@ -197,6 +197,12 @@ export const cardWords = {
     printedBy: (business: string, contact: string): string => `From ${business} · ${contact}`,
     built: (date: string, fingerprint: string): string => `computed ${date} · card ${fingerprint}`,
     qr: 'On the web:',
+    /** An insert's code opens the coffee's page where customers plan their own pot. */
+    qrPlanner: 'Your own pot and stove:',
+  },
+  planner: {
+    /** The link from a station card's page to the coffee's page for customers. */
+    link: (coffee: string): string => `Plan ${coffee} for your own pot and stove`,
   },
   crossSection: {
     title: (potName: string): string => `Cross-section of the ${potName}`,

@@ -29,6 +29,7 @@ type Layer =
   | 'pipeline'
   | 'render'
   | 'words'
+  | 'browser'
   | 'cli';
 
 /** What each folder may import (besides itself and node: / npm packages). */
@@ -53,6 +54,8 @@ const ALLOWED: Record<Layer, readonly Layer[]> = {
     'units',
     'project-root',
   ],
+  // The customer's page script: the engine, the content checks and the card code, bundled.
+  browser: ['brew', 'content', 'planning', 'render', 'words', 'units'],
   cli: [
     'physics',
     'numerics',
