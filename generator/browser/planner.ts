@@ -32,7 +32,16 @@ import { dose, fillVolume, temperature, timeRange, waterVolume } from '../render
 import { planJson } from '../render/plan-json.ts';
 import { refusalText } from '../render/plan-text.ts';
 import type { AnswerField, PlannerData } from '../render/planner-view.ts';
-import { fromCelsius, fromFahrenheit, M_PER_FT, toCelsius, toFahrenheit, toMl } from '../units.ts';
+import {
+  fromCelsius,
+  fromFahrenheit,
+  M_PER_FT,
+  ML_PER_US_FL_OZ,
+  toCelsius,
+  toFahrenheit,
+  toFlOz,
+  toMl,
+} from '../units.ts';
 import { wording } from '../words/content.ts';
 import { plannerWords as words } from '../words/planner.ts';
 
@@ -83,12 +92,18 @@ function fieldValues(form: Form): Record<string, string> {
 function chosenPot(form: Form, data: PlannerData, units: 'metric' | 'us', problems: FieldProblems) {
   const cups = value(form, 'cups');
   if (cups !== OWN) return data.pots.find((pot) => String(pot.cups) === cups) ?? data.pots[0]!;
-  // An empty field is said in the form's words; a value written wrong gets the build's message.
-  for (const control of form.querySelectorAll<HTMLInputElement>(
-    'fieldset[data-when="own-pot"] input[required]',
-  ))
-    if (control.value.trim() === '') problems.add(control.name, words.form.missing);
-  if (problems.byField.size > 0) return undefined;
+  // An empty field is said in the form's words (once the customer has been at it; until
+  // every one is filled a general line asks for them); a value written wrong gets the
+  // build's own message.
+  const empty = [
+    ...form.querySelectorAll<HTMLInputElement>('fieldset[data-when="own-pot"] input[required]'),
+  ].filter((control) => control.value.trim() === '');
+  for (const control of empty)
+    if (control.dataset.touched) problems.add(control.name, words.form.missing);
+  if (empty.length > 0) {
+    problems.add('', words.form.fillIn);
+    return undefined;
+  }
   const text = ownPotYaml(words.pot.ownName, value(form, 'own_cups'), fieldValues(form), units);
   const valid = validText<PotFileYaml>('pot', text, 'form', OWN_POT_ID, words.pot.ownName);
   if (!valid.value) return problems.addIssues(valid.issues, 'own_cups');
@@ -218,10 +233,15 @@ function showProblems(form: Form, problems: FieldProblems, box: HTMLElement): vo
   const unplaced = [...problems.byField.entries()].filter(
     ([field]) => !document.getElementById(`problem-${field}`),
   );
+  const general = problems.byField.get('');
+  const placed = problems.byField.size - (general === undefined ? 0 : 1) - unplaced.length;
   box.textContent =
     problems.byField.size === 0
       ? ''
-      : [words.answer.fixFirst, ...unplaced.map(([field, text]) => `${field}: ${text}`)].join(' ');
+      : [
+          ...(placed > 0 ? [words.answer.fixFirst] : []),
+          ...unplaced.map(([field, text]) => (field === '' ? text : `${field}: ${text}`)),
+        ].join(' ');
 }
 
 function syncSections(form: Form): void {
@@ -316,6 +336,8 @@ async function start(): Promise<void> {
     answer.dataset.state = planned.plan.refused ? 'refused' : 'planned';
     answer.dataset.runs = String(++runs);
     answer.dataset.ms = String(Math.round(performance.now() - started));
+    // When the first card was in the page, ms since navigation (bench/planner.ts).
+    answer.dataset.at ??= String(Math.round(performance.now()));
   };
 
   let queued: Promise<void> = Promise.resolve();
@@ -325,7 +347,16 @@ async function start(): Promise<void> {
       console.error(error);
     });
   };
-  form.addEventListener('input', schedule);
+  form.addEventListener('input', (event) => {
+    const target = event.target as HTMLElement;
+    target.dataset.touched = '1';
+    schedule();
+  });
+  form.addEventListener(
+    'blur',
+    (event) => ((event.target as HTMLElement).dataset.touched = '1'),
+    true,
+  );
   form.addEventListener('change', schedule);
   form.addEventListener('submit', (event) => {
     event.preventDefault();
@@ -364,7 +395,10 @@ function syncTimer(planned: Planned, units: 'metric' | 'us'): void {
     const control = timer.elements.namedItem(name) as HTMLInputElement | null;
     if (control) control.value = v;
   };
-  set('fill_ml', String(Math.floor(toMl(p.fillM3))));
+  set(
+    us ? 'fill_floz' : 'fill_ml',
+    us ? String(Math.floor(toFlOz(p.fillM3) * 10) / 10) : String(Math.floor(toMl(p.fillM3))),
+  );
   set(
     us ? 'start_f' : 'start_c',
     String(Math.round(us ? toFahrenheit(p.startK) : toCelsius(p.startK))),
@@ -411,7 +445,7 @@ function startTimer(data: PlannerData, currentPlan: () => Planned | null): void 
       { pot: planned.pot.id, coffee: data.coffee.id, stove: planned.stove.id },
       {
         level: value(timer!, 'level'),
-        fillMl: num('fill_ml'),
+        fillMl: units === 'us' ? num('fill_floz') * ML_PER_US_FL_OZ : num('fill_ml'),
         startC: toC(num(units === 'us' ? 'start_f' : 'start_c')),
         roomC: toC(num(units === 'us' ? 'room_f' : 'room_c')),
         cupG: cup === '' ? null : Number(cup),

@@ -19,9 +19,27 @@ export const OWN_POT_FIELDS = {
 
 export type OwnPotField = (typeof OWN_POT_FIELDS)[keyof typeof OWN_POT_FIELDS][number];
 
-/** A field's name on a page in `units`: lengths in inches on a US page. */
+/**
+ * A field's name on a page in `units`: on a US page lengths are the entry's `_in` keys and
+ * volumes are asked in US fluid ounces (`_floz`, converted to the entry's `_ml` keys here).
+ */
 export function fieldKey(field: OwnPotField, units: 'metric' | 'us'): string {
-  return units === 'us' ? field.replace(/_mm$/, '_in') : field;
+  return units === 'us' ? field.replace(/_mm$/, '_in').replace(/_ml$/, '_floz') : field;
+}
+
+/** 1 US fluid ounce = 29.5735295625 mL (NIST Handbook 44, Appendix C). */
+const ML_PER_FLOZ = 29.5735295625;
+
+/** The entry's key and value of a page's field: fl oz become whole mL, the rest as typed. */
+function entryKeyValue(key: string, raw: string): [string, string] {
+  if (!key.endsWith('_floz')) return [key, scalar(raw)];
+  const floz = Number(raw.trim());
+  return [
+    key.replace(/_floz$/, '_ml'),
+    Number.isFinite(floz) && raw.trim() !== ''
+      ? String(Math.round(floz * ML_PER_FLOZ))
+      : scalar(raw),
+  ];
 }
 
 /** A YAML scalar as the form gave it: numbers as typed, anything else quoted. */
@@ -50,7 +68,10 @@ export function ownPotYaml(
       lines[lines.length - 1] += ' {}';
       continue;
     }
-    for (const key of written) lines.push(`  ${key}: ${scalar(values[key]!)}`);
+    for (const key of written) {
+      const [entryKey, text] = entryKeyValue(key, values[key]!);
+      lines.push(`  ${entryKey}: ${text}`);
+    }
   }
   return lines.join('\n') + '\n';
 }

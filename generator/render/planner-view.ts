@@ -258,7 +258,7 @@ export function plannerPageView(
         { name: 'reset', label: words.timer.reset },
       ],
       fields: [
-        { name: 'fill_ml', label: words.timer.fill },
+        { name: units === 'us' ? 'fill_floz' : 'fill_ml', label: words.timer.fill(units) },
         { name: `start_${presetUnit}`, label: words.timer.start(units) },
         { name: `room_${presetUnit}`, label: words.timer.room(units) },
         { name: 'cup_g', label: words.timer.cup },

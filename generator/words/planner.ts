@@ -32,6 +32,7 @@ export const plannerWords = {
     ownCups: 'Cups it is sold as',
     fields: {
       sealed_volume_ml: 'Base full to the brim (with the funnel in), mL',
+      sealed_volume_floz: 'Base full to the brim (with the funnel in), fl oz',
       inner_diameter_mm: 'A: inner width of the base, mm',
       inner_diameter_in: 'A: inner width of the base, in',
       valve_height_mm: 'B: floor to the lowest edge of the valve, mm',
@@ -47,6 +48,7 @@ export const plannerWords = {
       tube_gap_mm: 'G: gap from the tube’s end to the floor, funnel seated, mm',
       tube_gap_in: 'G: gap from the tube’s end to the floor, funnel seated, in',
       capacity_ml: 'Top chamber full, mL',
+      capacity_floz: 'Top chamber full, fl oz',
       mass_g: 'Base on the kitchen scale, g',
       material: 'Base metal',
     },
@@ -80,6 +82,7 @@ export const plannerWords = {
   },
   form: {
     missing: 'Needed for the recipe: measure it as the drawing shows.',
+    fillIn: 'Fill in every measure of your pot to see its recipe.',
     badList: (text: string): string =>
       `“${text}” is not a list of numbers. Write the settings as numbers separated by commas, such as 70, 80, 90, or leave the field empty`,
     badAltitude: (text: string, units: UnitSystem): string =>
@@ -112,7 +115,7 @@ export const plannerWords = {
     offHeat: 'Off the heat',
     reset: 'Start again',
     level: 'Heat setting used',
-    fill: 'Water in the base, mL',
+    fill: (units: UnitSystem): string => `Water in the base, ${units === 'us' ? 'fl oz' : 'mL'}`,
     start: (units: UnitSystem): string =>
       `Water temperature when sealed, ${units === 'us' ? '°F' : '°C'}`,
     room: (units: UnitSystem): string => `Room temperature, ${units === 'us' ? '°F' : '°C'}`,

@@ -92,7 +92,7 @@ describe('a rebuild after editing one coffee', () => {
       made: cards.length + sets.length,
       reused: pdfs - cards.length - sets.length,
     });
-    const otherPages = 3 + data.sets.length; // index, method, troubleshooting and the sets
+    const otherPages = 3 + data.sets.length + data.plannerPages.length; // index, method, troubleshooting and the sets
     expect(rebuilt.stats.pages).toMatchObject({
       made: cards.length + otherPages,
       reused: data.stationCards.length + data.insertCards.length - cards.length,
@@ -119,7 +119,9 @@ describe('a rebuild after editing one coffee', () => {
     const before = await tree(path.join(root, 'site'));
     const again = await build(path.join(root, 'site'));
     expect(again.stats.plans.made + again.stats.views.made + again.stats.pdfs.made).toBe(0);
-    expect(again.stats.pages.made).toBe(3 + again.data.sets.length);
+    expect(again.stats.pages.made).toBe(
+      3 + again.data.sets.length + again.data.plannerPages.length,
+    );
     expect(again.stats.workers).toBe(0); // no work, no worker started
     expect(await tree(path.join(root, 'site'))).toEqual(before);
   });
