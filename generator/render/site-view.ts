@@ -3,8 +3,9 @@
  * one global object the templates read (`stovecard`), built from the card views. Like
  * card-view.ts, every string is final: templates only place them.
  */
-import type { Catalogue } from '../content/types.ts';
-import type { AcceptedPlan } from '../planning/types.ts';
+import type { Catalogue, PaperSize } from '../content/types.ts';
+import type { AcceptedPlan, RefusalCode } from '../planning/types.ts';
+import { printWords } from '../words/print.ts';
 import { cardWords, methodWords, troubleshootingWords } from '../words/card.ts';
 import { langTag } from '../words/catalogue.ts';
 import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
@@ -51,12 +52,18 @@ export interface SetView {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** A training binder (`layout: binder`): its PDF opens with the front matter. */
+  readonly binder: boolean;
+  /** Paper of the set's PDF (its cards and text pages): the set's, else the site's. */
+  readonly page: PageSetup;
   /** Document language tag of the set's page and PDF. */
   readonly lang: string;
   /** "Station cards" or "Bag inserts". */
   readonly layoutLabel: string;
   readonly paths: CardPaths;
   readonly cards: readonly CardLink[];
+  /** How many cards were left out for getting no recipe, and why; null when none. */
+  readonly leftOut: string | null;
 }
 
 export interface IndexView {
@@ -131,9 +138,14 @@ export interface SetOutline {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  readonly binder?: boolean;
+  /** Paper of the set's PDF; default the site's. */
+  readonly paper?: PaperSize;
   /** Language code of the set (content CardSet.language). */
   readonly language: string;
   readonly cardSlugs: readonly string[];
+  /** Refusal codes of the cards left out of the set (pipeline/leave-out.ts), one each. */
+  readonly leftOut?: readonly RefusalCode[];
 }
 
 const FACE_CSS: Record<FontFace, { weight: string; style: string }> = {
@@ -201,14 +213,22 @@ export function setViews(
   outlines: readonly SetOutline[],
   stations: ReadonlyMap<string, StationCardView>,
   inserts: ReadonlyMap<string, InsertCardView>,
-  baseUrl?: string,
+  baseUrl: string | undefined,
+  /** The site's page: its units, and the paper of a set that names none. */
+  sitePage: PageSetup,
 ): SetView[] {
   return outlines.map((set) => ({
     id: set.id,
     title: set.title,
     layout: set.layout,
+    binder: set.binder === true,
+    page: pageSetup(sitePage.units, set.paper ?? sitePage.paper),
     lang: langTag(set.language),
-    layoutLabel: set.layout === 'station' ? cardWords.index.station : cardWords.index.insert,
+    layoutLabel: set.binder
+      ? printWords.binderLabel
+      : set.layout === 'station'
+        ? cardWords.index.station
+        : cardWords.index.insert,
     paths: setPaths(set.id, baseUrl),
     cards: set.cardSlugs.map((slug) => {
       if (set.layout === 'station') {
@@ -220,6 +240,7 @@ export function setViews(
       if (!card) throw new Error(`site view: no insert card "${slug}"`);
       return insertLink(card);
     }),
+    leftOut: printWords.leftOut(set.leftOut ?? []),
   }));
 }
 
