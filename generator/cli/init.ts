@@ -26,7 +26,10 @@ export function schemaPathFor(file: string, schema: InitSchema): string {
   const target = path.join(SCHEMAS, `${schema}.schema.json`);
   const inside = path.relative(PROJECT_ROOT, path.resolve(file));
   if (inside.startsWith('..') || path.isAbsolute(inside)) return pathToFileURL(target).href;
-  return path.relative(path.dirname(path.resolve(file)), target).split(path.sep).join('/');
+  return path
+    .relative(path.dirname(path.resolve(file)), target)
+    .split(path.sep)
+    .join('/');
 }
 
 /** Entries in `dir`, or null when it does not exist; a UsageError when it is a file. */

@@ -107,7 +107,9 @@ describe('cardPdf(every demo card)', () => {
       const dropped = fit.dropped ?? [];
       if (view.footer.webUrl && !dropped.includes('web-line') && view.kind === 'station')
         expect(text, file).toContain(squash(view.footer.webUrl));
-      const items = dropped.includes('long-cautions') ? cautions('compact').items : view.cautions.items;
+      const items = dropped.includes('long-cautions')
+        ? cautions('compact').items
+        : view.cautions.items;
       expect(items.length).toBe(view.cautions.items.length); // the same cautions, none fewer
       for (const caution of items) expect(text, file).toContain(squash(caution));
       expect(text, file).toContain(squash(view.cautions.deferral));

@@ -34,7 +34,9 @@ export interface LogSheetFields {
   readonly readings: readonly string[];
 }
 
-export function logSheetFields(schema: SchemaNode = logSchema as unknown as SchemaNode): LogSheetFields {
+export function logSheetFields(
+  schema: SchemaNode = logSchema as unknown as SchemaNode,
+): LogSheetFields {
   const top = schema.properties ?? {};
   const brewProps = top.brews?.items?.properties ?? {};
   return {
@@ -225,11 +227,7 @@ export function logSheetItems(
     { block: para('P', words.intro, st.body) },
     { block: fillLines([...fields.header.map(labelOf), words.filledBy, words.date], st) },
     {
-      block: blankTables(
-        [words.brewColumn, ...fields.brew.map(labelOf)],
-        words.brewRows,
-        st,
-      ),
+      block: blankTables([words.brewColumn, ...fields.brew.map(labelOf)], words.brewRows, st),
     },
   ];
   for (const key of fields.readings) {

@@ -290,9 +290,7 @@ export function insertFrame(
       st,
     ),
     body: [bodyBlock(shown, st, !dropped.has('pot-names')), warningsBlock(view.warnings, st)],
-    bottom: [
-      cautionsBlock(dropped.has('long-cautions') ? cautions('compact') : view.cautions, st),
-    ],
+    bottom: [cautionsBlock(dropped.has('long-cautions') ? cautions('compact') : view.cautions, st)],
     footer: footerBlock(dropped.has('qr-code') ? { ...view.footer, qrSvg: null } : view.footer, st),
   };
 }

@@ -293,9 +293,7 @@ export function stationFrame(
   return {
     header: headerBlock(view.title, view.subtitle, null, st),
     body,
-    bottom: [
-      cautionsBlock(dropped.has('long-cautions') ? cautions('compact') : view.cautions, st),
-    ],
+    bottom: [cautionsBlock(dropped.has('long-cautions') ? cautions('compact') : view.cautions, st)],
     footer: footerBlock(dropped.has('qr-code') ? { ...view.footer, qrSvg: null } : view.footer, st),
   };
 }
