@@ -15,7 +15,6 @@ import { cp, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises'
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, expect, it } from 'vitest';
-import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
 import { sitePdfStep } from '../../generator/pipeline/pdf-step.ts';
 import { OPTIONAL_ORDER } from '../../generator/render/pdf/card.ts';
@@ -23,7 +22,7 @@ import { droppedLines } from '../../generator/cli/build.ts';
 import { BUILD_ENV } from '../browser/demo-builds.ts';
 import { DEMO_CONTENT } from '../hostile/cli-run.ts';
 import { describeWithTools, pdfinfoSizes } from './poppler.ts';
-import { squash } from './read-pdf.ts';
+import { openPdf, squash } from './read-pdf.ts';
 
 const MM = 72 / 25.4;
 const A5: [number, number] = [148 * MM, 210 * MM];
@@ -34,12 +33,7 @@ const FLOOR_PT = 7;
 
 /** Smallest size of any non-blank text item on each page, pt. */
 async function smallestText(bytes: Uint8Array): Promise<{ sizes: number[]; pages: number[][] }> {
-  const doc = await getDocument({
-    data: new Uint8Array(bytes),
-    isEvalSupported: false,
-    useSystemFonts: false,
-    verbosity: 0,
-  }).promise;
+  const doc = await openPdf(bytes);
   try {
     const sizes: number[] = [];
     const pages: number[][] = [];
@@ -177,11 +171,7 @@ describeWithTools(
         (c) => c.recipe !== null && a6!.pdf.includes(c.paths.pdfFile),
       )!;
       const set = await readFile(path.join(site, 'sets', 'quorvel-bar.pdf'));
-      const doc = await getDocument({
-        data: new Uint8Array(set),
-        isEvalSupported: false,
-        verbosity: 0,
-      }).promise;
+      const doc = await openPdf(set);
       const bar = result.data.sets.find((s) => s.id === 'quorvel-bar')!;
       const index = bar.cards.findIndex((c) => c.pdfFile === card.paths.pdfFile);
       const page = await doc.getPage(index + 1);
