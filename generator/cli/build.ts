@@ -7,6 +7,8 @@ import { ContentErrors } from '../content/index.ts';
 import { formatContentErrors } from '../words/content.ts';
 import { buildWords } from '../words/card.ts';
 import { faultWords } from '../words/build-faults.ts';
+import { printWords } from '../words/print.ts';
+import { PDF_TEXT_FLOOR_PT } from '../render/pdf/style.ts';
 import { UsageError } from './errors.ts';
 import { checkOutFolder } from './out-folder.ts';
 import { parseOptions } from './options.ts';
@@ -24,8 +26,30 @@ export function summaryLine(result: BuildResult): string {
   });
 }
 
-/** The build log's copy of every warning the station cards print, one line each. */
+/**
+ * The build log's copy of every warning the station cards print, one line each, then one
+ * line per set of blocks card PDFs left out to keep their text at the floor.
+ */
 export function warningLines(result: BuildResult): string {
+  return cardWarningLines(result) + droppedLines(result);
+}
+
+/** What card PDFs left out to fit at the floor (stats.dropped), grouped by what they left out. */
+export function droppedLines(result: BuildResult): string {
+  const byBlocks = new Map<string, string[]>();
+  for (const d of result.stats?.dropped ?? []) {
+    const key = d.blocks.join('\n');
+    byBlocks.set(key, [...(byBlocks.get(key) ?? []), d.pdf]);
+  }
+  return [...byBlocks]
+    .map(
+      ([blocks, pdfs]) =>
+        `${printWords.dropped(pdfs.sort(), blocks.split('\n'), PDF_TEXT_FLOOR_PT)}\n`,
+    )
+    .join('');
+}
+
+function cardWarningLines(result: BuildResult): string {
   return result.data.stationCards
     .flatMap((card) =>
       (card.warnings?.items ?? []).map(

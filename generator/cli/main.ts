@@ -20,6 +20,7 @@ const commands: Record<string, () => Promise<{ run: (argv: string[]) => Promise<
   plan: () => import('./plan.ts'),
   fit: () => import('./fit.ts'),
   build: () => import('./build.ts'),
+  init: () => import('./init.ts'),
 };
 
 export async function main(argv: string[]): Promise<number> {

@@ -21,8 +21,10 @@ interface CardYaml {
 interface SetYaml {
   readonly id: string;
   readonly title: string;
-  readonly layout: 'station' | 'insert';
+  readonly layout: 'station' | 'insert' | 'binder';
   readonly language?: string;
+  readonly include_refused?: boolean;
+  readonly paper?: PaperSize;
   readonly cards?: readonly CardYaml[];
   readonly coffees?: readonly string[];
   readonly pots?: readonly string[];
@@ -45,6 +47,8 @@ export interface SiteYaml {
 /** Cards of one set, with the issues found while reading them. */
 interface Expanded {
   readonly cards: readonly CardRequest[];
+  /** Cards from `every_coffee_with_every_pot`, left out when refused (unless include_refused). */
+  readonly expanded: readonly CardRequest[];
   readonly coffeeIds: readonly string[];
   readonly issues: readonly ContentIssue[];
 }
@@ -65,7 +69,7 @@ function keysNotFor(
   set: SetYaml,
   keys: readonly (keyof SetYaml)[],
 ): ContentIssue[] {
-  const belongsTo = set.layout === 'station' ? 'insert' : 'station';
+  const belongsTo = set.layout === 'insert' ? 'station' : 'insert';
   return keys
     .filter((key) => set[key] !== undefined)
     .map((key) =>
@@ -92,14 +96,16 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
     const example = '`cards:` with `- { pot: …, coffee: …, stove: … }` lines';
     return {
       cards: [],
+      expanded: [],
       coffeeIds: [],
       issues: [
         ...issues,
-        issueAt(source, path, 'layout', message('missingForLayout', 'cards', 'station', example)),
+        issueAt(source, path, 'layout', message('missingForLayout', 'cards', set.layout, example)),
       ],
     };
   }
   const cards: CardRequest[] = [];
+  const expanded: CardRequest[] = [];
   const firstLineOf = new Map<string, number>();
   set.cards.forEach((card, index) => {
     const at = [...path, 'cards', index];
@@ -133,6 +139,7 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
       if (firstLine === undefined) {
         firstLineOf.set(key, line);
         cards.push(request);
+        if (card.every_coffee_with_every_pot === true) expanded.push(request);
       } else {
         const wording = message(
           'repeatedCard',
@@ -146,11 +153,11 @@ function stationCards(source: YamlSource, path: YamlPath, set: SetYaml, known: K
     }
   });
   const coffeeIds = [...new Set(cards.map((card) => card.coffeeId))];
-  return { cards, coffeeIds, issues };
+  return { cards, expanded, coffeeIds, issues };
 }
 
 function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: KnownIds): Expanded {
-  const issues = keysNotFor(source, path, set, ['cards']);
+  const issues = keysNotFor(source, path, set, ['cards', 'include_refused']);
   if (set.coffees === undefined) {
     const example = '`coffees: [house-blend, …]`';
     issues.push(
@@ -168,7 +175,7 @@ function insertCards(source: YamlSource, path: YamlPath, set: SetYaml, known: Kn
   const cards = coffeeIds.flatMap((coffeeId) =>
     potIds.flatMap((potId) => stoveIds.map((stoveId) => ({ potId, coffeeId, stoveId }))),
   );
-  return { cards, coffeeIds, issues };
+  return { cards, expanded: [], coffeeIds, issues };
 }
 
 /** The kettle presets in K, ascending, from °C or °F (the schema allows one of the two). */
@@ -192,7 +199,7 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
       issues.push(
         issueAt(source, [...path, 'id'], 'repeated', message('repeatedSetId', set.id, firstLine)),
       );
-    const expanded = (set.layout === 'station' ? stationCards : insertCards)(
+    const expanded = (set.layout === 'insert' ? insertCards : stationCards)(
       source,
       path,
       set,
@@ -202,9 +209,13 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
     return {
       id: set.id,
       title: set.title,
-      layout: set.layout,
+      // A binder is a station set with the training front matter in its PDF.
+      layout: set.layout === 'insert' ? 'insert' : 'station',
+      binder: set.layout === 'binder',
+      paper: set.paper ?? data.paper,
       language: set.language ?? data.language ?? DEFAULT_LANGUAGE,
       cards: expanded.cards,
+      leaveOutIfRefused: set.include_refused === true ? [] : expanded.expanded,
       coffeeIds: expanded.coffeeIds,
       source: refAt(source, path),
     };

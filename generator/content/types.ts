@@ -109,7 +109,7 @@ export interface LogEntry extends EntryBase {
 }
 
 export type UnitSystem = 'metric' | 'us';
-export type PaperSize = 'A4' | 'A5' | 'A6' | 'letter' | 'half-letter';
+export type PaperSize = 'A4' | 'A5' | 'A6' | 'letter' | 'half-letter' | '4x6in';
 
 export interface CardRequest {
   readonly potId: string;
@@ -121,12 +121,21 @@ export interface CardSet {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** `layout: binder`: a station set whose PDF opens with the training front matter. */
+  readonly binder: boolean;
+  /** Paper of the set's PDF: the set's `paper:`, else the site's. */
+  readonly paper: PaperSize;
   /**
    * Language code of the set's cards, pages and PDFs (`language:` of the set, else of the
    * site, else en); one of the schema's enum, which matches generator/words/ catalogues.
    */
   readonly language: string;
   readonly cards: readonly CardRequest[];
+  /**
+   * Station sets: the cards of `cards` that came from `every_coffee_with_every_pot` and are
+   * left out of the set when their plan is refused (empty with `include_refused: true`).
+   */
+  readonly leaveOutIfRefused: readonly CardRequest[];
   /** For insert sets: the coffees, one insert each. */
   readonly coffeeIds: readonly string[];
   readonly source: SourceRef;

@@ -14,7 +14,7 @@
  * disk by the hash of its sources, so a rebuild costs a file copy.
  */
 import { createHash } from 'node:crypto';
-import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
+import { mkdir, readdir, readFile, rename, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { PROJECT_ROOT } from '../project-root.ts';
 import { renderCodeVersion } from './code-version.ts';
@@ -74,7 +74,6 @@ async function cachedBundle(cacheDir: string): Promise<Uint8Array> {
 }
 
 async function folderHash(folders: readonly string[]): Promise<string> {
-  const { readdir } = await import('node:fs/promises');
   const hash = createHash('sha256');
   const visit = async (dir: string): Promise<void> => {
     const entries = (await readdir(dir, { withFileTypes: true })).sort((a, b) =>

@@ -31,6 +31,7 @@ import { PLANNER_SCRIPT, plannerScript } from './browser-bundle.ts';
 import { checkQrDensity } from '../render/qr-density.ts';
 import { buildDate } from './build-date.ts';
 import { expandCards, type CardJobs } from './cards.ts';
+import { leaveOutRefused } from './leave-out.ts';
 import { writePages } from './pages.ts';
 import { planAll, type PlannedCard } from './plan-all.ts';
 import { damagedCounts, sweepCacheFolders } from './file-cache.ts';
@@ -150,7 +151,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
     await checkReplaceable(out);
     damagedCounts(cacheDir); // counted from here: this build's damaged files
     onProgress({ phase: 'load', done: 0, total: 0 });
-    const { catalogue, jobs } = await timedPhase(stats, 'load', async () => {
+    const { catalogue, jobs: allJobs } = await timedPhase(stats, 'load', async () => {
       const catalogue = await loadCatalogue(options.contentDir);
       const jobs = expandCards(catalogue);
       const baseUrl = catalogue.site.baseUrl;
@@ -177,8 +178,9 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
       return { catalogue, jobs };
     });
     const plans = await timedPhase(stats, 'plan', () =>
-      planAll(catalogue, jobs, new PlanCache(cacheDir), onProgress, { pool, stats }),
+      planAll(catalogue, allJobs, new PlanCache(cacheDir), onProgress, { pool, stats }),
     );
+    const jobs = leaveOutRefused(allJobs, plans);
     const builtOn = buildDate(env);
     const renderCache = new RenderCache(cacheDir);
     const { data, viewTexts } = await timedPhase(stats, 'render', () =>

@@ -41,7 +41,7 @@ export type TaskRequest =
 interface Results {
   plan: { readonly json: string; readonly simulations: number };
   'station-view': { readonly json: string };
-  'card-pdf': { readonly bytes: Uint8Array };
+  'card-pdf': { readonly bytes: Uint8Array; readonly dropped: readonly string[] };
   'set-pdf': { readonly bytes: Uint8Array; readonly pages: number };
 }
 
@@ -74,7 +74,7 @@ export async function runTask(task: TaskRequest): Promise<TaskResult<TaskRequest
     case 'card-pdf': {
       const { cardPdf } = await import('../render/pdf/card.ts');
       const pdf = await cardPdf(fromTaggedJson<CardView>(task.viewJson), task.context);
-      return { bytes: pdf.bytes };
+      return { bytes: pdf.bytes, dropped: pdf.fit.dropped ?? [] };
     }
     case 'set-pdf': {
       const { setPdf } = await import('../render/pdf/binder.ts');

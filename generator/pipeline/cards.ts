@@ -8,8 +8,9 @@
  * page, so an insert's rows can point to their full cards. Each distinct request is
  * planned once.
  */
-import type { CardRequest, Catalogue } from '../content/types.ts';
+import type { CardRequest, Catalogue, PaperSize } from '../content/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
+import type { RefusalCode } from '../planning/types.ts';
 import {
   insertPaths,
   insertSlug,
@@ -49,10 +50,18 @@ export interface SetJob {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** `layout: binder` (CardSet.binder): the PDF opens with the training front matter. */
+  readonly binder?: boolean;
+  /** Paper of the set's PDF (CardSet.paper); default the site's. */
+  readonly paper?: PaperSize;
   /** Language code of the set's page and PDF (CardSet.language). */
   readonly language: string;
-  /** Station sets: slugs of their station cards; insert sets: slugs of their inserts. */
+  /** Station sets: keys of their station cards (StationCardJob.key); insert sets: slugs of their inserts. */
   readonly cardSlugs: readonly string[];
+  /** Station sets: keys of the cards left out when their plan is refused (CardSet.leaveOutIfRefused). */
+  readonly optionalSlugs?: readonly string[];
+  /** Why each card left out was refused, one code per card (leave-out.ts; empty before). */
+  readonly leftOut?: readonly RefusalCode[];
 }
 
 export interface CardJobs {
@@ -96,8 +105,13 @@ export function expandCards(catalogue: Catalogue): CardJobs {
         id: set.id,
         title: set.title,
         layout: 'station',
+        binder: set.binder,
+        paper: set.paper,
         language: set.language,
         cardSlugs: [...new Set(slugs)],
+        optionalSlugs: set.leaveOutIfRefused.map((request) =>
+          stationKey(request, pathLanguage(set.language, siteLanguage)),
+        ),
       });
       continue;
     }
@@ -117,6 +131,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
       id: set.id,
       title: set.title,
       layout: 'insert',
+      paper: set.paper,
       language: set.language,
       cardSlugs: slugs,
     });

@@ -34,6 +34,7 @@ export const RENDER_SOURCES: readonly string[] = [
   'generator/words',
   'generator/units.ts', // the conversions the views print through
   'generator/content/heat-kind.ts', // how an insert groups its stoves
+  'generator/content/schemas/log.schema.json', // the binder's brew-log sheet columns
   'generator/content/own-entries.ts', // the customer's page's form fields
   'generator/pipeline/site-data.ts', // what a view is given (its catalogue, its fingerprint)
   'generator/pipeline/render-cache.ts',

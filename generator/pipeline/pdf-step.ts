@@ -1,7 +1,7 @@
 /**
  * The site's PDFs as a build step, incremental and on the worker pool: the same files and
  * bytes as the PDF module's own step (render/pdf/site-pdfs.ts, writeSitePdfs), made with
- * the same pure cores (cardPdf, setPdf, setCards, isTrainingSet), but
+ * the same pure cores (cardPdf, setPdf, setCards, isBinderSet), but
  *
  *   - each PDF is keyed by the hashes of the views it is drawn from (render-cache.ts); a
  *     key already in the cache is copied from there instead of made;
@@ -16,21 +16,33 @@
  *   then sets  ─ key ─▶ cached? ── yes ─▶ copy
  *                                └─ no ──▶ setPdf of the site's card PDFs (pool) ─▶ site, cache
  */
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cardPdf, type CardView } from '../render/pdf/card.ts';
 import { setCard, setPdf, type SetPdfInput } from '../render/pdf/binder.ts';
-import { frontMatterOf, isTrainingSet, setCards } from '../render/pdf/site-pdfs.ts';
+import { frontMatterOf, isBinderSet, setCards } from '../render/pdf/site-pdfs.ts';
 import type { BuildContext, ViewText } from './build-site.ts';
 import { renderCodeVersion } from './code-version.ts';
 import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
 import { cardPdfKey, RenderCache, setPdfKey, sha256 } from './render-cache.ts';
 import { toTaggedJson } from './plan-cache.ts';
 
+/** Scratch folder of the site for the cards of sets on their own paper (removed after). */
+const SET_CARDS_DIR = '.set-paper-cards';
+
 interface PdfJob {
   readonly file: string;
+  /** How the build log names it (the file, or the set and card of a set-paper card). */
+  readonly label: string;
   readonly key: string;
-  render(): Promise<{ bytes: Uint8Array; pages: number; ms: number }>;
+  /** Card PDFs: the optional blocks left out are noted (stats.dropped). */
+  readonly card: boolean;
+  render(): Promise<{
+    bytes: Uint8Array;
+    pages: number;
+    ms: number;
+    dropped?: readonly string[];
+  }>;
 }
 
 export async function sitePdfStep(context: BuildContext): Promise<void> {
@@ -41,8 +53,11 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   // Of the environment, a PDF reads only the date setting (render/pdf/document.ts pdfDate).
   const epoch = context.env.SOURCE_DATE_EPOCH;
   const env: NodeJS.ProcessEnv = epoch === undefined ? {} : { SOURCE_DATE_EPOCH: epoch };
+  const sitePaper = data.site.page.paper;
   const textOf = (card: CardView): ViewText => {
-    const known = context.viewTexts.get(card.paths.pdfFile);
+    // A card re-laid for a set's own paper is another view than the site's card.
+    const known =
+      card.page.paper === sitePaper ? context.viewTexts.get(card.paths.pdfFile) : undefined;
     if (known) return known;
     const text = toTaggedJson(card);
     return { text, hash: sha256(text) };
@@ -50,8 +65,10 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const hashOf = (card: CardView) => textOf(card).hash;
 
   const cards: CardView[] = [...data.stationCards, ...data.insertCards];
-  const cardJobs: PdfJob[] = cards.map((view) => ({
-    file: view.paths.pdfFile,
+  const cardJob = (view: CardView, file: string, label = file): PdfJob => ({
+    file,
+    label,
+    card: true,
     key: cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion }),
     async render() {
       if (pool) {
@@ -60,27 +77,42 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
           viewJson: textOf(view).text,
           context: { author, env },
         });
-        return { bytes: result.bytes, pages: 1, ms };
+        return { bytes: result.bytes, pages: 1, ms, dropped: result.dropped };
       }
       const started = performance.now();
       const pdf = await cardPdf(view, { author, env });
-      return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started };
+      const dropped = pdf.fit.dropped ?? [];
+      return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started, dropped };
     },
-  }));
+  });
+  const cardJobs: PdfJob[] = cards.map((view) => cardJob(view, view.paths.pdfFile));
+  // Cards of a set on other paper than the site's: drawn at that paper into a scratch
+  // folder of the site (removed once the sets are made), once per set paper and card.
+  const setPaperJobs = new Map<string, PdfJob>();
+  const setPaperFile = (card: CardView) =>
+    path.join(SET_CARDS_DIR, card.page.paper, card.paths.pdfFile);
   const setJobs: PdfJob[] = data.sets.map((set) => {
     const members = setCards(set, data);
     const input: Omit<SetPdfInput, 'cardPdfs'> = {
       set,
       cards: members.map(setCard),
-      frontMatter: isTrainingSet(set) ? frontMatterOf(set, data) : null,
-      page: data.site.page,
+      frontMatter: isBinderSet(set) ? frontMatterOf(set, data) : null,
+      page: set.page,
       author,
       builtOn: data.site.builtOn,
       env,
     };
-    const cardFiles = members.map((card) => path.join(siteDir, card.paths.pdfFile));
+    const cardFiles = members.map((card) => {
+      if (card.page.paper === sitePaper) return path.join(siteDir, card.paths.pdfFile);
+      const file = setPaperFile(card);
+      const label = `${set.paths.pdfFile} (${card.paths.pdfFile} on ${card.page.paper})`;
+      if (!setPaperJobs.has(file)) setPaperJobs.set(file, cardJob(card, file, label));
+      return path.join(siteDir, file);
+    });
     return {
       file: set.paths.pdfFile,
+      label: set.paths.pdfFile,
+      card: false,
       key: setPdfKey({
         set,
         cardHashes: members.map(hashOf),
@@ -104,11 +136,13 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     };
   });
 
-  const total = cardJobs.length + setJobs.length;
+  const total = cardJobs.length + setPaperJobs.size + setJobs.length;
   let done = 0;
   context.onProgress({ phase: 'steps', done, total });
   const folders = new Set(
-    [...cardJobs, ...setJobs].map((job) => path.dirname(path.join(siteDir, job.file))),
+    [...cardJobs, ...setPaperJobs.values(), ...setJobs].map((job) =>
+      path.dirname(path.join(siteDir, job.file)),
+    ),
   );
   await Promise.all([...folders].map((folder) => mkdir(folder, { recursive: true })));
 
@@ -118,6 +152,11 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     const copied = await mapConcurrent(jobs, IO_LIMIT, async (job) => {
       const hit = await cache.pdfs.copyTo(job.key, path.join(siteDir, job.file));
       if (hit) {
+        if (job.card) {
+          const note = await cache.pdfNotes.getText(job.key);
+          const blocks = note === null ? [] : (JSON.parse(note) as string[]);
+          if (blocks.length > 0) stats.dropped.push({ pdf: job.label, blocks });
+        }
         stats.pdfs.reused += 1;
         context.onProgress({ phase: 'steps', done: ++done, total });
       }
@@ -135,6 +174,11 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       const { bytes, pages, ms } = made;
       await writeFile(path.join(siteDir, job.file), bytes);
       await cache.pdfs.put(job.key, bytes);
+      if (job.card) {
+        const blocks = made.dropped ?? [];
+        await cache.pdfNotes.put(job.key, JSON.stringify(blocks));
+        if (blocks.length > 0) stats.dropped.push({ pdf: job.label, blocks });
+      }
       stats.pdfs.made += 1;
       stats.pdfs.pdfPages += pages;
       stats.pdfs.ms += ms;
@@ -145,5 +189,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     else for (const job of misses) await make(job);
   };
   await run(cardJobs);
+  await run([...setPaperJobs.values()]);
   await run(setJobs);
+  await rm(path.join(siteDir, SET_CARDS_DIR), { recursive: true, force: true });
 }

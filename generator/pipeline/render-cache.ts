@@ -77,11 +77,14 @@ export class RenderCache {
   readonly views: FileCache;
   readonly pages: FileCache;
   readonly pdfs: FileCache;
+  /** Beside each card PDF: the optional blocks it left out (JSON array), for the build log. */
+  readonly pdfNotes: FileCache;
 
   constructor(cacheDir: string) {
     this.views = new FileCache(path.join(cacheDir, 'views'), '.json');
     this.pages = new FileCache(path.join(cacheDir, 'pages'), '.html');
     this.pdfs = new FileCache(path.join(cacheDir, 'pdfs'), '.pdf');
+    this.pdfNotes = new FileCache(path.join(cacheDir, 'pdfs'), '.dropped.json');
   }
 
   /** The cached view, or null when absent or unreadable. */

@@ -14,6 +14,7 @@ import type { AcceptedPlan } from '../planning/types.ts';
 import {
   cautions,
   insertCardView,
+  pageSetup,
   stationCardView,
   type CardViewOptions,
   type InsertCardView,
@@ -276,7 +277,13 @@ export async function renderSite(
     site: siteInfo(catalogue, builtOn),
     nav: siteNav(siteVoice(catalogue)),
     index: indexView(catalogue),
-    sets: setViews(jobs.sets, stations, inserts, catalogue.site.baseUrl),
+    sets: setViews(
+      jobs.sets,
+      stations,
+      inserts,
+      catalogue.site.baseUrl,
+      pageSetup(catalogue.site.units, catalogue.site.paper),
+    ),
     stationCards: [...stations.values()],
     insertCards: [...inserts.values()],
     method: site.method,

@@ -30,6 +30,11 @@ export interface BuildStats {
   workers: number;
   /** Cache files deleted by the build's sweep (file-cache.ts sweepCacheFolders). */
   cacheFilesDeleted: number;
+  /**
+   * Card PDFs that left out optional blocks to keep every text at the floor (render/pdf/
+   * card.ts OPTIONAL_ORDER), with the blocks, for the build log.
+   */
+  readonly dropped: { readonly pdf: string; readonly blocks: readonly string[] }[];
 }
 
 export function emptyStats(): BuildStats {
@@ -42,6 +47,7 @@ export function emptyStats(): BuildStats {
     wallMs: {},
     workers: 0,
     cacheFilesDeleted: 0,
+    dropped: [],
   };
 }
 

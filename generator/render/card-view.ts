@@ -360,7 +360,24 @@ const PAPER: Record<PaperSize, { css: string; widthMm: number; heightMm: number 
   A6: { css: '105mm 148mm', widthMm: 105, heightMm: 148 },
   letter: { css: '8.5in 11in', widthMm: 215.9, heightMm: 279.4 },
   'half-letter': { css: '5.5in 8.5in', widthMm: 139.7, heightMm: 215.9 },
+  '4x6in': { css: '4in 6in', widthMm: 101.6, heightMm: 152.4 },
 };
+
+/** Papers small enough for the compact cautions and drawings (A6 and 4 × 6 in cards). */
+export const COMPACT_PAPERS: ReadonlySet<PaperSize> = new Set<PaperSize>(['A6', '4x6in']);
+
+/**
+ * A card's view laid out for other paper (a set with its own \`paper:\`): the page and the
+ * cautions' form are all of a view that depends on the paper.
+ */
+export function onPaper<
+  V extends { readonly page: PageSetup; readonly cautions: Cautions; readonly language: string },
+>(view: V, paper: PaperSize): V {
+  if (view.page.paper === paper) return view;
+  const page = pageSetup(view.page.units, paper);
+  const voice = voiceFor(view.language, view.page.units);
+  return { ...view, page, cautions: cautions(page.compact ? 'compact' : 'full', voice) };
+}
 
 export function pageSetup(units: UnitSystem, paper: PaperSize): PageSetup {
   const p = PAPER[paper];
@@ -370,7 +387,7 @@ export function pageSetup(units: UnitSystem, paper: PaperSize): PageSetup {
     cssSize: p.css,
     widthMm: p.widthMm,
     heightMm: p.heightMm,
-    compact: paper === 'A6',
+    compact: COMPACT_PAPERS.has(paper),
   };
 }
 

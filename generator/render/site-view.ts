@@ -3,8 +3,8 @@
  * one global object the templates read (`stovecard`), built from the card views. Like
  * card-view.ts, every string is final: templates only place them.
  */
-import type { Catalogue } from '../content/types.ts';
-import type { AcceptedPlan } from '../planning/types.ts';
+import type { Catalogue, PaperSize } from '../content/types.ts';
+import type { AcceptedPlan, RefusalCode } from '../planning/types.ts';
 import type { Messages } from '../words/catalogue.ts';
 import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
 import { cautions as cautionsView, pageNav, pageSetup, type PageNav } from './card-view.ts';
@@ -53,6 +53,10 @@ export interface SetView {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  /** A training binder (`layout: binder`): its PDF opens with the front matter. */
+  readonly binder: boolean;
+  /** Paper of the set's PDF (its cards and text pages): the set's, else the site's. */
+  readonly page: PageSetup;
   /** Language code of the set (its cards, page and PDF) and its document language tag. */
   readonly language: string;
   readonly lang: string;
@@ -64,6 +68,8 @@ export interface SetView {
   readonly layoutLabel: string;
   readonly paths: CardPaths;
   readonly cards: readonly CardLink[];
+  /** How many cards were left out for getting no recipe, and why; null when none. */
+  readonly leftOut: string | null;
 }
 
 export interface IndexView {
@@ -146,9 +152,14 @@ export interface SetOutline {
   readonly id: string;
   readonly title: string;
   readonly layout: 'station' | 'insert';
+  readonly binder?: boolean;
+  /** Paper of the set's PDF; default the site's. */
+  readonly paper?: PaperSize;
   /** Language code of the set (content CardSet.language). */
   readonly language: string;
   readonly cardSlugs: readonly string[];
+  /** Refusal codes of the cards left out of the set (pipeline/leave-out.ts), one each. */
+  readonly leftOut?: readonly RefusalCode[];
 }
 
 const FACE_CSS: Record<FontFace, { weight: string; style: string }> = {
@@ -222,21 +233,29 @@ export function setViews(
   outlines: readonly SetOutline[],
   stations: ReadonlyMap<string, StationCardView>,
   inserts: ReadonlyMap<string, InsertCardView>,
-  baseUrl?: string,
+  baseUrl: string | undefined,
+  /** The site's page: its units, and the paper of a set that names none. */
+  sitePage: PageSetup,
 ): SetView[] {
   return outlines.map((set) => {
-    const voice = voiceFor(set.language);
+    const voice = voiceFor(set.language, sitePage.units);
     const words = voice.words.card.index;
     return {
       id: set.id,
       title: set.title,
       layout: set.layout,
+      binder: set.binder === true,
+      page: pageSetup(sitePage.units, set.paper ?? sitePage.paper),
       language: set.language,
       lang: voice.lang,
       nav: siteNav(voice),
       columns: indexColumns(voice),
       cautions: cautionsView('full', voice),
-      layoutLabel: set.layout === 'station' ? words.station : words.insert,
+      layoutLabel: set.binder
+        ? voice.words.print.binderLabel
+        : set.layout === 'station'
+          ? words.station
+          : words.insert,
       paths: setPaths(set.id, baseUrl),
       cards: set.cardSlugs.map((slug) => {
         if (set.layout === 'station') {
@@ -248,6 +267,7 @@ export function setViews(
         if (!card) throw new Error(`site view: no insert card "${slug}"`);
         return insertLink(card);
       }),
+      leftOut: voice.words.print.leftOut(set.leftOut ?? []),
     };
   });
 }

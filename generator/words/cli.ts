@@ -77,4 +77,5 @@ const commandSummaries: Record<string, string> = {
   plan: 'choose the recipe a card prints for a pot × coffee × stove',
   fit: 'calibrate a coffee and stove from a brew log',
   build: 'build the site of cards (HTML and PDF) from content/',
+  init: 'write a new content folder, one entry of each kind, that builds at once',
 };

@@ -617,8 +617,215 @@ const pdf: Messages['pdf'] = {
     refused: (line: string, status: string): string => `${line} (${status})`,
   },
   doesNotFit: (cardName: string, paper: string, usedPt: number, availablePt: number): string =>
-    `la ficha «${cardName}» no cabe en una página ${paper} ni con la letra más pequeña (${Math.ceil(usedPt)} pt de texto para ${Math.floor(availablePt)} pt): acorte su texto más largo en el YAML (un nombre, las notas) o imprima en papel más grande (paper: en site.yaml).`,
+    `la ficha «${cardName}» no cabe en una página ${paper} con todos los textos a 7 pt o más, ni siquiera sin sus bloques opcionales (${Number.isFinite(usedPt) ? `${Math.ceil(usedPt)} pt de texto para ${Math.floor(availablePt)} pt` : `necesita más de los ${Math.floor(availablePt)} pt que tiene la página`}): imprímala en papel más grande (paper: en site.yaml, o en su juego), ponga menos cafeteras o fuegos en el juego de fichas para la bolsa (pots:, stoves:) o acorte su texto más largo en el YAML (un nombre, las notas).`,
   pageNumber: (n: number, total: number): string => `${n} / ${total}`,
+};
+
+const print: Messages['print'] = {
+  binderLabel: 'Manual de formación',
+  leftOut: (codes: readonly RefusalCode[]): string | null => {
+    if (codes.length === 0) return null;
+    const counts = new Map<RefusalCode, number>();
+    for (const code of codes) counts.set(code, (counts.get(code) ?? 0) + 1);
+    const reasons = [...counts.entries()]
+      .map(([code, n]) => `${n} × ${card.refusal.short[code]}`)
+      .join('; ');
+    return codes.length === 1
+      ? `No se incluye en este juego una combinación de cafetera y café que no tendría receta (${reasons}).`
+      : `No se incluyen en este juego ${codes.length} combinaciones de cafetera y café que no tendrían receta (${reasons}).`;
+  },
+};
+
+const binder: Messages['binder'] = {
+  cover: {
+    kind: 'Manual de formación',
+    from: (business: string): string => `De ${business}`,
+    built: (date: string): string => `Fichas calculadas el ${date}.`,
+    intro:
+      'Cómo funciona una cafetera italiana, cómo preparar el café con las fichas, cómo cuidar la cafetera y una hoja de registro para las preparaciones que cronometre. Téngalo a mano junto a la barra.',
+  },
+  steps: {
+    title: 'Cada paso y su porqué',
+    intro:
+      'Las fichas dan estos pasos con las cifras de una cafetera, un café y un fuego concretos. Aquí se explica por qué está cada paso.',
+    items: [
+      {
+        step: 'Caliente el agua en un hervidor a la temperatura de la ficha.',
+        why: 'El agua caliente encierra menos aire, así que el café empieza a salir cerca de la temperatura de extracción y no antes de tiempo y frío. La temperatura de la ficha es la que extrae la mayor parte de la taza dentro del objetivo del café.',
+      },
+      {
+        step: 'Llene el depósito hasta la marca, justo bajo la válvula; nunca por encima.',
+        why: 'El agua se dilata al calentarse. El llenado de la ficha deja sitio para ello bajo la válvula, y agua suficiente para terminar la preparación antes de que el depósito se quede seco.',
+      },
+      {
+        step: 'Llene el filtro enrasado con el borde; no lo prense.',
+        why: 'Una cama enrasada y suelta deja pasar el agua al ritmo para el que se calculó la ficha. Una cama prensada o colmada es más compacta: la extracción se frena y la presión del depósito sube.',
+      },
+      {
+        step: 'Enrosque bien la parte superior, sujetando el depósito caliente con un paño.',
+        why: 'Una unión floja deja escapar vapor y café, y la cafetera no llega a dar el empuje que espera la ficha. El depósito ya está caliente por el agua del hervidor.',
+      },
+      {
+        step: 'Póngala al fuego en la posición de la ficha, con una llama que no sobresalga del depósito.',
+        why: 'La posición marca lo deprisa que sube la presión. Una llama más ancha que el depósito calienta el asa y la parte superior, no el agua.',
+      },
+      {
+        step: 'Retírela en el tiempo de la ficha, o antes si empieza a gorgotear.',
+        why: 'Al final sube el agua más caliente y detrás llega el vapor: esa parte de la taza sabe áspera.',
+      },
+      {
+        step: 'Enfríe el depósito bajo el grifo de agua fría, sujetándola solo por el asa, y sirva.',
+        why: 'Al enfriarlo, la presión del depósito cae enseguida: la extracción se detiene y la cafetera se puede abrir sin peligro.',
+      },
+    ],
+  },
+  cleaning: {
+    title: 'Limpieza y mantenimiento',
+    intro:
+      'Siga las instrucciones del fabricante de su cafetera; donde no coincidan con esta página, mandan las del fabricante. Deje que la cafetera se enfríe del todo antes de desmontarla.',
+    items: [
+      {
+        part: 'Después de cada uso',
+        care: 'Vacíe el poso, enjuague cada pieza con agua templada y déjelas secar por separado. El jabón y el lavavajillas oscurecen el aluminio; muchos fabricantes desaconsejan ambos.',
+      },
+      {
+        part: 'Junta',
+        care: 'El aro de goma bajo la parte superior cierra la cafetera. Revísela cada semana: si está agrietada, dura o aplastada, o si se escapa café o vapor por la unión, cámbiela por una de la medida del fabricante.',
+      },
+      {
+        part: 'Placa filtrante',
+        care: 'El disco perforado que sujeta la junta. Enjuáguela y mírela a contraluz: desatasque los orificios con un cepillo suave, nunca con un alfiler, que los agranda.',
+      },
+      {
+        part: 'Válvula de seguridad',
+        care: 'Manténgala limpia y no llene nunca por encima de ella, ni la tape ni la obstruya. Si el fabricante indica que se puede mover, compruebe que su vástago se mueve libremente. Si la válvula gotea, se atasca o ha soltado vapor durante una preparación, deje de usar la cafetera y pida al fabricante una válvula o un depósito nuevos.',
+      },
+      {
+        part: 'Cal',
+        care: 'El agua dura deja una costra blanca en el depósito. Elimínela como indique el fabricante; después prepare una cafetera y tire ese café.',
+      },
+    ],
+  },
+  glossary: {
+    title: 'Palabras de las fichas',
+    items: [
+      { term: 'Depósito', meaning: 'La parte inferior, la que contiene el agua.' },
+      {
+        term: 'Embudo y filtro',
+        meaning: 'El filtro contiene el café molido; su tubo baja hasta el agua del depósito.',
+      },
+      { term: 'Colector', meaning: 'La parte superior, donde llega el café.' },
+      {
+        term: 'Válvula de seguridad',
+        meaning:
+          'La pequeña válvula del costado del depósito. Deja salir vapor si la presión sube demasiado. El agua debe quedar siempre por debajo de ella.',
+      },
+      {
+        term: 'Nivel de llenado',
+        meaning: 'El nivel de agua que indica la ficha, justo bajo la válvula.',
+      },
+      {
+        term: 'Junta',
+        meaning: 'El aro de goma que cierra la unión de la parte superior y el depósito.',
+      },
+      { term: 'Placa filtrante', meaning: 'El disco perforado que queda bajo la junta.' },
+      {
+        term: 'Primer café',
+        meaning:
+          'El momento en que asoma el café por el caño, contado desde que la cafetera se pone al fuego.',
+      },
+      {
+        term: 'Gorgoteo, borboteo',
+        meaning:
+          'El ruido de la cafetera cuando queda poca agua en el depósito y el vapor se abre paso: el final de la preparación.',
+      },
+      {
+        term: 'Retirar del fuego',
+        meaning: 'Cuándo apartar la cafetera del fuego, contado desde que se pone al fuego.',
+      },
+      {
+        term: 'Objetivo',
+        meaning:
+          'El intervalo de temperatura del agua en que mejor se extrae el café; las fichas buscan extraer la mayor parte de la taza dentro de él.',
+      },
+      {
+        term: 'Posición',
+        meaning: 'Cada punto del mando del fuego, escrito como en el mando.',
+      },
+      {
+        term: 'Registro de preparaciones',
+        meaning:
+          'La anotación de preparaciones cronometradas; permite recalcular las fichas para su propia cafetera, su café y su fuego.',
+      },
+    ],
+  },
+  logSheet: {
+    title: 'Hoja de registro de preparaciones',
+    intro:
+      'Una hoja por cafetera, café y fuego. Cuente el tiempo desde que la cafetera se pone al fuego. Deje en blanco lo que no haya medido; cada preparación necesita al menos uno de los tiempos, el café obtenido o las lecturas.',
+    brewColumn: 'N.º',
+    readingsIntro: (label: string): string =>
+      `${label}: un tiempo y una lectura por pareja, por orden de tiempo.`,
+    usNote:
+      'Los archivos de registro llevan valores métricos: convierta estas lecturas al pasarlas a ellos (content/README.md, registros de preparaciones).',
+    time: 'Tiempo, s',
+    brewRows: 6,
+    readingPairs: 4,
+    logFields: {
+      pot: 'Cafetera',
+      coffee: 'Café',
+      stove: 'Fuego',
+      altitude_m: 'Altitud, m',
+      level: 'Posición',
+      fill_ml: 'Agua puesta, mL',
+      start_c: 'Agua al cerrar, °C',
+      room_c: 'Ambiente, °C',
+      first_coffee_s: 'Primer café, s',
+      sputter_s: 'Gorgoteo, s',
+      off_heat_s: 'Retirada, s',
+      yield_ml: 'Café obtenido, mL',
+      cup_g: 'Taza en la báscula, g',
+      water_c: 'Agua del depósito, °C',
+    } as Record<string, string>,
+    logFieldsUs: {
+      pot: 'Cafetera',
+      coffee: 'Café',
+      stove: 'Fuego',
+      altitude_m: 'Altitud, ft',
+      level: 'Posición',
+      fill_ml: 'Agua puesta, fl oz',
+      start_c: 'Agua al cerrar, °F',
+      room_c: 'Ambiente, °F',
+      first_coffee_s: 'Primer café, s',
+      sputter_s: 'Gorgoteo, s',
+      off_heat_s: 'Retirada, s',
+      yield_ml: 'Café obtenido, fl oz',
+      cup_g: 'Taza en la báscula, oz',
+      water_c: 'Agua del depósito, °F',
+    } as Record<string, string>,
+    readingUnit: (label: string): string => label.split(', ').pop() ?? label,
+    filledBy: 'Cronometrado por',
+    date: 'Fecha',
+  },
+  signOff: {
+    title: 'Validación de la formación',
+    intro:
+      'El formador marca cada punto cuando el alumno lo ha demostrado en una preparación real.',
+    checks: [
+      'Lee una ficha: encuentra la cafetera, el café y el fuego, y las cifras de cada paso.',
+      'Calienta el agua a la temperatura de la ficha y llena el depósito hasta la marca bajo la válvula.',
+      'Llena el filtro enrasado, sin prensar, y cierra la cafetera sujetando el depósito con un paño.',
+      'Pone el fuego como dice la ficha, con una llama que no sobresale del depósito.',
+      'Retira la cafetera en el tiempo de la ficha o al primer gorgoteo, y enfría el depósito.',
+      'Limpia la cafetera y revisa la junta, la placa filtrante y la válvula.',
+      'Sabe cuándo no debe usarse una cafetera, y que las instrucciones del fabricante van primero.',
+      'Cronometra una preparación y rellena una línea de la hoja de registro.',
+    ],
+    trainee: 'Alumno',
+    trainer: 'Formador',
+    date: 'Fecha',
+    signature: 'Firma',
+  },
 };
 
 export const es: Messages = {
@@ -636,5 +843,7 @@ export const es: Messages = {
   troubleshooting,
   plan,
   pdf,
+  print,
+  binder,
   planner,
 };

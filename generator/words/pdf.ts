@@ -32,7 +32,7 @@ export const pdfWords = {
     refused: (line: string, status: string): string => `${line} (${status})`,
   },
   doesNotFit: (card: string, paper: string, usedPt: number, availablePt: number): string =>
-    `the card "${card}" does not fit on one ${paper} page even in the smallest type (${Math.ceil(usedPt)} pt of text for ${Math.floor(availablePt)} pt): shorten its longest text in the YAML (a name, the notes) or print on larger paper (paper: in site.yaml).`,
+    `the card "${card}" does not fit on one ${paper} page with every text at 7 pt or more, even without its optional blocks (${Number.isFinite(usedPt) ? `${Math.ceil(usedPt)} pt of text for ${Math.floor(availablePt)} pt` : `it needs more than the ${Math.floor(availablePt)} pt the page has`}): print it on larger paper (paper: in site.yaml, or on its set), give an insert set fewer pots or stoves (pots:, stoves:), or shorten its longest text in the YAML (a name, the notes).`,
   /** Page number in the bottom margin of a set's or binder's pages. */
   pageNumber: (n: number, total: number): string => `${n} / ${total}`,
 } as const;

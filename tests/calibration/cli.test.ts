@@ -242,6 +242,7 @@ function changedLines(
 }
 
 describe('stovecard fit --write', () => {
+  // own rule: the note's σ is the fit's own, written as a percent of the value.
   it('on a copy of the demo content changes only the fitted values and keeps every comment and blank line', async () => {
     const dir = await mkdtemp(join(tmpdir(), 'stovecard-fit-write-'));
     try {

@@ -44,6 +44,15 @@ describe('loadCatalogue(content/), the demo', () => {
     ]);
   });
 
+  // own rule: `layout: binder` is a station set whose PDF has the binder's front matter
+  it('reads layout: binder as a station set marked binder (the demo’s training set)', () => {
+    expect(catalogue.site.sets.map((set) => [set.id, set.binder])).toEqual([
+      ['quorvel-bar', false],
+      ['barista-training', true],
+      ['shipping-inserts', false],
+    ]);
+  });
+
   // own rule: stovecard's handling of its own YAML input, not an outside value
   it('keeps the station cards between 20 and 40', () => {
     const station = catalogue.site.sets.filter((set) => set.layout === 'station');

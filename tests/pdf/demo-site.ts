@@ -11,7 +11,7 @@ import { PlanCache } from '../../generator/pipeline/plan-cache.ts';
 import { loadCatalogue } from '../../generator/content/index.ts';
 import type { Catalogue } from '../../generator/content/types.ts';
 import { setPdf, type SetPdf } from '../../generator/render/pdf/binder.ts';
-import { isTrainingSet, setCards } from '../../generator/render/pdf/site-pdfs.ts';
+import { isBinderSet, setCards } from '../../generator/render/pdf/site-pdfs.ts';
 import type { SetView, SiteData } from '../../generator/render/site-view.ts';
 
 export const BUILT_ON = '2024-05-01';
@@ -57,7 +57,7 @@ export function demoSetPdf(
     set,
     cards: setCards(set, demo.data),
     cardPdfs,
-    frontMatter: isTrainingSet(set)
+    frontMatter: isBinderSet(set)
       ? { method: demo.data.method, troubleshooting: demo.data.troubleshooting }
       : null,
     page: demo.data.site.page,

@@ -35,13 +35,18 @@ interface OutlineItem {
   readonly items: readonly OutlineItem[];
 }
 
-export async function readPdf(bytes: Uint8Array): Promise<ReadPdf> {
-  const doc = await getDocument({
+/** pdfjs on the file's bytes alone: no eval, no system fonts, no console output. */
+export function openPdf(bytes: Uint8Array) {
+  return getDocument({
     data: new Uint8Array(bytes),
     isEvalSupported: false,
     useSystemFonts: false,
     verbosity: 0,
   }).promise;
+}
+
+export async function readPdf(bytes: Uint8Array): Promise<ReadPdf> {
+  const doc = await openPdf(bytes);
   try {
     const sizes: [number, number][] = [];
     const text: string[] = [];

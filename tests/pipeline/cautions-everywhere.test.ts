@@ -73,10 +73,15 @@ beforeAll(async () => {
     const content = path.join(root, `content-${paper}`);
     await cp(DEMO_CONTENT, content, { recursive: true });
     const site = path.join(content, 'site.yaml');
-    await writeFile(
-      site,
-      (await readFile(site, 'utf8')).replace(/^paper: .*$/m, `paper: ${paper}`),
-    );
+    let yaml = (await readFile(site, 'utf8')).replace(/^paper: .*$/m, `paper: ${paper}`);
+    // A twelve-row insert does not fit A6 with its text at 7 pt (paper-floor.test.ts): on
+    // A6 the insert set covers one pot on one stove.
+    if (paper === 'A6')
+      yaml = yaml.replace(
+        '    # pots and stoves left out: every pot and every stove',
+        '    pots: [one-cup]\n    stoves: [bar-gas]',
+      );
+    await writeFile(site, yaml);
     const outDir = path.join(root, `site-${paper}`);
     await buildSite({
       contentDir: content,

@@ -57,6 +57,8 @@ describe('a fitted value’s note', () => {
     expect(bare.levels.every((l) => l.fitted && l.provenance === undefined)).toBe(true);
   });
 
+  // own rule: the spread is stovecard's own (2 σ of the heat; 5 % when a level is
+  // measured with no σ written), not an outside value.
   it('narrows the timing range to the fitted σ and is named on the card', async () => {
     const catalogue = await demoCatalogue();
     const pot = catalogue.pots.get('three-cup')!;

@@ -142,6 +142,11 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'plan.outsideCheckedRange': QUANTITIES.map((q) => [q, '1', '2', '3']),
   'plan.coolCup': [['12 %']],
   'plan.smallFill': [[]],
+  'print.leftOut': [[['fill-above-valve']], [['no-delivery', 'no-delivery', 'no-plan-fits']]],
+  'binder.cover.from': [['Roaster R']],
+  'binder.cover.built': [['03/12/2026']],
+  'binder.logSheet.readingsIntro': [['Cup, g']],
+  'binder.logSheet.readingUnit': [['Cup, g']],
   'pdf.stationTitle': [['Coffee C', 'in Pot A']],
   'pdf.insertTitle': [['Coffee C']],
   'pdf.setTitle': [['Bar']],
@@ -197,6 +202,10 @@ function texts(answer: unknown): string[] {
 }
 
 describe('words functions say something for sample facts', () => {
+  it('a set page says nothing about left-out cards when none were left out', () => {
+    for (const language of LANGUAGES) expect(wordsFor(language).print.leftOut([])).toBeNull();
+  });
+
   it('every function of the English catalogue has sample facts here', () => {
     const paths = [...functions(wordsFor('en')).keys()];
     expect(paths.filter((p) => !(p in SAMPLES))).toEqual([]);
@@ -242,6 +251,7 @@ describe('words functions say something for sample facts', () => {
       'pdf.contents.station',
       'pdf.contents.refused',
       'pdf.pageNumber',
+      'binder.logSheet.readingUnit',
     ]);
     const unchanged = Object.entries(SAMPLES)
       .filter(([path]) => !same.has(path))

@@ -21,6 +21,14 @@ import {
 } from '../card-view.ts';
 import type { MethodView, SetView, TroubleshootingView } from '../site-view.ts';
 import { voiceFor } from '../voice.ts';
+import {
+  cleaningItems,
+  coverItems,
+  glossaryItems,
+  logSheetItems,
+  signOffItems,
+  stepsItems,
+} from './binder-pages.ts';
 import { cardTitle, pageBox, type CardView } from './card.ts';
 import { openPdf, pageSizePt, pdfDate } from './document.ts';
 import type { Block, PageBox } from './layout.ts';
@@ -66,7 +74,7 @@ export interface SetPdfInput {
 export interface SetPdf {
   readonly bytes: Buffer;
   readonly pages: number;
-  /** Contents, method and troubleshooting pages (0 without front matter). */
+  /** Cover, contents and the binder's text pages (0 without front matter). */
   readonly frontMatterPages: number;
 }
 
@@ -306,7 +314,7 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   const [widthPt, heightPt] = pageSizePt(input.page.widthMm, input.page.heightMm);
   const textPage: PageBox = { widthPt, heightPt };
   const st = textPageStyle(input.page.paper);
-  const voice = voiceFor(input.set.language);
+  const voice = voiceFor(input.set.language, input.page.units);
   const pdfWords = voice.words.pdf;
   const foot = cautionsFoot(cautionsView('compact', voice), st);
   const open = openPdf({
@@ -331,11 +339,25 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   let parts: { title: string; items: FlowItem[]; pages: number }[] = [];
   let contents: FlowItem[] = [];
   let contentsPages = 0;
+  let cover: FlowItem[] = [];
+  let coverPages = 0;
   if (input.frontMatter) {
     const { method, troubleshooting } = input.frontMatter;
+    const words = voice.words.binder;
+    cover = coverItems(input.set, input.author, voice.date(input.builtOn), st, words);
+    coverPages = flowPages(measure, frame, cover, () => {});
     parts = [
       { title: method.title, items: methodItems(method, st), pages: 0 },
+      { title: words.steps.title, items: stepsItems(st, words), pages: 0 },
+      { title: words.cleaning.title, items: cleaningItems(st, words), pages: 0 },
+      { title: words.glossary.title, items: glossaryItems(st, words), pages: 0 },
       { title: troubleshooting.title, items: troubleshootingItems(troubleshooting, st), pages: 0 },
+      {
+        title: words.logSheet.title,
+        items: logSheetItems(st, input.page.units, words),
+        pages: 0,
+      },
+      { title: words.signOff.title, items: signOffItems(st, words), pages: 0 },
     ];
     for (const part of parts) part.pages = flowPages(measure, frame, part.items, () => {});
     // Page numbers only widen to another digit rarely; measure with the final ones.
@@ -352,15 +374,16 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
       }));
       return contentsItems(input.set, front, cards, st);
     };
-    contentsPages = flowPages(measure, frame, contentsFor(2), () => {});
-    contents = contentsFor(contentsPages + 1);
+    contentsPages = flowPages(measure, frame, contentsFor(coverPages + 2), () => {});
+    contents = contentsFor(coverPages + contentsPages + 1);
     const again = flowPages(measure, frame, contents, () => {});
     if (again !== contentsPages) {
       contentsPages = again;
-      contents = contentsFor(contentsPages + 1);
+      contents = contentsFor(coverPages + contentsPages + 1);
     }
   }
-  const frontMatterPages = contentsPages + parts.reduce((sum, part) => sum + part.pages, 0);
+  const frontMatterPages =
+    coverPages + contentsPages + parts.reduce((sum, part) => sum + part.pages, 0);
   const total = frontMatterPages + input.cards.length;
 
   let pageNo = 0;
@@ -372,10 +395,15 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
     foot(pen, st.marginPt, heightPt - st.marginPt - footH, widthPt - 2 * st.marginPt);
   };
   if (input.frontMatter) {
+    pen.group('Sect', () => flowPages(pen, frame, cover, newTextPage), {
+      title: input.set.title,
+    });
+    doc.outline.addItem(input.set.title, { pageNumber: 0 } as never);
+    const contentsFirst = pageNo;
     pen.group('Sect', () => flowPages(pen, frame, contents, newTextPage), {
       title: pdfWords.contents.heading,
     });
-    doc.outline.addItem(pdfWords.contents.heading, { pageNumber: 0 } as never);
+    doc.outline.addItem(pdfWords.contents.heading, { pageNumber: contentsFirst } as never);
     for (const part of parts) {
       const first = pageNo;
       pen.group('Sect', () => flowPages(pen, frame, part.items, newTextPage), {

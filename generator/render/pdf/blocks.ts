@@ -10,7 +10,14 @@ import { voiceFor } from '../voice.ts';
 const pdfWords = voiceFor().words.pdf;
 import { balancedSplit, type Block } from './layout.ts';
 import type { Pen } from './pen.ts';
-import { INK, PAPER, WARNING_FILL, type CardStyle, type TextFont } from './style.ts';
+import {
+  INK,
+  PAPER,
+  PDF_TEXT_FLOOR_PT,
+  WARNING_FILL,
+  type CardStyle,
+  type TextFont,
+} from './style.ts';
 
 /** Title (H1), subtitle and notes, over a heavy rule. */
 export function headerBlock(
@@ -45,7 +52,11 @@ export function stepHeading(
   st: CardStyle,
   font: TextFont = st.h2,
 ): number {
-  const numberFont: TextFont = { size: font.size * 0.95, bold: true, color: PAPER };
+  const numberFont: TextFont = {
+    size: Math.max(PDF_TEXT_FLOOR_PT, font.size * 0.95),
+    bold: true,
+    color: PAPER,
+  };
   const d = n === null ? 0 : font.size * 0.95 * 1.45;
   const space = n === null ? 0 : font.size * 0.4;
   const tx = x + d + space;

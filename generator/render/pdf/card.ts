@@ -42,8 +42,30 @@ export function pageBox(view: Pick<CardView, 'page'>): PageBox {
   return { widthPt, heightPt };
 }
 
-export function cardFrame(view: CardView, style: CardStyle): CardFrame {
-  return view.kind === 'station' ? stationFrame(view, style) : insertFrame(view, style);
+/**
+ * What a card may leave out, in the order it does, when it does not fit one page with
+ * every text at the floor (style.ts PDF_TEXT_FLOOR_PT) at any font step: first the
+ * chart, then the long cautions, the drawings and the extras. `long-cautions` sets the cautions in their
+ * short form (the same ten cautions in fewer words, as on A6), never fewer of them.
+ * Never the recipe, the refusal, the steps, the warnings or the cautions themselves.
+ * DEVELOPERS.md and content/README.md list the same order.
+ */
+export const OPTIONAL_ORDER = {
+  station: ['chart', 'long-cautions', 'cross-section', 'expect', 'qr-code'],
+  insert: ['pictograms', 'web-line', 'pot-names', 'long-cautions', 'tasting-notes', 'qr-code'],
+} as const;
+
+export type StationOptional = (typeof OPTIONAL_ORDER.station)[number];
+export type InsertOptional = (typeof OPTIONAL_ORDER.insert)[number];
+export type OptionalBlock = StationOptional | InsertOptional;
+
+export function cardFrame(
+  view: CardView,
+  style: CardStyle,
+  dropped: readonly OptionalBlock[] = [],
+): CardFrame {
+  const left = new Set<OptionalBlock>(dropped);
+  return view.kind === 'station' ? stationFrame(view, style, left) : insertFrame(view, style, left);
 }
 
 /** A card's document title, in its own language (English for a view without one). */
@@ -56,11 +78,22 @@ export function cardTitle(
     : pdfWords.insertTitle(view.title);
 }
 
-/** Measures the card at its paper's font steps; needs only a document for the fonts. */
+/**
+ * Measures the card at its paper's font steps; when no step fits, leaves out the optional
+ * blocks one by one in OPTIONAL_ORDER until one does (`dropped` says which). Needs only a
+ * document for the fonts.
+ */
 export function layoutCard(doc: PDFKit.PDFDocument, view: CardView): CardFit {
-  return fitCard(new Pen(doc, false), pageBox(view), view.page.paper, (style) =>
-    cardFrame(view, style),
-  );
+  const order: readonly OptionalBlock[] = OPTIONAL_ORDER[view.kind];
+  let fit: CardFit | null = null;
+  for (let n = 0; n <= order.length; n++) {
+    const dropped = order.slice(0, n);
+    fit = fitCard(new Pen(doc, false), pageBox(view), view.page.paper, (style) =>
+      cardFrame(view, style, dropped),
+    );
+    if (fit.fits) return n === 0 ? fit : { ...fit, dropped };
+  }
+  return { ...fit!, dropped: order };
 }
 
 export interface CardPage {
@@ -76,7 +109,8 @@ function addCardPage(open: OpenPdf, view: CardView): CardPage {
   const fit = layoutCard(open.doc, view);
   if (!fit.fits) throw new PdfLayoutError(view.id, fit);
   const pen = new Pen(open.doc, true, open.root);
-  pen.group('Art', () => placeCard(pen, page, fit.style, cardFrame(view, fit.style)), {
+  const dropped = (fit.dropped ?? []) as readonly OptionalBlock[];
+  pen.group('Art', () => placeCard(pen, page, fit.style, cardFrame(view, fit.style, dropped)), {
     title: view.title,
   });
   return { fit, warnings: pen.warnings };

@@ -19,6 +19,8 @@ const pdfWords = voiceFor().words.pdf;
 import { cautionsBlock, footerBlock, headerBlock, stepHeading, warningsBlock } from './blocks.ts';
 import { columns, stack, type Block, type CardFrame } from './layout.ts';
 import type { Pen } from './pen.ts';
+import type { InsertOptional } from './card.ts';
+import { cautions } from '../card-view.ts';
 import { INK, RULE_SOFT, VALVE, type CardStyle, type TextFont } from './style.ts';
 
 type ColumnKey = keyof InsertCardView['columns'];
@@ -105,7 +107,7 @@ function columnWidths(
   return pref.map((p) => p + extra);
 }
 
-function tableBlock(view: InsertCardView, st: CardStyle): Block {
+function tableBlock(view: InsertCardView, st: CardStyle, potNames = true): Block {
   const f: TableFonts = {
     head: st.tableHead,
     cell: st.table,
@@ -114,7 +116,7 @@ function tableBlock(view: InsertCardView, st: CardStyle): Block {
   };
   const pad = st.padding;
   const padY = st.padding * 0.7;
-  const showPot = !st.compact;
+  const showPot = !st.compact && potNames;
   return (pen, x, y, w) => {
     const widths = columnWidths(pen, view, f, pad, w, showPot);
     if (!widths) return Number.POSITIVE_INFINITY;
@@ -207,13 +209,14 @@ function rowHeight(
 
 /** One numbered step: its pictogram, the number, the words (a list item). */
 function stepBlock(step: InsertStep, st: CardStyle): Block {
-  const size = st.h2.size * 2.4;
+  // Without its pictogram (left out to fit: card.ts OPTIONAL_ORDER) the step starts at its number.
+  const size = step.pictogramSvg === '' ? 0 : st.h2.size * 2.4;
   const numberFont = { ...st.noteStrong };
   return (pen, x, y, w) => {
     let h = 0;
     pen.group('LI', () => {
-      pen.decoration(step.pictogramSvg, x, y, size);
-      const nx = x + size + st.padding;
+      if (size > 0) pen.decoration(step.pictogramSvg, x, y, size);
+      const nx = size > 0 ? x + size + st.padding : x;
       const label = pdfWords.stepNumber(step.n);
       const nw = pen.width('00', numberFont);
       pen.para('Lbl', label, nx, y, nw, numberFont, { noWrap: true });
@@ -249,8 +252,8 @@ function unsuitableBlock(view: InsertCardView, st: CardStyle): Block {
     });
 }
 
-function bodyBlock(view: InsertCardView, st: CardStyle): Block {
-  const table = tableBlock(view, st);
+function bodyBlock(view: InsertCardView, st: CardStyle, potNames = true): Block {
+  const table = tableBlock(view, st, potNames);
   const steps = stepsBlock(view, st);
   const unsuitable = unsuitableBlock(view, st);
   return (pen, x, y, w) =>
@@ -270,11 +273,34 @@ function bodyBlock(view: InsertCardView, st: CardStyle): Block {
 }
 
 /** The insert card's blocks at one style. */
-export function insertFrame(view: InsertCardView, st: CardStyle): CardFrame {
+export function insertFrame(
+  view: InsertCardView,
+  st: CardStyle,
+  dropped: ReadonlySet<InsertOptional | string> = new Set(),
+): CardFrame {
+  const shown: InsertCardView = {
+    ...view,
+    steps: dropped.has('pictograms')
+      ? view.steps.map((step) => ({ ...step, pictogramSvg: '' }))
+      : view.steps,
+    webLine: dropped.has('web-line') ? null : view.webLine,
+  };
   return {
-    header: headerBlock(view.title, view.subtitle, view.notes, st),
-    body: [bodyBlock(view, st), warningsBlock(view.warnings, st)],
-    bottom: [cautionsBlock(view.cautions, st)],
-    footer: footerBlock(view.footer, st),
+    header: headerBlock(
+      view.title,
+      view.subtitle,
+      dropped.has('tasting-notes') ? null : view.notes,
+      st,
+    ),
+    body: [bodyBlock(shown, st, !dropped.has('pot-names')), warningsBlock(view.warnings, st)],
+    bottom: [
+      cautionsBlock(
+        dropped.has('long-cautions')
+          ? cautions('compact', voiceFor(view.language, view.page.units))
+          : view.cautions,
+        st,
+      ),
+    ],
+    footer: footerBlock(dropped.has('qr-code') ? { ...view.footer, qrSvg: null } : view.footer, st),
   };
 }

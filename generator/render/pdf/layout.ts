@@ -35,6 +35,8 @@ export interface CardFit {
   /** Page height inside the margins, pt. */
   readonly availableHeightPt: number;
   readonly style: CardStyle;
+  /** Optional blocks left out so the card fits at the floor (card.ts OPTIONAL_ORDER). */
+  readonly dropped?: readonly string[];
 }
 
 /** Blocks one under another, `gap` apart (empty blocks take no gap). */

@@ -4,9 +4,9 @@
  *
  *   cards/<pot>--<coffee>--<stove>.pdf   each station card, beside its index.html folder
  *   inserts/<slug>.pdf                   each bag insert
- *   sets/<set>.pdf                       each set's cards in order; a training set (its id
- *                                        contains "training") opens with the binder's
- *                                        contents, method and troubleshooting pages
+ *   sets/<set>.pdf                       each set's cards in order; a set with
+ *                                        `layout: binder` opens with the binder's front
+ *                                        matter (binder.ts)
  *
  * The cards first: a set is assembled from its cards' PDFs (binder.ts), not drawn again.
  *
@@ -14,6 +14,7 @@
  */
 import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
+import { onPaper } from '../card-view.ts';
 import type { SetView, SiteData } from '../site-view.ts';
 import { cardPdf, type CardView } from './card.ts';
 import { setPdf, type FrontMatter } from './binder.ts';
@@ -38,12 +39,12 @@ export interface PdfReport {
   readonly ms: number;
 }
 
-/** A set gets the binder's front matter when its id says it is for training. */
-export function isTrainingSet(set: Pick<SetView, 'id'>): boolean {
-  return /training/i.test(set.id);
+/** A set gets the binder's front matter when it says `layout: binder`. */
+export function isBinderSet(set: Pick<SetView, 'binder'>): boolean {
+  return set.binder;
 }
 
-/** A training binder's method and troubleshooting pages, in the set's language. */
+/** A binder's method and troubleshooting pages, in the set's language. */
 export function frontMatterOf(set: Pick<SetView, 'language'>, data: SiteData): FrontMatter {
   return (
     data.frontMatter?.[set.language] ?? {
@@ -53,7 +54,7 @@ export function frontMatterOf(set: Pick<SetView, 'language'>, data: SiteData): F
   );
 }
 
-/** The set's cards as views, in the set's order. */
+/** The set's cards as views, in the set's order, laid out for the set's paper. */
 export function setCards(set: SetView, data: SiteData): CardView[] {
   const byPdf = new Map<string, CardView>();
   for (const card of [...data.stationCards, ...data.insertCards])
@@ -62,7 +63,7 @@ export function setCards(set: SetView, data: SiteData): CardView[] {
     const card = byPdf.get(link.pdfFile);
     if (!card)
       throw new Error(`PDF: set "${set.id}" lists ${link.pdfFile}, which no card view has`);
-    return card;
+    return onPaper(card, set.page.paper);
   });
 }
 
@@ -105,9 +106,16 @@ export async function writeSitePdfs(
     const pdf = await setPdf({
       set,
       cards: members,
-      cardPdfs: members.map((card) => cardPdfs.get(card.paths.pdfFile)!),
-      frontMatter: isTrainingSet(set) ? frontMatterOf(set, data) : null,
-      page: data.site.page,
+      // A set on other paper than the site's draws its cards again at that paper.
+      cardPdfs: await Promise.all(
+        members.map(async (card) =>
+          card.page.paper === data.site.page.paper
+            ? cardPdfs.get(card.paths.pdfFile)!
+            : (await cardPdf(card, { author, env })).bytes,
+        ),
+      ),
+      frontMatter: isBinderSet(set) ? frontMatterOf(set, data) : null,
+      page: set.page,
       author,
       builtOn: data.site.builtOn,
       env,

@@ -27,6 +27,9 @@ import {
 } from './blocks.ts';
 import { beside, type Block, type CardFrame } from './layout.ts';
 import { svgSize, type Pen } from './pen.ts';
+import type { StationOptional } from './card.ts';
+import { cautions } from '../card-view.ts';
+import { voiceFor } from '../voice.ts';
 import { MIN_TEXT_PT, VALVE, type CardStyle } from './style.ts';
 
 /** Smallest font size used inside an SVG drawing, px (its labels). */
@@ -88,7 +91,7 @@ function bigValue(
   return h;
 }
 
-function waterBlock(water: WaterStep, potName: string, st: CardStyle): Block {
+function waterBlock(water: WaterStep, potName: string, st: CardStyle, withDrawing = true): Block {
   const alt = water.crossSectionAlt;
   const drawing = figureBlock(water.crossSectionSvg, alt, st);
   const text: Block = (pen, x, y, w) => {
@@ -100,17 +103,23 @@ function waterBlock(water: WaterStep, potName: string, st: CardStyle): Block {
     h += bigValue(pen, water.fillVolume, water.fillMassText, x, y + h, w, st);
     return h + pen.para('P', water.fillLineText, x, y + h, w, st.note);
   };
-  const pair = beside(
-    {
-      block: text,
-      share: 0.4,
-      minWidth: (pen) =>
-        pen.width(`${water.fillVolume.value}\u00a0${water.fillVolume.unit}`, st.big) * 1.3,
-    },
-    { block: drawing, share: 0.6, minWidth: () => figureBesideWidth(water.crossSectionSvg, st) },
-    st.gutter,
-    st.gap,
-  );
+  const pair = !withDrawing
+    ? text
+    : beside(
+        {
+          block: text,
+          share: 0.4,
+          minWidth: (pen) =>
+            pen.width(`${water.fillVolume.value}\u00a0${water.fillVolume.unit}`, st.big) * 1.3,
+        },
+        {
+          block: drawing,
+          share: 0.6,
+          minWidth: () => figureBesideWidth(water.crossSectionSvg, st),
+        },
+        st.gutter,
+        st.gap,
+      );
   return (pen, x, y, w) =>
     pen.group('Sect', () => {
       const hh = stepHeading(pen, 1, water.heading, null, x, y, w, st);
@@ -241,11 +250,15 @@ function refusalBlock(refusal: RefusalBlock, st: CardStyle): Block {
 const textColumnMin = (st: CardStyle) => (pen: Pen) => pen.width('Fill the basket to the', st.note);
 
 /** The station card's blocks at one style. */
-export function stationFrame(view: StationCardView, st: CardStyle): CardFrame {
+export function stationFrame(
+  view: StationCardView,
+  st: CardStyle,
+  dropped: ReadonlySet<StationOptional | string> = new Set(),
+): CardFrame {
   const body: Block[] = [];
   const r = view.recipe;
   if (r) {
-    body.push(waterBlock(r.water, view.potName, st));
+    body.push(waterBlock(r.water, view.potName, st, !dropped.has('cross-section')));
     body.push(
       beside(
         { block: coffeeBlock(r.coffee, st), share: 1, minWidth: textColumnMin(st) },
@@ -255,18 +268,23 @@ export function stationFrame(view: StationCardView, st: CardStyle): CardFrame {
       ),
     );
     body.push(timesBlock(r.timings, st));
-    body.push(
-      beside(
-        {
-          block: chartBlock(r.chart, st),
-          share: 1.35,
-          minWidth: () => figureBesideWidth(r.chart.svg, st),
-        },
-        { block: expectBlock(r.expect, st), share: 1, minWidth: textColumnMin(st) },
-        st.gutter,
-        st.gap,
-      ),
-    );
+    const chart = !dropped.has('chart');
+    const expect = !dropped.has('expect');
+    if (chart && !expect) body.push(chartBlock(r.chart, st));
+    else if (!chart && expect) body.push(expectBlock(r.expect, st));
+    else if (chart && expect)
+      body.push(
+        beside(
+          {
+            block: chartBlock(r.chart, st),
+            share: 1.35,
+            minWidth: () => figureBesideWidth(r.chart.svg, st),
+          },
+          { block: expectBlock(r.expect, st), share: 1, minWidth: textColumnMin(st) },
+          st.gutter,
+          st.gap,
+        ),
+      );
   } else if (view.refusal) {
     body.push(refusalBlock(view.refusal, st));
   }
@@ -274,7 +292,14 @@ export function stationFrame(view: StationCardView, st: CardStyle): CardFrame {
   return {
     header: headerBlock(view.title, view.subtitle, null, st),
     body,
-    bottom: [cautionsBlock(view.cautions, st)],
-    footer: footerBlock(view.footer, st),
+    bottom: [
+      cautionsBlock(
+        dropped.has('long-cautions')
+          ? cautions('compact', voiceFor(view.language, view.page.units))
+          : view.cautions,
+        st,
+      ),
+    ],
+    footer: footerBlock(dropped.has('qr-code') ? { ...view.footer, qrSvg: null } : view.footer, st),
   };
 }

@@ -20,20 +20,29 @@ export const PAPER_STYLE: Record<PaperSize, { readonly k: number; readonly margi
   A5: { k: 1, marginMm: 7 },
   'half-letter': { k: 0.95, marginMm: 7 },
   A6: { k: 0.7, marginMm: 4.5 },
+  '4x6in': { k: 0.7, marginMm: 4.5 },
 };
 
 /** Font steps tried in order: the stylesheet's sizes first, then smaller. */
-export const FONT_STEPS: readonly number[] = [1, 0.95, 0.9, 0.85, 0.8, 0.75, 0.7, 0.65, 0.6];
-
-/** Smallest label a drawing or the chart may be scaled to, pt (fine print, as on a map). */
-export const MIN_TEXT_PT = 4.5;
+export const FONT_STEPS: readonly number[] = [
+  1, 0.95, 0.9, 0.85, 0.8, 0.75, 0.7, 0.65, 0.6, 0.55, 0.5,
+];
 
 /**
- * Smallest text of the card itself, pt. Font steps shrink every size, but none below
- * this: on A6 (k = 0.7) the cautions and footer would otherwise drop under 4 pt while the
- * large numerals still have room to give.
+ * The readable floor: no text of any PDF is set smaller, pt, the cautions, the footer,
+ * table heads, page numbers and the labels of the drawings and the chart included. Font
+ * steps shrink every size, but none below this; a card that does not fit at the floor
+ * leaves out its optional blocks (card.ts OPTIONAL_ORDER) instead. 7 pt is the smallest
+ * size common legibility guidance allows for printed body text read at arm's length
+ * (common practice, no source).
  */
-export const MIN_BODY_PT = 4.2;
+export const PDF_TEXT_FLOOR_PT = 7;
+
+/** Smallest label a drawing or the chart may be scaled to, pt: the floor. */
+export const MIN_TEXT_PT = PDF_TEXT_FLOOR_PT;
+
+/** Smallest text of the card itself, pt: the floor. */
+export const MIN_BODY_PT = PDF_TEXT_FLOOR_PT;
 
 /** How the body is arranged; tried in this order at each font step. */
 export interface Arrangement {
@@ -127,7 +136,7 @@ export function cardStyle(
     step,
     bodyColumns: arrangement.bodyColumns,
     listColumns: arrangement.listColumns,
-    compact: paper === 'A6',
+    compact: paper === 'A6' || paper === '4x6in',
     marginPt: cardMarginPt(paper),
     gap: 1.6 * MM * s,
     gutter: 3 * MM * s,
@@ -190,7 +199,7 @@ export interface TextPageStyle {
 export function textPageStyle(paper: PaperSize): TextPageStyle {
   const { k, marginMm } = PAPER_STYLE[paper];
   const f = (size: number, bold = false, color = INK): TextFont => ({
-    size: size * k,
+    size: Math.max(PDF_TEXT_FLOOR_PT, size * k),
     bold,
     color,
   });

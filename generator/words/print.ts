@@ -1,0 +1,60 @@
+/**
+ * Words of the print jobs: what a set page says about the combinations it left out and
+ * the binder's label (`setPrintWords`, in the language catalogue as `print`: en.ts, es.ts),
+ * and the build log's note on the blocks a card PDF left out (`printWords`, the CLI's
+ * English: terminal output, not printed on anything). Each sentence is a function of facts
+ * (counts and codes); the short reasons are the ones the insert rows use
+ * (cardWords.refusal.short), so one refusal reads the same everywhere.
+ */
+import type { RefusalCode } from '../planning/types.ts';
+import { cardWords } from './card.ts';
+
+const plural = (n: number, one: string, many: string): string =>
+  n === 1 ? `one ${one}` : `${n} ${many}`;
+
+/** The optional blocks of a card (render/pdf/card.ts OPTIONAL_ORDER), as the log names them. */
+const OPTIONAL_NAMES: Record<string, string> = {
+  chart: 'the chart',
+  'cross-section': 'the cross-section drawing',
+  'long-cautions': 'the long form of the cautions (the short form printed)',
+  expect: 'what to expect',
+  'qr-code': 'the QR code',
+  pictograms: 'the step pictograms',
+  'pot-names': 'the pot names under the cup sizes',
+  'tasting-notes': 'the tasting notes',
+  'web-line': 'the web address line',
+};
+
+export const printWords = {
+  /**
+   * A build-log line: the card PDFs that left out the same blocks to keep their text at
+   * the floor (the first few named, the rest counted).
+   */
+  dropped: (pdfs: readonly string[], blocks: readonly string[], floorPt: number): string => {
+    const shownPdfs = pdfs.slice(0, 3).join(', ');
+    const rest = pdfs.length > 3 ? ` and ${pdfs.length - 3} more` : '';
+    const what = blocks.map((b) => OPTIONAL_NAMES[b] ?? b).join(', ');
+    const count = pdfs.length === 1 ? 'one card PDF leaves' : `${pdfs.length} card PDFs leave`;
+    return `warning: ${count} out ${what} to keep every text at ${floorPt} pt or more on its paper: ${shownPdfs}${rest}`;
+  },
+} as const;
+
+/** What a set page and the index print about a set (the catalogue's `print`). */
+export const setPrintWords = {
+  /** A binder set's kind, on the index and its page (beside "Station cards", "Bag inserts"). */
+  binderLabel: 'Training binder',
+  /**
+   * A set page's note on the pot × coffee combinations it left out because none of them
+   * gets a recipe, with how many of each reason ("2 × base does not work on induction").
+   */
+  leftOut: (codes: readonly RefusalCode[]): string | null => {
+    if (codes.length === 0) return null;
+    const counts = new Map<RefusalCode, number>();
+    for (const code of codes) counts.set(code, (counts.get(code) ?? 0) + 1);
+    const reasons = [...counts.entries()]
+      .map(([code, n]) => `${n} × ${cardWords.refusal.short[code]}`)
+      .join('; ');
+    const what = plural(codes.length, 'combination', 'combinations');
+    return `Left out of this set: ${what} of pot and coffee that would get no recipe (${reasons}).`;
+  },
+} as const;
