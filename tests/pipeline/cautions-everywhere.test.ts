@@ -75,12 +75,17 @@ beforeAll(async () => {
     const site = path.join(content, 'site.yaml');
     let yaml = (await readFile(site, 'utf8')).replace(/^paper: .*$/m, `paper: ${paper}`);
     // A twelve-row insert does not fit A6 with its text at 7 pt (paper-floor.test.ts): on
-    // A6 the insert set covers one pot on one stove.
+    // A6 the insert sets (the English and the Spanish one) cover one pot on one stove.
     if (paper === 'A6')
-      yaml = yaml.replace(
-        '    # pots and stoves left out: every pot and every stove',
-        '    pots: [one-cup]\n    stoves: [bar-gas]',
-      );
+      yaml = yaml
+        .replace(
+          '    # pots and stoves left out: every pot and every stove',
+          '    pots: [one-cup]\n    stoves: [bar-gas]',
+        )
+        .replace(
+          /^( {4}language: es\n {4}coffees: \[.*\]\n)/m,
+          '$1    pots: [one-cup]\n    stoves: [bar-gas]\n',
+        );
     await writeFile(site, yaml);
     const outDir = path.join(root, `site-${paper}`);
     await buildSite({

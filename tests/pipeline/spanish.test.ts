@@ -135,7 +135,7 @@ sets:
       - { pot: four-cup-steel, coffee: ember-blend, stove: bar-induction }
   - id: barista-training
     title: Formación
-    layout: station
+    layout: binder
     cards:
       - { pot: three-cup, coffee: house-blend, stove: home-radiant }
   - id: bolsa
@@ -283,6 +283,17 @@ describeWithTools(['pdftotext'], 'the Spanish PDFs, as pdftotext reads them', ()
     expect(t).toContain(es.method.title);
     expect(t).toContain(es.troubleshooting.title);
     expect(t).not.toContain(en.method.title);
+    // The binder's own pages (cover, steps, cleaning, glossary, log sheet, sign-off).
+    for (const heading of [
+      es.binder.cover.kind,
+      es.binder.steps.title,
+      es.binder.cleaning.title,
+      es.binder.glossary.title,
+      es.binder.logSheet.title,
+      es.binder.signOff.title,
+    ])
+      expect(t).toContain(heading);
+    expect(t).not.toContain(en.binder.steps.title);
     expect(englishHits(t)).toEqual([]);
   });
 
