@@ -51,9 +51,7 @@ const RANGE = {
   permeability: range(coffeeSchema.properties.permeability_m2),
   heat: range(stoveSchema.properties.levels.items.properties.heat_to_pot_w),
   'heat-loss': range(potSchema.properties.base.properties.heat_loss_w_per_k),
-  tightening: range(
-    coffeeSchema.properties.bed.properties.tightening.properties.final_share,
-  ),
+  tightening: range(coffeeSchema.properties.bed.properties.tightening.properties.final_share),
 } as const;
 
 function range(spec: { minimum: number; maximum: number }): { min: number; max: number } {

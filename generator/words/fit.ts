@@ -77,8 +77,8 @@ function plainName(id: string): string {
       : id === 'tightening'
         ? "bed's tightening"
         : id === 'heat-loss'
-        ? "pot's heat loss"
-        : `stove's ${id.replace('heat:', '')} setting`;
+          ? "pot's heat loss"
+          : `stove's ${id.replace('heat:', '')} setting`;
 }
 
 const wouldInform: Record<KeptLine['parameterKind'], string> = {
