@@ -11,6 +11,7 @@ export type BrewSetupCode =
   | 'no-air-space'
   | 'negative-heat'
   | 'non-positive-permeability'
+  | 'bad-tightening'
   | 'heat-on-run-with-off-time';
 
 /** The setup cannot be brewed at all (e.g. the water would boil before sealing). */

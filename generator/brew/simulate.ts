@@ -23,7 +23,8 @@
  * up `retention × dose` (the bed warms as it is wetted); then the upper column fills to the
  * spout; only what passes after that reaches the cup (first coffee). The bed's full Darcy
  * resistance applies from the first millilitre (modelling choice: the dry grounds resist
- * at least as much as the wet bed). The coffee leaves the bed at the bed's temperature:
+ * at least as much as the wet bed). A tightening bed (setup.bed.tightening, bed.ts) loses a
+ * share of its permeability as water passes the wet grounds. The coffee leaves the bed at the bed's temperature:
  * the grounds start at room temperature and exchange heat perfectly with the water that
  * passes (a lumped node), so the first coffee is cooler than the water below. The
  * extraction temperature of each millilitre is the water's as it reaches the grounds (the
@@ -61,6 +62,7 @@ import { metalSpecificHeatJPerKgK } from '../physics/metals.ts';
 import { OutOfRangeError } from '../physics/errors.ts';
 import { darcyBedResistance, poiseuilleTubeResistance } from '../physics/flow-resistance.ts';
 import { potGeometry, type PotGeometry } from './geometry.ts';
+import { tighteningShare, type BedTightening } from './bed.ts';
 import { BrewSetupError, BrewDidNotFinishError, type BrewSetupCode } from './errors.ts';
 import { summariseExtraction } from './extraction.ts';
 import type { BrewEvent, BrewEventKind, BrewResult, BrewSetup, SeriesPoint } from './types.ts';
@@ -101,6 +103,10 @@ interface Constants {
   readonly retainedKg: number;
   readonly doseKg: number;
   readonly initialLevelM: number;
+  /** The bed's tightening (bed.ts), null for the classic bed of constant permeability. */
+  readonly tightening: BedTightening | null;
+  /** Density the passed volume is counted at (the water's at the start), kg/m³. */
+  readonly startDensity: number;
 }
 
 /** Quantities derived from a state, shared by the derivative, events and outputs. */
@@ -475,6 +481,12 @@ function prepare(setup: BrewSetup): Constants {
   check(setup.fillVolumeM3 < 0.98 * pot.sealedVolumeM3, 'fillVolumeM3', 'no-air-space');
   check(setup.heatInputW >= 0, 'heatInputW', 'negative-heat');
   check(bed.permeabilityM2 > 0, 'permeabilityM2', 'non-positive-permeability');
+  const tightening = bed.tightening ?? null;
+  check(
+    tightening === null || (tightening.finalShare > 0 && tightening.overM3 > 0),
+    'tightening',
+    'bad-tightening',
+  );
 
   const startDensity = region1(setup.startK, room.ambientPa).densityKgM3;
   const airVolume = pot.sealedVolumeM3 - setup.fillVolumeM3;
@@ -497,6 +509,8 @@ function prepare(setup: BrewSetup): Constants {
     retainedKg,
     doseKg,
     initialLevelM,
+    tightening,
+    startDensity,
   };
 }
 
@@ -564,14 +578,16 @@ function algebraic(c: Constants, y: Float64Array, a: Algebraic): LiquidSample {
     1,
     Math.max(0, (y[MD]! - c.bedWetKg) / (c.firstCoffeeKg - c.bedWetKg || 1)),
   );
+  // The classic bed keeps its permeability; a tightening bed loses a share of it as water
+  // passes the wet grounds (bed.ts): V from the bed-wet threshold on.
+  const permeability =
+    c.tightening === null
+      ? setup.bed.permeabilityM2
+      : setup.bed.permeabilityM2 *
+        tighteningShare(c.tightening, (y[MD]! - c.bedWetKg) / c.startDensity);
   const resistance =
     poiseuilleTubeResistance(muTube, geometry.tubeLengthM, setup.pot.tubeInnerDiameterM) +
-    darcyBedResistance(
-      muBed,
-      setup.pot.basketDepthM,
-      setup.bed.permeabilityM2,
-      geometry.bedAreaM2,
-    ) +
+    darcyBedResistance(muBed, setup.pot.basketDepthM, permeability, geometry.bedAreaM2) +
     poiseuilleTubeResistance(
       muBed,
       geometry.columnLengthM * columnFilled,

@@ -4,6 +4,8 @@
  * The model these quantities feed is generator/brew/simulate.ts (DEVELOPERS.md, "The brew model").
  */
 
+import type { BedTightening } from './bed.ts';
+
 export type BaseMaterial = 'aluminium' | 'stainless-steel';
 
 /** A stovetop pot's geometry and build, SI. */
@@ -42,6 +44,11 @@ export interface BedModel {
   readonly retentionKgPerKg: number;
   /** Target extraction band [low, high], K. */
   readonly targetBandK: readonly [number, number];
+  /**
+   * Optional: the permeability falls as water passes (bed.ts). Absent = the classic model
+   * of constant permeability, computed exactly as before.
+   */
+  readonly tightening?: BedTightening;
 }
 
 /** The room the pot is brewed in. */

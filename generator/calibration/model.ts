@@ -8,7 +8,7 @@
  */
 import { BrewSetupError } from '../brew/errors.ts';
 import { simulateBrew } from '../brew/simulate.ts';
-import type { BrewResult, PotModel } from '../brew/types.ts';
+import type { BedModel, BrewResult, PotModel } from '../brew/types.ts';
 import type { CoffeeEntry, LogEntry, LoggedBrew, PotEntry } from '../content/types.ts';
 import { brewSetup, roomModel } from '../planning/setup.ts';
 import { BrewNotSimulatedError } from './errors.ts';
@@ -36,7 +36,7 @@ export function simulateLoggedBrew(
   if (heatInputW === undefined) throw new Error(`no heat for level ${brew.level}`);
   const setup = brewSetup(
     { ...pot, heatLossWPerK: values.heatLossWPerK },
-    { ...coffee.bed, permeabilityM2: values.permeabilityM2 },
+    bedWith(coffee, values),
     roomModel({ ambientK: brew.ambientK, altitudeM }),
     {
       fillVolumeM3: brew.fillVolumeM3,
@@ -47,6 +47,18 @@ export function simulateLoggedBrew(
     },
   );
   return simulateBrew(setup);
+}
+
+/** The coffee's bed with the permeability (and, when fitted, the final share) of `values`. */
+function bedWith(coffee: CoffeeEntry, values: ModelValues): BedModel {
+  const { tightening } = coffee.bed;
+  return {
+    ...coffee.bed,
+    permeabilityM2: values.permeabilityM2,
+    ...(tightening && values.finalShare !== null
+      ? { tightening: { ...tightening, finalShare: values.finalShare } }
+      : {}),
+  };
 }
 
 export function forwardModel(

@@ -5,6 +5,9 @@
  *   permeability  the coffee bed's Darcy permeability k, m²       → coffees/<id>.yaml permeability_m2
  *   heat          heat reaching the pot at one stove level, W     → stoves/<id>.yaml levels[i].heat_to_pot_w
  *   heat-loss     the base's heat-loss coefficient U·A, W/K       → pots/<id>.yaml base.heat_loss_w_per_k
+ *   tightening    the bed's final share f of its first permeability
+ *                 (a candidate only when the coffee turns the
+ *                 tightening on, ../brew/bed.ts)                   → coffees/<id>.yaml bed.tightening.final_share
  * The fit works on their natural logarithms, so they stay positive and a step means the
  * same relative change whatever the unit.
  */
@@ -13,10 +16,10 @@ import potSchema from '../content/schemas/pot.schema.json' with { type: 'json' }
 import stoveSchema from '../content/schemas/stove.schema.json' with { type: 'json' };
 import type { CoffeeEntry, LogEntry, PotEntry, StoveEntry } from '../content/types.ts';
 
-export type ParameterKind = 'permeability' | 'heat' | 'heat-loss';
+export type ParameterKind = 'permeability' | 'heat' | 'heat-loss' | 'tightening';
 
 export interface Parameter {
-  /** `permeability`, `heat:<level>`, `heat-loss`. */
+  /** `permeability`, `heat:<level>`, `heat-loss`, `tightening`. */
   readonly id: string;
   readonly kind: ParameterKind;
   /** The stove level, for kind 'heat'. */
@@ -40,12 +43,15 @@ export interface ModelValues {
   readonly permeabilityM2: number;
   readonly heatW: ReadonlyMap<string, number>;
   readonly heatLossWPerK: number;
+  /** The bed's final share (tightening on), or null: the coffee's bed as it is. */
+  readonly finalShare: number | null;
 }
 
 const RANGE = {
   permeability: range(coffeeSchema.properties.permeability_m2),
   heat: range(stoveSchema.properties.levels.items.properties.heat_to_pot_w),
   'heat-loss': range(potSchema.properties.base.properties.heat_loss_w_per_k),
+  tightening: range(coffeeSchema.properties.bed.properties.tightening.properties.final_share),
 } as const;
 
 function range(spec: { minimum: number; maximum: number }): { min: number; max: number } {
@@ -89,6 +95,20 @@ export function candidateParameters(
       ...RANGE['heat-loss'],
       priorSigmaLn: 0.3,
     },
+    // Only a coffee that turns the tightening on has it to fit (off by default: the
+    // classic bed has no such parameter). A share the entry states: ±30 %, our choice;
+    // one `fit --write` measured: its σ.
+    ...(coffee.bed.tightening
+      ? [
+          {
+            id: 'tightening',
+            kind: 'tightening' as const,
+            prior: coffee.bed.tightening.finalShare,
+            ...RANGE.tightening,
+            priorSigmaLn: coffee.tighteningProvenance?.sigmaRel ?? 0.3,
+          },
+        ]
+      : []),
   ];
 }
 
@@ -99,12 +119,14 @@ export function modelValues(
 ): ModelValues {
   let permeabilityM2 = NaN;
   let heatLossWPerK = NaN;
+  let finalShare: number | null = null;
   const heatW = new Map<string, number>();
   parameters.forEach((parameter, i) => {
     const value = values[i]!;
     if (parameter.kind === 'permeability') permeabilityM2 = value;
     else if (parameter.kind === 'heat-loss') heatLossWPerK = value;
+    else if (parameter.kind === 'tightening') finalShare = value;
     else heatW.set(parameter.level!, value);
   });
-  return { permeabilityM2, heatW, heatLossWPerK };
+  return { permeabilityM2, heatW, heatLossWPerK, finalShare };
 }

@@ -57,7 +57,7 @@ export interface FitReport {
   readonly potId: string;
   readonly coffeeId: string;
   readonly stoveId: string;
-  /** In the order: permeability, heat per level (gentlest first), heat loss. */
+  /** In the order: permeability, heat per level (gentlest first), heat loss, tightening (when on). */
   readonly estimates: readonly Estimate[];
   readonly residuals: readonly Residual[];
   readonly observationCount: number;

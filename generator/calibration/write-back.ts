@@ -48,6 +48,15 @@ export function plannedEdits(report: FitReport, stove: StoveEntry): EntryEdit[] 
         return [{ entry: 'coffee', path: ['permeability_m2'], value, parameterId }];
       case 'heat-loss':
         return [{ entry: 'pot', path: ['base', 'heat_loss_w_per_k'], value, parameterId }];
+      case 'tightening':
+        return [
+          {
+            entry: 'coffee',
+            path: ['bed', 'tightening', 'final_share'],
+            value: Math.min(1, value),
+            parameterId,
+          },
+        ];
       case 'heat': {
         const index = stove.levels.findIndex((level) => level.label === parameter.level);
         return [{ entry: 'stove', path: ['levels', index, 'heat_to_pot_w'], value, parameterId }];

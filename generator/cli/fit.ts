@@ -305,6 +305,7 @@ const UNIT: Readonly<Record<Parameter['kind'], string>> = {
   permeability: 'm²',
   heat: 'W',
   'heat-loss': 'W/K',
+  tightening: '',
 };
 
 function label(
@@ -322,6 +323,8 @@ function label(
       };
     case 'heat-loss':
       return { key: 'heat_loss_w_per_k', owner: loaded.pot.id, unit: UNIT['heat-loss'] };
+    case 'tightening':
+      return { key: 'bed.tightening.final_share', owner: loaded.coffee.id, unit: UNIT.tightening };
   }
 }
 
@@ -456,6 +459,15 @@ export function fitText(
         return [fitWords.plainPermeability(loaded.coffee.name, pct, e.entangledWith)];
       case 'heat-loss':
         return [fitWords.plainHeatLoss(loaded.pot.name, sig(e.value, 2), pct)];
+      case 'tightening':
+        return [
+          fitWords.plainTightening(
+            loaded.coffee.name,
+            String(Math.round(e.value * 100)),
+            pct,
+            e.entangledWith,
+          ),
+        ];
     }
   });
   const parts = report.estimates.flatMap((e) =>
@@ -593,5 +605,9 @@ export function fitJson(
 }
 
 function entryOf(parameter: Parameter): EntryKind {
-  return parameter.kind === 'permeability' ? 'coffee' : parameter.kind === 'heat' ? 'stove' : 'pot';
+  return parameter.kind === 'permeability' || parameter.kind === 'tightening'
+    ? 'coffee'
+    : parameter.kind === 'heat'
+      ? 'stove'
+      : 'pot';
 }

@@ -8,7 +8,12 @@ import type { Checked, ValidFile } from './entry-file.ts';
 import { GRIND_PERMEABILITY_M2 } from './grind-permeability.ts';
 import type { ContentIssue } from './issues.ts';
 import type { CoffeeEntry, GrindClass } from './types.ts';
-import { celsiusToK, gramsPerGramToKgPerKg, gramsPerMlToKgPerM3 } from './units.ts';
+import {
+  celsiusToK,
+  gramsPerGramToKgPerKg,
+  gramsPerMlToKgPerM3,
+  millilitresToM3,
+} from './units.ts';
 import { issueAt, refAt, type YamlSource } from './yaml-source.ts';
 
 /** Extraction band when the file gives none, °C: SCA Golden Cup Standard (revised 2015), 93.0 °C ± 3 °C (200 °F ± 5 °F) at the point of contact. */
@@ -24,6 +29,9 @@ export interface CoffeeYaml {
   readonly retention_g_per_g: number;
   readonly target_c?: readonly [number, number];
   readonly delivery_window_s?: readonly [number, number];
+  readonly bed?: {
+    readonly tightening?: { readonly final_share: number; readonly over_ml: number };
+  };
   readonly notes?: string;
 }
 
@@ -47,6 +55,10 @@ export function buildCoffee(file: ValidFile<CoffeeYaml>): Checked<CoffeeEntry> {
   const [lowC, highC] = data.target_c ?? DEFAULT_TARGET_C;
   const provenance =
     data.permeability_m2 === undefined ? undefined : provenanceAt(source, ['permeability_m2']);
+  const tightening = data.bed?.tightening;
+  const tighteningProvenance = tightening
+    ? provenanceAt(source, ['bed', 'tightening', 'final_share'])
+    : undefined;
   const entry: CoffeeEntry = {
     kind: 'coffee',
     id: file.id,
@@ -61,9 +73,19 @@ export function buildCoffee(file: ValidFile<CoffeeYaml>): Checked<CoffeeEntry> {
       bulkDensityKgM3: gramsPerMlToKgPerM3(data.bulk_density_g_ml),
       retentionKgPerKg: gramsPerGramToKgPerKg(data.retention_g_per_g),
       targetBandK: [celsiusToK(lowC), celsiusToK(highC)],
+      // Absent: the classic bed (no key at all, so plans and cache keys stay as they were).
+      ...(tightening
+        ? {
+            tightening: {
+              finalShare: tightening.final_share,
+              overM3: millilitresToM3(tightening.over_ml),
+            },
+          }
+        : {}),
     },
     permeabilityAssumed: data.permeability_m2 === undefined,
     ...(provenance ? { permeabilityProvenance: provenance } : {}),
+    ...(tighteningProvenance ? { tighteningProvenance } : {}),
     deliveryWindowS: data.delivery_window_s
       ? [data.delivery_window_s[0], data.delivery_window_s[1]]
       : null,

@@ -44,6 +44,8 @@ export interface CoffeeEntry extends EntryBase {
   readonly permeabilityAssumed: boolean;
   /** Which log measured permeability_m2, when, and its σ (provenance.ts). */
   readonly permeabilityProvenance?: Provenance;
+  /** Which log measured bed.tightening.final_share, when, and its σ (provenance.ts). */
+  readonly tighteningProvenance?: Provenance;
   /**
    * Delivery phase (first coffee to off-heat) a three-cup pot's plan must fit in, s; null
    * when the file gives none. Smaller pots scale it (planning/delivery.ts).

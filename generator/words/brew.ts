@@ -8,6 +8,7 @@ const setupProblems: Record<BrewSetupCode, string> = {
   'no-air-space': 'no air space is left in the base',
   'negative-heat': 'heat input must not be negative',
   'non-positive-permeability': 'permeability must be positive',
+  'bad-tightening': 'the bed tightening needs a final share above 0 and a positive volume',
   'heat-on-run-with-off-time': 'a heat-on run leaves the heat on: leave heatOffAtS out',
 };
 

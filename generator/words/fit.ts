@@ -35,7 +35,7 @@ export type KeptReason =
     };
 
 export interface KeptLine extends ParameterLabel {
-  readonly parameterKind: 'permeability' | 'heat' | 'heat-loss';
+  readonly parameterKind: 'permeability' | 'heat' | 'heat-loss' | 'tightening';
   readonly value: string;
   readonly reason: KeptReason;
 }
@@ -74,9 +74,11 @@ function plainName(id: string): string {
     ? "grounds' water retention"
     : id === 'permeability'
       ? 'coffee bed'
-      : id === 'heat-loss'
-        ? "pot's heat loss"
-        : `stove's ${id.replace('heat:', '')} setting`;
+      : id === 'tightening'
+        ? "bed's tightening"
+        : id === 'heat-loss'
+          ? "pot's heat loss"
+          : `stove's ${id.replace('heat:', '')} setting`;
 }
 
 const wouldInform: Record<KeptLine['parameterKind'], string> = {
@@ -85,6 +87,8 @@ const wouldInform: Record<KeptLine['parameterKind'], string> = {
   heat: 'a first-coffee or sputter time at that level informs it',
   'heat-loss':
     'probe readings of the water through a long, gentle brew, or many brews at different start temperatures, inform it',
+  tightening:
+    'scale readings of the cup (cup_g) through the delivery of a brew or two inform it; first-coffee times hardly depend on it',
 };
 
 function reasonWords(reason: KeptReason): string {
@@ -106,7 +110,8 @@ export const fitWords = {
     '',
     "Calibrates from a brew log (content/logs/<id>.yaml): the coffee's permeability, the heat",
     "each stove level used puts into the pot and, when the log can tell, the pot's heat-loss",
-    'coefficient U·A, by least squares of the simulated brews against what was timed, weighed',
+    "coefficient U·A and (when the coffee turns on bed.tightening) the bed's final share,",
+    'by least squares of the simulated brews against what was timed, weighed',
     'and measured. Prints each value ± 1 σ, every observation against the model, and the values',
     "the log cannot pin down (those keep the entry's value).",
     '',
@@ -151,6 +156,13 @@ export const fitWords = {
     `  Your ${stove}'s ${level} puts about ${watts} W into this pot, give or take ${percent} %${entangled.length ? ` (part of that doubt is the ${entangled.map(plainName).join(' and ')}, which this log cannot separate)` : ''}.`,
   plainPermeability: (coffee: string, percent: string, entangled: readonly string[]): string =>
     `  ${coffee} lets water through the bed as measured, give or take ${percent} %${entangled.length ? ` (not separable from the ${entangled.map(plainName).join(' and ')})` : ''}.`,
+  plainTightening: (
+    coffee: string,
+    sharePercent: string,
+    percent: string,
+    entangled: readonly string[],
+  ): string =>
+    `  ${coffee}'s bed tightens as it brews: once most of the water has passed it lets through about ${sharePercent} % of what it did at first, give or take ${percent} %${entangled.length ? ` (not separable from the ${entangled.map(plainName).join(' and ')})` : ''}.`,
   plainHeatLoss: (pot: string, value: string, percent: string): string =>
     `  The ${pot} loses about ${value} W for each °C above the room, give or take ${percent} %.`,
   plainMisfit: (brews: readonly number[]): string =>

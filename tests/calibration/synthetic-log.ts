@@ -22,6 +22,8 @@ export interface Truth {
   /** Heat reaching the pot per level label, W. */
   readonly heatW: Readonly<Record<string, number>>;
   readonly heatLossWPerK: number;
+  /** The bed's final share, for a coffee that turns the tightening on (else its own bed). */
+  readonly finalShare?: number;
 }
 
 /** One brew to make: what was set, and what to record. */
@@ -78,6 +80,7 @@ export function syntheticBrews(
     permeabilityM2: truth.permeabilityM2,
     heatW: new Map(Object.entries(truth.heatW)),
     heatLossWPerK: truth.heatLossWPerK,
+    finalShare: truth.finalShare ?? null,
   };
   const jitter = (halfWidth: number): number => (noise ? (2 * noise.random() - 1) * halfWidth : 0);
   return plans.map((plan) => {
