@@ -124,10 +124,7 @@ export function crossSection(input: CrossSectionInput): CrossSection {
   const spoutY = y(pot.spoutHeightM);
   const tubeW = Math.max(3, pot.tubeInnerDiameterM * s);
   const basketW = Math.min(potWidth - 2, pot.basketDiameterM * s);
-  const gap = lengthDown(
-    input.belowValveM ?? pot.valveHeightM - input.fillHeightM,
-    voice,
-  ).text;
+  const gap = lengthDown(input.belowValveM ?? pot.valveHeightM - input.fillHeightM, voice).text;
 
   const labelX = potRightX + VALVE_STUB_PX + LEADER_PX;
   const labels: Label[] = [

@@ -82,12 +82,7 @@ function markOf(units: Units | undefined): string {
 }
 
 /** A number and its unit, written with the style's decimal mark (default "."). */
-export function quantity(
-  value: number,
-  digits: number,
-  unit: string,
-  style?: Units,
-): Quantity {
+export function quantity(value: number, digits: number, unit: string, style?: Units): Quantity {
   const v = fixed(value, digits, style);
   return { value: v, unit, text: `${v}${NBSP}${unit}` };
 }
