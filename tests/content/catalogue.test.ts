@@ -41,6 +41,8 @@ describe('loadCatalogue(content/), the demo', () => {
       ['quorvel-bar', 'station'],
       ['barista-training', 'station'],
       ['shipping-inserts', 'insert'],
+      ['quorvel-barra', 'station'],
+      ['fichas-bolsa', 'insert'],
     ]);
   });
 
@@ -50,6 +52,8 @@ describe('loadCatalogue(content/), the demo', () => {
       ['quorvel-bar', false],
       ['barista-training', true],
       ['shipping-inserts', false],
+      ['quorvel-barra', false],
+      ['fichas-bolsa', false],
     ]);
   });
 
