@@ -5,6 +5,8 @@
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { simulateBrew } from '../../generator/brew/simulate.ts';
+import { tighteningShare } from '../../generator/brew/bed.ts';
+import { integrate } from '../../generator/numerics/dormand-prince.ts';
 import { C, permeableBed, referenceSetup } from './fixtures.ts';
 
 const digest = (value: unknown): string =>
@@ -42,5 +44,34 @@ describe('tightening on', () => {
     for (let i = 1; i < delivery.length; i++) {
       expect(delivery[i]!).toBeGreaterThan(delivery[i - 1]!);
     }
+  });
+});
+
+describe('the share s(V) in a flow of constant driving pressure', () => {
+  // closed form: Darcy at constant pressure gives dV/dt = a·s(V) with a the flow through
+  // the fresh bed; with s(V) = f + (1 − f)·e^(−V/V_c) and V(0) = 0,
+  // V(t) = V_c·ln((e^(a·f·t/V_c) − (1 − f))/f). Integrating the share with the engine's
+  // integrator must land on it; late on, the flow tends to the classic bed at k0·f.
+  it.each([0.2, 0.6, 0.9])('f = %s: the integrated volume follows V(t) of the closed form', (f) => {
+    const tightening = { finalShare: f, overM3: 40e-6 };
+    const a = 1.5e-6; // m³/s through the fresh bed
+    const exact = (t: number) =>
+      tightening.overM3 * Math.log((Math.exp((a * f * t) / tightening.overM3) - (1 - f)) / f);
+    for (const tEnd of [10, 40, 120]) {
+      const out = integrate(
+        (_t, y, dydt) => {
+          dydt[0] = a * tighteningShare(tightening, y[0]!);
+        },
+        0,
+        new Float64Array([0]),
+        tEnd,
+        { rtol: 1e-9, atol: 1e-15 },
+      );
+      expect(out.kind).toBe('finished');
+      expect(Math.abs(out.y[0]! - exact(tEnd)) / exact(tEnd)).toBeLessThan(1e-7);
+    }
+    // The slope far past V_c: the classic bed's flow at k0·f.
+    const late = 40 * tightening.overM3;
+    expect(a * tighteningShare(tightening, late)).toBeCloseTo(a * f, 12);
   });
 });
