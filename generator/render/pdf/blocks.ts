@@ -3,7 +3,8 @@
  * headings, lists, the warnings box, the cautions and the footer. They place the views'
  * strings as they are; nothing is reworded or recomputed here.
  */
-import type { Cautions, Footer, Warnings } from '../card-view.ts';
+import { cautions, type Cautions, type Footer, type Warnings } from '../card-view.ts';
+import type { UnitSystem } from '../../content/types.ts';
 import { voiceFor } from '../voice.ts';
 
 /** Step numbers, list markers and bullets: the same figures in every catalogue there is. */
@@ -185,6 +186,21 @@ export function warningsBlock(warnings: Warnings | null, st: CardStyle): Block {
 }
 
 /** The safety cautions: a rule, the heading in the valve's red, the list, the deferral to the maker. */
+/**
+ * The cautions a PDF card prints: the view's own, or their short form in the card's
+ * language and units when the 7 pt floor dropped the long form (card.ts, the drop order).
+ */
+export function shownCautions(
+  view: {
+    readonly cautions: Cautions;
+    readonly language: string;
+    readonly page: { readonly units: UnitSystem };
+  },
+  short: boolean,
+): Cautions {
+  return short ? cautions('compact', voiceFor(view.language, view.page.units)) : view.cautions;
+}
+
 export function cautionsBlock(cautions: Cautions, st: CardStyle): Block {
   const columns = st.compact ? 1 : st.listColumns;
   // The compact form (small paper) runs on as one paragraph: a list's line per item is the room it lacks.

@@ -16,11 +16,17 @@ import { voiceFor } from '../voice.ts';
 
 /** Step numbers: the same figures in every catalogue there is. */
 const pdfWords = voiceFor().words.pdf;
-import { cautionsBlock, footerBlock, headerBlock, stepHeading, warningsBlock } from './blocks.ts';
+import {
+  cautionsBlock,
+  footerBlock,
+  headerBlock,
+  shownCautions,
+  stepHeading,
+  warningsBlock,
+} from './blocks.ts';
 import { columns, stack, type Block, type CardFrame } from './layout.ts';
 import type { Pen } from './pen.ts';
 import type { InsertOptional } from './card.ts';
-import { cautions } from '../card-view.ts';
 import { INK, RULE_SOFT, VALVE, type CardStyle, type TextFont } from './style.ts';
 
 type ColumnKey = keyof InsertCardView['columns'];
@@ -293,14 +299,7 @@ export function insertFrame(
       st,
     ),
     body: [bodyBlock(shown, st, !dropped.has('pot-names')), warningsBlock(view.warnings, st)],
-    bottom: [
-      cautionsBlock(
-        dropped.has('long-cautions')
-          ? cautions('compact', voiceFor(view.language, view.page.units))
-          : view.cautions,
-        st,
-      ),
-    ],
+    bottom: [cautionsBlock(shownCautions(view, dropped.has('long-cautions')), st)],
     footer: footerBlock(dropped.has('qr-code') ? { ...view.footer, qrSvg: null } : view.footer, st),
   };
 }

@@ -22,14 +22,13 @@ import {
   headerBlock,
   labelLine,
   listBlock,
+  shownCautions,
   stepHeading,
   warningsBlock,
 } from './blocks.ts';
 import { beside, type Block, type CardFrame } from './layout.ts';
 import { svgSize, type Pen } from './pen.ts';
 import type { StationOptional } from './card.ts';
-import { cautions } from '../card-view.ts';
-import { voiceFor } from '../voice.ts';
 import { MIN_TEXT_PT, VALVE, type CardStyle } from './style.ts';
 
 /** Smallest font size used inside an SVG drawing, px (its labels). */
@@ -292,14 +291,7 @@ export function stationFrame(
   return {
     header: headerBlock(view.title, view.subtitle, null, st),
     body,
-    bottom: [
-      cautionsBlock(
-        dropped.has('long-cautions')
-          ? cautions('compact', voiceFor(view.language, view.page.units))
-          : view.cautions,
-        st,
-      ),
-    ],
+    bottom: [cautionsBlock(shownCautions(view, dropped.has('long-cautions')), st)],
     footer: footerBlock(dropped.has('qr-code') ? { ...view.footer, qrSvg: null } : view.footer, st),
   };
 }
