@@ -282,7 +282,12 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     if (
       coldBrew.endReason !== 'sputter' &&
       coldBrew.peakGaugePa <= limitPa &&
-      coldBrew.extraction
+      coldBrew.extraction &&
+      run(room.ambientK, chosen.levelIndex, {
+        offS: coldChoice.offS,
+        scale: highCorner,
+        search: true,
+      }).peakGaugePa <= limitPa
     ) {
       chosen = coldChoice;
       brew = coldBrew;
@@ -290,9 +295,17 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   }
   const offCupM3 = brew.events.find((e) => e.kind === 'heat-off')?.cupM3 ?? brew.yieldM3;
   // The corners spread the timings and the peak into ranges: search accuracy is plenty.
-  const corners = cornersOf(spread).map((scale) =>
-    run(chosen.startK, chosen.levelIndex, { series: true, scale, search: true }),
-  );
+  // Each is one heat-on run, whose cup curve dates the off-heat time; its peak is the one
+  // the card's rule gives (off the heat at the off-heat time, or at the sputter if that
+  // comes first), the rule the high corner's check above used, so the printed range never
+  // passes the limit that check keeps.
+  const corners = cornersOf(spread).map((scale) => {
+    simulations += 2;
+    const heatOn = simulateHeatOn(
+      setupOf(chosen.startK, chosen.levelIndex, { series: true, scale, search: true }),
+    );
+    return { ...heatOn.result, peakGaugePa: heatOn.heatOffAt(chosen.offS).peakGaugePa };
+  });
   const firstTimes = [
     brew.firstCoffeeS!,
     ...corners.map((r) => r.firstCoffeeS ?? brew.firstCoffeeS!),

@@ -170,3 +170,30 @@ describe('the planner’s preferences', () => {
     expect(cupPenalty(30e-6, 75e-6)).toBeGreaterThan(cupPenalty(60e-6, 75e-6));
   });
 });
+
+describe('a bed that tightens as it brews (generator/brew/bed.ts), on the invented pots', () => {
+  // own rule: the planner's contract (the half-valve limit), not an outside value. A bed
+  // keeping 30 % of its permeability raises the late pressure most; the printed range is
+  // the card's rule (off the heat at the off-heat time), the rule the limit is checked on.
+  it('keeps every printed peak, corners included, under half the valve', () => {
+    const tightening = coffeeEntry({
+      permeabilityM2: 0.6e-12,
+      tightening: { finalShare: 0.3, overM3: 60e-6 },
+    });
+    for (const [pn, pot] of Object.entries(pots))
+      for (const [sn, stove] of Object.entries(stoves)) {
+        const plan = planCard({
+          pot,
+          coffee: tightening,
+          stove,
+          room: seaLevel,
+          kettlePresetsK: presets,
+        });
+        if (plan.refused) continue;
+        expect(plan.peakGaugeRangePa.highPa, `${pn}/${sn}`).toBeLessThanOrEqual(
+          PRESSURE_LIMIT_SHARE_OF_VALVE * pot.model.valveOpeningGaugePa,
+        );
+        expect(plan.peakGaugeRangePa.lowPa, `${pn}/${sn}`).toBeLessThanOrEqual(plan.peakGaugePa);
+      }
+  });
+});
