@@ -16,7 +16,8 @@ import { buildLog, type LogYaml } from './log.ts';
 import { buildPot } from './pot.ts';
 import type { KnownIds } from './references.ts';
 import { ID_PATTERN, idLike } from './ids.ts';
-import { buildSite, type SiteYaml } from './site.ts';
+import { buildSite, withBrand, type SiteYaml } from './site.ts';
+import { loadBrand } from './brand.ts';
 import { buildStove } from './stove.ts';
 import type { Catalogue, EntryBase, SiteEntry } from './types.ts';
 
@@ -193,18 +194,30 @@ export async function loadCatalogue(contentDir: string): Promise<Catalogue> {
   const noSite: Checked<SiteEntry> = {
     issues: [new ContentIssue('missing-file', wholeFile(SITE_FILE), message('missingSiteFile'))],
   };
-  const [logEntries, site] = await Promise.all([
+  let siteFile: ValidFile<SiteYaml> | null = null;
+  const [logEntries, siteAlone] = await Promise.all([
     loadAll('log', logs.files, (file: ValidFile<LogYaml>) => buildLog(file, references)),
     siteLeaves
       ? { issues: [linkOutside(SITE_FILE)] }
       : rootNames.includes(SITE_FILE)
-        ? loadEntry('site', join(contentDir, SITE_FILE), SITE_FILE, (file: ValidFile<SiteYaml>) =>
-            buildSite(file, known),
-          )
+        ? loadEntry('site', join(contentDir, SITE_FILE), SITE_FILE, (file: ValidFile<SiteYaml>) => {
+            siteFile = file;
+            return buildSite(file, known);
+          })
         : noSite,
   ]);
 
+  // The brand's logo is a file of its own, read once site.yaml is known to be valid.
+  const brand =
+    siteFile !== null && siteAlone.value !== undefined
+      ? await loadBrand(siteFile, contentDir)
+      : { issues: [] };
+  const site: Checked<SiteEntry> =
+    siteAlone.value !== undefined && brand.brand !== undefined
+      ? { value: withBrand(siteAlone.value, brand.brand), issues: siteAlone.issues }
+      : siteAlone;
   const issues = [
+    ...brand.issues,
     ...[pots, coffees, stoves, logs].flatMap((each) => each.issues),
     ...[potEntries, coffeeEntries, stoveEntries, logEntries].flatMap((each) => each.issues),
     ...site.issues,

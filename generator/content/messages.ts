@@ -20,6 +20,9 @@ export interface ValueSpec {
   readonly example?: unknown;
 }
 
+/** What a logo file's bytes turned out to be when they are neither PNG nor SVG (brand.ts). */
+export type LogoFound = 'jpeg' | 'gif' | 'webp' | 'pdf' | 'broken-png' | 'not-svg' | 'unknown';
+
 /** The kinds of content file, for messages that name one. */
 export type ContentKindName = 'pot' | 'coffee' | 'stove' | 'log' | 'site';
 
@@ -59,6 +62,14 @@ export interface ContentMessageArgs {
   readonly textLength: readonly [maxLength: number | undefined, length: number];
   readonly badId: readonly [value: string, suggestion: string];
   readonly badUrl: readonly [value: string];
+  readonly badColour: readonly [value: string];
+  readonly logoMissing: readonly [file: string];
+  readonly logoOutside: readonly [file: string];
+  readonly logoNotAFile: readonly [file: string];
+  readonly logoTooLarge: readonly [file: string, sizeBytes: number, limitBytes: number];
+  readonly logoFormat: readonly [file: string, found: LogoFound];
+  readonly logoSvgFeature: readonly [file: string, feature: string];
+  readonly logoSvgSize: readonly [file: string];
   readonly repeatedItem: readonly [value: unknown];
   readonly invalidValue: readonly [detail: string];
   readonly valveAboveBase: readonly [valve: number, equivalentHeight: number, unit: 'mm' | 'in'];

@@ -8,6 +8,7 @@ import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
 import { message, type ContentMessage, type ValueSpec } from './messages.ts';
 import { readSchema } from './schema-files.ts';
 import { ID_PATTERN, idLike } from './ids.ts';
+import { COLOUR_PATTERN } from './colour.ts';
 import { ContentIssue, type ContentIssueCode, wholeFile } from './issues.ts';
 import { nearest } from './nearest.ts';
 import {
@@ -198,7 +199,9 @@ function toIssue(error: ErrorObject, source: YamlSource): ContentIssue {
       const wording =
         schema?.pattern === ID_PATTERN.source
           ? message('badId', text, idLike(text))
-          : message('badUrl', text);
+          : schema?.pattern === COLOUR_PATTERN.source
+            ? message('badColour', text)
+            : message('badUrl', text);
       return at('bad-value', wording);
     }
     case 'uniqueItems': {

@@ -3,6 +3,8 @@
  * expanded into the pot × coffee × stove cards the planner plans. Needs the ids of the
  * catalogue's files to check references and to expand "every coffee with every pot".
  */
+import { createHash } from 'node:crypto';
+import type { Brand, BrandYaml } from './brand.ts';
 import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
@@ -41,6 +43,7 @@ export interface SiteYaml {
   readonly kettle_presets_f?: readonly number[];
   readonly room: { readonly ambient_c: number; readonly altitude_m?: number };
   readonly base_url?: string;
+  readonly brand?: BrandYaml;
   readonly sets: readonly SetYaml[];
 }
 
@@ -246,6 +249,17 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
     sets,
   };
   return { value: entry, issues: [] };
+}
+
+/**
+ * The site with its brand. The entry's hash then covers the logo's bytes too, so every cache
+ * keyed by the site (views, pages, PDFs) notices a new logo, not only a new site.yaml.
+ */
+export function withBrand(site: SiteEntry, brand: Brand): SiteEntry {
+  const hash = createHash('sha256')
+    .update(`${site.hash}|${brand.logo?.sha256 ?? ''}|${brand.colour ?? ''}`)
+    .digest('hex');
+  return { ...site, hash, brand };
 }
 
 /**

@@ -3,6 +3,7 @@
  * and labels a person wrote, plus the SI models the physics takes. Trade units stay in YAML.
  */
 import type { Provenance } from './provenance.ts';
+import type { Brand } from './brand.ts';
 import type { BedModel, PotModel } from '../brew/types.ts';
 
 /** Where a value came from, for error messages and card footers. */
@@ -157,6 +158,8 @@ export interface SiteEntry {
   readonly room: { readonly ambientK: number; readonly altitudeM: number };
   /** Address the site will be published at, for QR codes; undefined when not given. */
   readonly baseUrl?: string;
+  /** The roaster's logo and colour (site.yaml `brand:`, brand.ts); absent when not given. */
+  readonly brand?: Brand;
   readonly sets: readonly CardSet[];
 }
 

@@ -215,6 +215,13 @@ export async function buildSite(options: BuildOptions): Promise<BuildResult> {
         await mkdir(path.dirname(script), { recursive: true });
         await writeFile(script, await plannerScript(cacheDir));
       }
+      const logo = data.site.brand?.logo;
+      if (logo) {
+        // The roaster's logo, for the site's pages (the cards carry their own copy inline).
+        const file = path.join(siteDir, logo.file);
+        await mkdir(path.dirname(file), { recursive: true });
+        await writeFile(file, Buffer.from(logo.data, logo.format === 'png' ? 'base64' : 'utf8'));
+      }
       for (const step of options.extraSteps ?? []) {
         onProgress({ phase: 'steps', done: 0, total: 0 });
         await timedPhase(stats, 'steps', () => step(context));

@@ -101,6 +101,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       author,
       builtOn: data.site.builtOn,
       env,
+      brand: data.site.brand,
     };
     const cardFiles = members.map((card) => {
       if (card.page.paper === sitePaper) return path.join(siteDir, card.paths.pdfFile);
@@ -122,6 +123,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
         builtOn: input.builtOn,
         sourceDateEpoch: epoch,
         renderVersion,
+        brand: input.brand ?? null,
       }),
       async render() {
         if (pool) {

@@ -32,11 +32,17 @@ export function sha256(...parts: readonly string[]): string {
 export type ViewSite = Pick<
   SiteEntry,
   'units' | 'paper' | 'baseUrl' | 'business' | 'kettlePresetsK'
->;
+> & {
+  /** The brand by its logo's sha256 and its colour: a new logo or colour draws every card again. */
+  readonly brand: { readonly logo: string | null; readonly colour: string | null } | null;
+};
 
 export function viewSite(site: SiteEntry): ViewSite {
   const { units, paper, baseUrl, business, kettlePresetsK } = site;
-  return { units, paper, baseUrl, business, kettlePresetsK };
+  const brand = site.brand
+    ? { logo: site.brand.logo?.sha256 ?? null, colour: site.brand.colour }
+    : null;
+  return { units, paper, baseUrl, business, kettlePresetsK, brand };
 }
 
 export interface StationViewKeyInput {
@@ -132,11 +138,14 @@ export function setPdfKey(input: {
   readonly builtOn: string;
   readonly sourceDateEpoch: string | undefined;
   readonly renderVersion: string;
+  /** The brand the binder's cover shows. */
+  readonly brand?: unknown;
 }): string {
   return sha256(
     stableJson({
       format: RENDER_CACHE_FORMAT,
       kind: 'set-pdf',
+      brand: input.brand ?? null,
       set: input.set,
       cards: input.cardHashes,
       front: input.frontMatter,

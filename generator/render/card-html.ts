@@ -6,6 +6,7 @@
  * chart, QR code: SVG this generator made) go in as they are.
  */
 import type { Cautions, Footer, StationCardView, Warnings } from './card-view.ts';
+import { logoDataUri, type BrandView } from './brand.ts';
 
 const ESCAPES: Record<string, string> = {
   '&': '&amp;',
@@ -137,12 +138,28 @@ function refusalHtml(x: NonNullable<StationCardView['refusal']>): string {
 `;
 }
 
+/**
+ * The roaster's logo in a card's header, as an <img> of a data: address (an SVG in an <img>
+ * runs no script and loads nothing), with its size for the layout; '' without a logo.
+ */
+export function brandLogoHtml(brand: BrandView | null | undefined): string {
+  const logo = brand?.logo;
+  if (!logo) return '';
+  return `<img class="brand-logo" src="${e(logoDataUri(logo))}" alt="${e(logo.alt)}" width="${e(logo.width)}" height="${e(logo.height)}">`;
+}
+
+/** The card header's class: `has-logo` puts the logo at the right of the title. */
+export function cardHeadClass(brand: BrandView | null | undefined): string {
+  return brand?.logo ? 'card-head has-logo' : 'card-head';
+}
+
 /** The whole station card: a recipe, or the refusal that says why, then warnings, cautions, footer. */
 export function stationCardHtml(card: StationCardView): string {
   return `<article class="card station${card.refusal ? ' is-refused' : ''}">
-  <header class="card-head">
+  <header class="${cardHeadClass(card.brand)}">
     <h1>${e(card.title)}</h1>
     <p class="sub">${e(card.subtitle)}</p>
+    ${brandLogoHtml(card.brand)}
   </header>${card.recipe ? recipeHtml(card.recipe) : refusalHtml(card.refusal!)}
 ${warningsHtml(card.warnings)}${cautionsHtml(card.cautions)}${footerHtml(card.footer)}</article>
 `;

@@ -21,6 +21,7 @@ import type {
 import type { AcceptedPlan, CardPlan, RefusedPlan } from '../planning/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
 import type { Provenance } from '../content/provenance.ts';
+import { brandView, type BrandView } from './brand.ts';
 import { cupChartSpec, renderChartSvg } from './chart.ts';
 import { crossSection, type CrossSectionLayout } from './cross-section.ts';
 import {
@@ -57,6 +58,7 @@ import type { Messages } from '../words/catalogue.ts';
 
 export type { Quantity, TimeRangeText } from './format.ts';
 export type { CardPaths } from './paths.ts';
+export type { BrandView, LogoView } from './brand.ts';
 export type { CrossSectionLayout } from './cross-section.ts';
 export type { HeatKind } from '../content/heat-kind.ts';
 export type { InsertStep } from './insert-steps.ts';
@@ -250,6 +252,8 @@ export interface StationCardView {
   readonly warnings: Warnings | null;
   readonly cautions: Cautions;
   readonly footer: Footer;
+  /** The roaster's logo and colour (site.yaml brand:), null without one; brand.ts. */
+  readonly brand: BrandView | null;
   /** The coffee's page for customers (planner-view.ts), linked from the card's page. */
   readonly planner: PlannerLink;
 }
@@ -337,6 +341,8 @@ export interface InsertCardView {
   readonly cautions: Cautions;
   /** Its QR code opens the coffee's page for customers (the planner), not the insert's page. */
   readonly footer: Footer;
+  /** The roaster's logo and colour (site.yaml brand:), null without one; brand.ts. */
+  readonly brand: BrandView | null;
   readonly planner: PlannerLink;
 }
 
@@ -670,6 +676,7 @@ export async function stationCardView(
     ),
     cautions: cautions(pageSetup(voice.units, paper).compact ? 'compact' : 'full', voice),
     footer: await footer(catalogue, paths.webUrl, options, voice),
+    brand: brandView(catalogue.site, voice.words.card.footer.logoAlt),
     planner: plannerLink(e.coffee, catalogue, voice),
   };
 }
@@ -833,6 +840,7 @@ export async function insertCardView(
       voice,
       voice.words.card.footer.qrPlanner,
     ),
+    brand: brandView(catalogue.site, voice.words.card.footer.logoAlt),
     planner,
   };
 }

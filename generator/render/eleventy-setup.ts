@@ -5,7 +5,14 @@
 import path from 'node:path';
 import { PROJECT_ROOT as projectRoot } from '../project-root.ts';
 import { FONT_FACES, FONT_LICENSE_PATH, fontFileName, fontPath } from './fonts.ts';
-import { cautionsHtml, footerHtml, stationCardHtml, warningsHtml } from './card-html.ts';
+import {
+  brandLogoHtml,
+  cardHeadClass,
+  cautionsHtml,
+  footerHtml,
+  stationCardHtml,
+  warningsHtml,
+} from './card-html.ts';
 import { relativeHref } from './paths.ts';
 import { FONTS_DIR } from './site-view.ts';
 
@@ -18,6 +25,8 @@ export const filters = {
   warningsHtml,
   cautionsHtml,
   footerHtml,
+  brandLogoHtml,
+  cardHeadClass,
 };
 
 /** Passthrough copies: absolute source → site-relative destination. */

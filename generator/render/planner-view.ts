@@ -39,7 +39,7 @@ export interface PlannerData {
   readonly stoves: readonly StoveEntry[];
   readonly site: Pick<
     SiteEntry,
-    'business' | 'language' | 'units' | 'paper' | 'kettlePresetsK' | 'room'
+    'business' | 'language' | 'units' | 'paper' | 'kettlePresetsK' | 'room' | 'brand'
   >;
   readonly language: string;
   readonly builtOn: string;
@@ -175,6 +175,7 @@ export function plannerPageView(
       paper: site.paper,
       kettlePresetsK: site.kettlePresetsK,
       room: site.room,
+      ...(site.brand ? { brand: site.brand } : {}),
     },
     language,
     builtOn,

@@ -13,6 +13,7 @@ import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts
 import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './format.ts';
 import { setPaths, type CardPaths } from './paths.ts';
 import { voiceFor, type Voice } from './voice.ts';
+import { brandView, type BrandView } from './brand.ts';
 
 export type { PageNav } from './card-view.ts';
 
@@ -26,6 +27,8 @@ export interface SiteInfo {
   readonly builtOn: string;
   readonly baseUrl: string | null;
   readonly fontFamily: string;
+  /** The roaster's logo and colour (brand.ts), null without one. */
+  readonly brand: BrandView | null;
   /** @font-face sources, site-relative. */
   readonly fonts: readonly {
     readonly file: string;
@@ -194,6 +197,7 @@ export function siteInfo(catalogue: Catalogue, builtOn: string): SiteInfo {
     builtOn,
     baseUrl: site.baseUrl ?? null,
     fontFamily: FONT_FAMILY,
+    brand: brandView(site, voice.words.card.footer.logoAlt),
     fonts: FONT_FACES.map((face) => ({
       file: `${FONTS_DIR}/${fontFileName(face)}`,
       ...FACE_CSS[face],

@@ -216,6 +216,8 @@ export const cardWords = {
     qrLabel: 'QR code',
     /** An insert's code opens the coffee's page where customers plan their own pot. */
     qrPlanner: 'Your own pot and stove:',
+    /** Text alternative of the roaster's logo (site.yaml brand.logo) on cards and pages. */
+    logoAlt: (business: string): string => `${business} logo`,
   },
   planner: {
     /** The link from a station card's page to the coffee's page for customers. */

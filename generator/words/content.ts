@@ -11,6 +11,7 @@ import type {
   ContentMessage,
   ContentMessageArgs,
   ContentMessageKey,
+  LogoFound,
   ValueSpec,
 } from '../content/messages.ts';
 
@@ -628,6 +629,66 @@ const messageWords = {
     return {
       problem: problems[problem] ?? 'base_url is not usable',
       fix: 'Give the address the site is published at, e.g. `https://cards.roaster.example/` (a folder after the host is fine).',
+    };
+  },
+
+  /** brand.colour not written #RRGGBB (site.yaml; the schema's pattern). */
+  badColour(value: string): Wording {
+    return {
+      problem: `"${value}" is not a colour written #RRGGBB`,
+      fix: 'Write the colour as # and six hexadecimal digits, e.g. `colour: "#1F5C4A"` (quoted: YAML reads # as a comment).',
+    };
+  },
+  /** brand.logo names no file (content/brand.ts). */
+  logoMissing(file: string): Wording {
+    return {
+      problem: `the logo file ${file} does not exist in the content folder`,
+      fix: 'Put the SVG or PNG file there, or correct the path (it is relative to the content folder, e.g. `logo: brand/logo.svg`).',
+    };
+  },
+  logoOutside(file: string): Wording {
+    return {
+      problem: `the logo path ${file} leads outside the content folder`,
+      fix: 'Copy the logo into the content folder (e.g. brand/logo.svg) and give the path from there.',
+    };
+  },
+  logoNotAFile(file: string): Wording {
+    return {
+      problem: `the logo path ${file} is a folder, not a file`,
+      fix: 'Give the path of the SVG or PNG file itself, e.g. `logo: brand/logo.svg`.',
+    };
+  },
+  logoTooLarge(file: string, sizeBytes: number, limitBytes: number): Wording {
+    return {
+      problem: `the logo ${file} is ${sizeBytes} bytes, more than the ${limitBytes} a logo may have`,
+      fix: 'Save it smaller: an SVG of simple shapes, or a PNG of some 600 pixels across is plenty for print.',
+    };
+  },
+  logoFormat(file: string, found: LogoFound): Wording {
+    const what: Record<LogoFound, string> = {
+      jpeg: 'a JPEG picture',
+      gif: 'a GIF picture',
+      webp: 'a WebP picture',
+      pdf: 'a PDF',
+      'broken-png': 'a PNG whose header is damaged',
+      'not-svg': 'text without an <svg> root element',
+      unknown: 'neither a PNG nor an SVG file',
+    };
+    return {
+      problem: `the logo ${file} is ${what[found]}; a logo must be SVG or PNG`,
+      fix: 'Export the logo as SVG (preferred: it prints sharp at any size) or PNG, and name that file.',
+    };
+  },
+  logoSvgFeature(file: string, feature: string): Wording {
+    return {
+      problem: `the SVG logo ${file} uses ${feature}, which stovecard does not draw (it draws shapes, paths and text only)`,
+      fix: 'Save the logo as plain SVG with its shapes inline (no scripts, embedded images, links to other files or entity declarations), or export it as PNG.',
+    };
+  },
+  logoSvgSize(file: string): Wording {
+    return {
+      problem: `the SVG logo ${file} has neither a width and height nor a viewBox, so its proportions are unknown`,
+      fix: 'Add a viewBox to its <svg> element, e.g. `viewBox="0 0 120 40"` for a logo three times as wide as high.',
     };
   },
 

@@ -215,6 +215,7 @@ const card: Messages['card'] = {
     qr: 'En la web:',
     qrLabel: 'Código QR',
     qrPlanner: 'Su cafetera y su fuego:',
+    logoAlt: (business: string): string => `Logotipo de ${business}`,
   },
   planner: {
     link: (coffee: string): string => `Calcule ${coffee} para su propia cafetera y su fuego`,

@@ -11,6 +11,7 @@
  * label for is an error, so a field added to the log files reaches the sheet or the build
  * says so.
  */
+import { LOGO_MAX_HEIGHT_MM, logoBox, type LogoView } from '../brand.ts';
 import logSchema from '../../content/schemas/log.schema.json' with { type: 'json' };
 import type { UnitSystem } from '../../content/types.ts';
 import type { Messages } from '../../words/catalogue.ts';
@@ -84,11 +85,26 @@ export function coverItems(
   builtOn: string,
   st: TextPageStyle,
   binder: BinderWords,
+  /** The roaster's logo, over the title at up to twice a card's height (brand.ts). */
+  logo: LogoView | null = null,
 ): FlowItem[] {
   const words = binder.cover;
   const big = { ...st.h1, size: st.h1.size * 1.5 };
+  const logoItem: FlowItem[] = logo
+    ? [
+        {
+          block: (pen, x, y, w) => {
+            const box = logoBox(logo, w * 0.5, 2 * LOGO_MAX_HEIGHT_MM * (72 / 25.4));
+            pen.logo(logo, x, y, box.width, box.height);
+            return box.height + st.gap * 2;
+          },
+          keepWithNext: true,
+        },
+      ]
+    : [];
   return [
     { block: (_pen, _x, _y, _w) => st.gap * 6 },
+    ...logoItem,
     { block: para('P', words.kind, st.lead), keepWithNext: true },
     { block: (pen, x, y, w) => pen.para('H1', set.title, x, y, w, big), keepWithNext: true },
     { block: para('P', words.from(business), st.bodyStrong) },

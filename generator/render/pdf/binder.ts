@@ -13,6 +13,7 @@
  * to draw. pdfkit draws only what is the set's own: the front matter, and on each card's
  * placeholder page its page number (an artifact) and its bookmark.
  */
+import type { BrandView } from '../brand.ts';
 import {
   cautions as cautionsView,
   type Cautions,
@@ -69,6 +70,8 @@ export interface SetPdfInput {
   readonly author: string;
   readonly builtOn: string;
   readonly env?: NodeJS.ProcessEnv;
+  /** The roaster's brand: its logo on the binder's cover. */
+  readonly brand?: BrandView | null;
 }
 
 export interface SetPdf {
@@ -344,7 +347,14 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   if (input.frontMatter) {
     const { method, troubleshooting } = input.frontMatter;
     const words = voice.words.binder;
-    cover = coverItems(input.set, input.author, voice.date(input.builtOn), st, words);
+    cover = coverItems(
+      input.set,
+      input.author,
+      voice.date(input.builtOn),
+      st,
+      words,
+      input.brand?.logo ?? null,
+    );
     coverPages = flowPages(measure, frame, cover, () => {});
     parts = [
       { title: method.title, items: methodItems(method, st), pages: 0 },

@@ -5,6 +5,7 @@
  */
 import { cautions, type Cautions, type Footer, type Warnings } from '../card-view.ts';
 import type { UnitSystem } from '../../content/types.ts';
+import { LOGO_MAX_HEIGHT_MM, LOGO_MAX_WIDTH_SHARE, logoBox, type LogoView } from '../brand.ts';
 import { voiceFor } from '../voice.ts';
 
 /** Step numbers, list markers and bullets: the same figures in every catalogue there is. */
@@ -13,6 +14,7 @@ import { balancedSplit, type Block } from './layout.ts';
 import type { Pen } from './pen.ts';
 import {
   INK,
+  logoMaxHeightPt,
   PAPER,
   PDF_TEXT_FLOOR_PT,
   WARNING_FILL,
@@ -20,19 +22,36 @@ import {
   type TextFont,
 } from './style.ts';
 
-/** Title (H1), subtitle and notes, over a heavy rule. */
+/**
+ * Title (H1), subtitle and notes, over a heavy rule; the roaster's logo at the right, at most
+ * LOGO_MAX_HEIGHT_MM high (less on small paper), no taller than the title and subtitle, and
+ * at most LOGO_MAX_WIDTH_SHARE of the width.
+ */
 export function headerBlock(
   title: string,
   subtitle: string,
   notes: string | null,
   st: CardStyle,
+  logo: LogoView | null = null,
 ): Block {
+  const textHeight = (pen: Pen, w: number) =>
+    pen.height(title, w, st.h1) +
+    pen.height(subtitle, w, st.sub) +
+    (notes ? pen.height(notes, w, st.notes) : 0);
   return (pen, x, y, w) => {
-    let h = pen.para('H1', title, x, y, w, st.h1);
-    h += pen.para('P', subtitle, x, y + h, w, st.sub);
-    if (notes) h += pen.para('P', notes, x, y + h, w, st.notes);
+    // Never taller than the title and subtitle beside it: the logo costs the card no height.
+    const maxHeight = Math.min(logoMaxHeightPt(st.paper, LOGO_MAX_HEIGHT_MM), textHeight(pen, w));
+    const box = logo ? logoBox(logo, w * LOGO_MAX_WIDTH_SHARE, maxHeight) : null;
+    const tw = box ? w - box.width - st.gutter : w;
+    let h = pen.para('H1', title, x, y, tw, st.h1);
+    h += pen.para('P', subtitle, x, y + h, tw, st.sub);
+    if (notes) h += pen.para('P', notes, x, y + h, tw, st.notes);
+    if (box && logo) {
+      pen.logo(logo, x + w - box.width, y, box.width, box.height);
+      h = Math.max(h, box.height);
+    }
     h += st.padding;
-    pen.rule(x, y + h, w, st.ruleHeavy, INK);
+    pen.rule(x, y + h, w, st.ruleHeavy, st.accent ?? INK);
     return h + st.ruleHeavy;
   };
 }
@@ -65,7 +84,7 @@ export function stepHeading(
   const capCentre = y + pen.ascent(font) - font.size * 0.365;
   if (n !== null) {
     pen.artifact(() => {
-      pen.doc.circle(x + d / 2, capCentre, d / 2).fill(INK);
+      pen.doc.circle(x + d / 2, capCentre, d / 2).fill(st.disc ?? INK);
     });
   }
   let headingH = 0;

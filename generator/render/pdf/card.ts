@@ -14,7 +14,7 @@ import { insertFrame } from './insert-card.ts';
 import { fitCard, placeCard, type CardFit, type CardFrame, type PageBox } from './layout.ts';
 import { Pen } from './pen.ts';
 import { stationFrame } from './station-card.ts';
-import type { CardStyle } from './style.ts';
+import { brandedStyle, type CardStyle } from './style.ts';
 
 export type CardView = StationCardView | InsertCardView;
 
@@ -65,7 +65,8 @@ export function cardFrame(
   dropped: readonly OptionalBlock[] = [],
 ): CardFrame {
   const left = new Set<OptionalBlock>(dropped);
-  return view.kind === 'station' ? stationFrame(view, style, left) : insertFrame(view, style, left);
+  const st = brandedStyle(style, view.brand ?? null);
+  return view.kind === 'station' ? stationFrame(view, st, left) : insertFrame(view, st, left);
 }
 
 /** A card's document title, in its own language (English for a view without one). */

@@ -297,6 +297,7 @@ export function insertFrame(
       view.subtitle,
       dropped.has('tasting-notes') ? null : view.notes,
       st,
+      view.brand?.logo ?? null,
     ),
     body: [bodyBlock(shown, st, !dropped.has('pot-names')), warningsBlock(view.warnings, st)],
     bottom: [cautionsBlock(shownCautions(view, dropped.has('long-cautions')), st)],

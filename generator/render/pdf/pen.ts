@@ -13,6 +13,7 @@
 import SVGtoPDF from 'svg-to-pdfkit';
 import { PDF_FONT, faceOf, svgFontCallback } from './fonts.ts';
 import type { TextFont } from './style.ts';
+import type { LogoView } from '../brand.ts';
 
 export type StructTag =
   | 'Art'
@@ -372,6 +373,29 @@ export class Pen {
       fontCallback: svgFontCallback,
       warningCallback: (message) => this.warnings.push(message),
     });
+  }
+
+  /**
+   * The roaster's logo in a box `width` × `height` pt (logoBox: its aspect kept), tagged as a
+   * Figure with its text alternative. A PNG is an image XObject (pdfkit `image`); an SVG is
+   * drawn from its shapes by svg-to-pdfkit, like the drawings.
+   */
+  logo(logo: LogoView, x: number, y: number, width: number, height: number): void {
+    if (!this.drawing) return;
+    this.leaf(
+      'Figure',
+      () => {
+        this.doc.save();
+        if (logo.format === 'png') {
+          this.doc.image(Buffer.from(logo.data, 'base64'), x, y, { width, height });
+        } else {
+          this.doc.translate(x, y).scale(width / logo.width);
+          this.svgAt(logo.data, { width: logo.width, height: logo.height });
+        }
+        this.doc.restore();
+      },
+      { alt: logo.alt, bbox: [x, y, x + width, y + height] },
+    );
   }
 
   /** An SVG drawing scaled to `width`, as decoration (an artifact: the text beside it says it all). */

@@ -119,6 +119,7 @@ export async function writeSitePdfs(
       author,
       builtOn: data.site.builtOn,
       env,
+      brand: data.site.brand,
     });
     await write(siteDir, set.paths.pdfFile, pdf.bytes);
     files.push({

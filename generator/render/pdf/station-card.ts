@@ -289,7 +289,7 @@ export function stationFrame(
   }
   body.push(warningsBlock(view.warnings, st));
   return {
-    header: headerBlock(view.title, view.subtitle, null, st),
+    header: headerBlock(view.title, view.subtitle, null, st, view.brand?.logo ?? null),
     body,
     bottom: [cautionsBlock(shownCautions(view, dropped.has('long-cautions')), st)],
     footer: footerBlock(dropped.has('qr-code') ? { ...view.footer, qrSvg: null } : view.footer, st),

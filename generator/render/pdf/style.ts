@@ -110,6 +110,33 @@ export interface CardStyle {
   readonly ruleLight: number;
   readonly qrSize: number;
   readonly padding: number;
+  /** The header's rule: the brand's colour (render/brand.ts accent), else the ink. */
+  readonly accent?: string;
+  /** The step discs' fill: the brand's colour when it reads as text, else the ink. */
+  readonly disc?: string;
+}
+
+/**
+ * A card's style in the roaster's colours: the header's rule in the accent; the title, the
+ * step headings and the step discs in the colour when it reads as text on white (WCAG 2.x
+ * 4.5:1: then the discs' white figures read too). The cautions keep their red.
+ */
+export function brandedStyle(
+  st: CardStyle,
+  brand: { readonly accent: string | null; readonly text: string | null } | null,
+): CardStyle {
+  if (!brand) return st;
+  const text = brand.text;
+  return {
+    ...st,
+    ...(brand.accent ? { accent: brand.accent } : {}),
+    ...(text ? { disc: text, h1: { ...st.h1, color: text }, h2: { ...st.h2, color: text } } : {}),
+  };
+}
+
+/** Tallest a logo may print on paper of factor k, pt: LOGO_MAX_HEIGHT_MM, less on small paper. */
+export function logoMaxHeightPt(paper: PaperSize, maxMm: number): number {
+  return maxMm * MM * Math.min(1, PAPER_STYLE[paper].k);
 }
 
 const MM = 72 / 25.4;
