@@ -9,6 +9,7 @@ import { buildWords } from '../words/card.ts';
 import { faultWords } from '../words/build-faults.ts';
 import { printWords } from '../words/print.ts';
 import { PDF_TEXT_FLOOR_PT } from '../render/pdf/style.ts';
+import { TEXT_CONTRAST_MIN } from '../content/colour.ts';
 import { UsageError } from './errors.ts';
 import { checkOutFolder } from './out-folder.ts';
 import { parseOptions } from './options.ts';
@@ -31,7 +32,16 @@ export function summaryLine(result: BuildResult): string {
  * line per set of blocks card PDFs left out to keep their text at the floor.
  */
 export function warningLines(result: BuildResult): string {
-  return cardWarningLines(result) + droppedLines(result);
+  return cardWarningLines(result) + droppedLines(result) + brandLines(result);
+}
+
+/** Once per build: the brand's colour is too light for text, so it colours only the rules. */
+export function brandLines(result: BuildResult): string {
+  const brand = result.data.site.brand;
+  if (!brand || brand.accent === null || brand.text !== null || brand.contrastOnWhite === null)
+    return '';
+  const ratio = (Math.floor(brand.contrastOnWhite * 100) / 100).toFixed(2);
+  return `${buildWords.brandColourLight(brand.accent, ratio, String(TEXT_CONTRAST_MIN))}\n`;
 }
 
 /** What card PDFs left out to fit at the floor (stats.dropped), grouped by what they left out. */

@@ -148,15 +148,21 @@ export function brandLogoHtml(brand: BrandView | null | undefined): string {
   return `<img class="brand-logo" src="${e(logoDataUri(logo))}" alt="${e(logo.alt)}" width="${e(logo.width)}" height="${e(logo.height)}">`;
 }
 
-/** The card header's class: `has-logo` puts the logo at the right of the title. */
-export function cardHeadClass(brand: BrandView | null | undefined): string {
-  return brand?.logo ? 'card-head has-logo' : 'card-head';
+/**
+ * The card header's attributes: `has-logo` and the logo's aspect (--logo-ratio) keep the
+ * logo's width free at the right of the title (card.css).
+ */
+export function cardHeadAttrs(brand: BrandView | null | undefined): string {
+  const logo = brand?.logo;
+  if (!logo) return 'class="card-head"';
+  const ratio = Number((logo.width / logo.height).toFixed(4));
+  return `class="card-head has-logo" style="--logo-ratio: ${ratio}"`;
 }
 
 /** The whole station card: a recipe, or the refusal that says why, then warnings, cautions, footer. */
 export function stationCardHtml(card: StationCardView): string {
   return `<article class="card station${card.refusal ? ' is-refused' : ''}">
-  <header class="${cardHeadClass(card.brand)}">
+  <header ${cardHeadAttrs(card.brand)}>
     <h1>${e(card.title)}</h1>
     <p class="sub">${e(card.subtitle)}</p>
     ${brandLogoHtml(card.brand)}

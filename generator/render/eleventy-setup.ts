@@ -7,7 +7,7 @@ import { PROJECT_ROOT as projectRoot } from '../project-root.ts';
 import { FONT_FACES, FONT_LICENSE_PATH, fontFileName, fontPath } from './fonts.ts';
 import {
   brandLogoHtml,
-  cardHeadClass,
+  cardHeadAttrs,
   cautionsHtml,
   footerHtml,
   stationCardHtml,
@@ -26,7 +26,7 @@ export const filters = {
   cautionsHtml,
   footerHtml,
   brandLogoHtml,
-  cardHeadClass,
+  cardHeadAttrs,
 };
 
 /** Passthrough copies: absolute source → site-relative destination. */

@@ -483,6 +483,9 @@ export const buildWords = {
   /** One line of the build log per warning a station card carries (the card prints it too). */
   cardWarning: (potId: string, coffeeId: string, stoveId: string, warning: string): string =>
     `warning: ${potId} × ${coffeeId} × ${stoveId}: ${warning}`,
+  /** site.yaml brand.colour too light to read as text on white (WCAG 2.x contrast below 4.5:1). */
+  brandColourLight: (colour: string, ratio: string, minimum: string): string =>
+    `note: brand colour ${colour} has a contrast of ${ratio}:1 on white, below the ${minimum}:1 text needs (WCAG 2.x); it colours only the rules, and headings stay black. A darker shade would colour the headings too.`,
   outHoldsContent: (outDir: string): string =>
     `--out ${outDir} is or contains the content folder, and the build replaces the whole --out folder; choose another folder (default: site)`,
   outHoldsWorkingFolder: (outDir: string): string =>
