@@ -64,5 +64,6 @@ export function demoSetPdf(
     author,
     builtOn: BUILT_ON,
     env: NO_EPOCH,
+    brand: demo.data.site.brand,
   });
 }
