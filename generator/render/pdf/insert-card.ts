@@ -159,9 +159,12 @@ function tableBlock(view: InsertCardView, st: CardStyle, potNames = true): Block
           const rowH = rowHeight(pen, row, widths, pad, f, showPot) + 2 * padY;
           const top = y + h + padY;
           pen.group('TR', () => {
+            // The pot's size once, on its first row, as the HTML's rowspan header prints it.
+            const firstOfPot = r === 0 || potStart;
             pen.leaf(
               'TH',
               () => {
+                if (!firstOfPot) return;
                 const ch = pen.write(row.cupsLabel, lefts[0]! + pad, top, cellW(0), f.rowHead, {
                   noWrap: true,
                 });
