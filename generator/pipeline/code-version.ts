@@ -33,6 +33,7 @@ export const RENDER_SOURCES: readonly string[] = [
   'generator/render',
   'generator/words',
   'generator/units.ts', // the conversions the views print through
+  'generator/content/colour.ts', // the brand colour's contrast rule (render/brand.ts)
   'generator/content/heat-kind.ts', // how an insert groups its stoves
   'generator/content/schemas/log.schema.json', // the binder's brew-log sheet columns
   'generator/content/own-entries.ts', // the customer's page's form fields

@@ -34,6 +34,7 @@ room:
   ambient_c: 20 # room temperature the cards are planned for, °C
   altitude_m: 0 # altitude of the room, m (water boils cooler higher up)
 # base_url: https://cards.tallow-lane.example/ # where the site will be published; adds QR codes
+# brand: { logo: brand/logo.svg, colour: '#1F5C4A' } # your logo (SVG or PNG, path in this folder) and colour, on every card and page
 
 sets:
   - id: kitchen # names the set's page and PDF: lower-case letters, digits, hyphens

@@ -84,7 +84,7 @@ describe('site.yaml brand:', () => {
     expect(site.brand?.contrastOnWhite).toBeCloseTo(contrastRatio('#2e5e4e', '#ffffff'), 12);
   });
 
-  it('reads a PNG logo by its signature and IHDR size, whatever its name', async () => {
+  it('reads a PNG logo by its signature and IHDR size, whatever its name (own rule: the test writes a 30 × 10 PNG)', async () => {
     await put(dir, 'brand/mark.img', png(30, 10));
     await put(dir, 'site.yaml', siteWith('brand: { logo: brand/mark.img }'));
     const { site } = await loadCatalogue(dir);

@@ -98,6 +98,7 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   ],
   'card.footer.printedBy': [['Roaster', 'cards@roaster.example']],
   'card.footer.built': [['2026-12-03', 'abcd1234']],
+  'card.footer.logoAlt': [['Test Roasters']],
   'card.planner.link': [['Coffee C']],
   'card.crossSection.title': [['Pot A']],
   'card.crossSection.margin': [['6 mm']],
