@@ -23,6 +23,9 @@ import { brewSetup, roomModel } from '../../generator/planning/setup.ts';
 import type { AcceptedPlan, CardPlan } from '../../generator/planning/types.ts';
 import type { CoffeeEntry, PotEntry, StoveEntry } from '../../generator/content/types.ts';
 import { coffeeEntry, potEntry, seaLevel, stoveEntry } from './entries.ts';
+import { stationCardView } from '../../generator/render/card-view.ts';
+import { OPTIONS, demoCatalogue } from '../render/demo.ts';
+import { expectOneSource } from '../render/one-source.ts';
 
 const C = 273.15;
 const presets = [70 + C, 80 + C, 90 + C];
@@ -291,6 +294,24 @@ describe('a bed that tightens as it brews, on the invented pots (57 cases)', () 
   });
 
   plannerContract(tighteningCases);
+
+  // own rule: one number, one source (the checks the demo cards get, render/one-source.ts)
+  it('prints each number of the card once, from the plan', async () => {
+    const demo = await demoCatalogue();
+    for (const { name, pot, coffee, plan } of acceptedOf(tighteningCases)) {
+      const stove = stoves[name.split('/')[2] as keyof typeof stoves];
+      const catalogue = {
+        ...demo,
+        pots: new Map([[pot.id, pot]]),
+        coffees: new Map([[coffee.id, coffee]]),
+        stoves: new Map([[stove.id, stove]]),
+      };
+      const view = await stationCardView(plan, catalogue, { ...OPTIONS, units: 'metric' });
+      expectOneSource(view, plan, name);
+      // The share is assumed (no fit wrote it): the card says so.
+      expect(view.recipe!.expect.notes.join(' '), name).toMatch(/not yet weighed/);
+    }
+  }, 120_000);
 });
 
 describe('the planner’s preferences', () => {
