@@ -32,3 +32,11 @@ export function tighteningShare(tightening: BedTightening, passedM3: number): nu
   const f = tightening.finalShare;
   return f + (1 - f) * Math.exp(-Math.max(0, passedM3) / tightening.overM3);
 }
+
+/**
+ * σ of ln f for a final share the entry states but no log measured: ±30 % (our choice; a
+ * bed's tightening is poorly known without scale readings). One number for both users:
+ * the fit's prior (calibration/parameters.ts) and the card's ranges (planning/plan.ts,
+ * whose corners take f·e^(∓2σ)).
+ */
+export const ASSUMED_FINAL_SHARE_SIGMA_LN = 0.3;

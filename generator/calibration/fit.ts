@@ -51,6 +51,21 @@ export const RETENTION_SIGMA_LN = 0.15;
 /** A held prior contributing more than this share of a fitted σ² is named beside it. */
 const ENTANGLED_SHARE = 0.25;
 
+/**
+ * Kinds whose whole σ (the held values' doubt included) must keep RELATIVE_SIGMA_LIMIT to
+ * count as fitted; the others are limited on the readings' part. Only the bed's final
+ * share: with the retention held at ±15 %, weighed logs of 1–6 brews pin the readings' part
+ * of its σ to 23–8 % but its whole σ only to 160–50 % (DEVELOPERS.md, "A bed that tightens
+ * as it brews").
+ */
+const TOTAL_LIMITED: ReadonlySet<Parameter['kind']> = new Set(['tightening']);
+
+/** What the held values' prior doubt adds to each free parameter's σ²(ln θ), and who adds it. */
+interface HeldPart {
+  readonly heldVariance: readonly number[];
+  readonly entangled: readonly (readonly string[])[];
+}
+
 export function fitLog(
   input: FitInput,
   options: { readonly leaveOneOut?: boolean } = {},
@@ -76,6 +91,8 @@ export function fitLog(
     index: number,
     reason: KeptEstimate['reason'],
     relativeSigmaIfFitted?: number,
+    notSeparableFrom?: readonly string[],
+    readingsRelativeSigma?: number,
   ): void => {
     kept.set(index, {
       parameter: parameters[index]!,
@@ -83,6 +100,8 @@ export function fitLog(
       value: parameters[index]!.prior,
       reason,
       ...(relativeSigmaIfFitted !== undefined ? { relativeSigmaIfFitted } : {}),
+      ...(notSeparableFrom && notSeparableFrom.length > 0 ? { notSeparableFrom } : {}),
+      ...(readingsRelativeSigma !== undefined ? { readingsRelativeSigma } : {}),
     });
   };
 
@@ -108,6 +127,62 @@ export function fitLog(
   let iterations = 0;
   let converged = true;
   let relativeSigmas: number[] = [];
+  let held: HeldPart = { heldVariance: [], entangled: [] };
+  /** The values with the free parameters at `at` (ln), the rest at their priors, SI. */
+  const valuesAt = (freeNow: readonly number[], at: readonly number[]): number[] =>
+    at.map((value, i) => (freeNow.includes(i) ? Math.exp(value) : parameters[i]!.prior));
+  /**
+   * The held parameters are uncertain too: their prior σ propagates into the fitted ones
+   * through the sensitivity of the optimum, dθ_f = −(J_fᵀJ_f)⁻¹ J_fᵀ J_h · dθ_h.
+   */
+  const heldPart = (freeNow: readonly number[], values: readonly number[]): HeldPart => {
+    const heldVariance = freeNow.map(() => 0);
+    const entangled: string[][] = freeNow.map(() => []);
+    const heldIndices = all.filter((i) => !freeNow.includes(i));
+    const thetaAll = values.map(Math.log);
+    const full = modelFor(all, thetaAll);
+    const centre = full(thetaAll);
+    const columns = jacobianColumns(full, thetaAll, centre);
+    // The fixed inputs no log fits, held like the rest: the grounds' retention (a column by
+    // a forward difference of ln retention).
+    const step = 0.01;
+    const retained = forwardModel(
+      log,
+      pot,
+      {
+        ...coffee,
+        bed: { ...coffee.bed, retentionKgPerKg: coffee.bed.retentionKgPerKg * Math.exp(step) },
+      },
+      observations,
+    ).scaledPredictions(modelValues(parameters, values));
+    const retentionColumn = Float64Array.from(retained, (v, n) => (v - centre[n]!) / step);
+    const heldColumns = [
+      ...heldIndices.map((h) => ({
+        id: parameters[h]!.id,
+        column: columns[h]!,
+        sigmaLn: parameters[h]!.priorSigmaLn,
+      })),
+      { id: 'retention', column: retentionColumn, sigmaLn: RETENTION_SIGMA_LN },
+    ];
+    const inverse = inverseSpd(normalMatrix(freeNow.map((i) => columns[i]!)));
+    if (inverse === null) return { heldVariance, entangled };
+    const dot = (a: Float64Array, b: Float64Array) => a.reduce((sum, v, n) => sum + v * b[n]!, 0);
+    freeNow.forEach((_, k) => {
+      const parts = heldColumns.map((h) => {
+        const gain = freeNow.reduce(
+          (sum, fi, m) => sum + inverse[k]![m]! * dot(columns[fi]!, h.column),
+          0,
+        );
+        return (gain * h.sigmaLn) ** 2;
+      });
+      heldVariance[k] = parts.reduce((a, b) => a + b, 0);
+      const total = relativeSigmas[k]! ** 2 + heldVariance[k]!;
+      heldColumns.forEach((h, n) => {
+        if (parts[n]! > ENTANGLED_SHARE * total) entangled[k]!.push(h.id);
+      });
+    });
+    return { heldVariance, entangled };
+  };
   while (free.length > 0) {
     const base = theta.map((value, i) => (free.includes(i) ? value : priorTheta[i]!));
     const model = modelFor(free, base);
@@ -144,64 +219,26 @@ export function fitLog(
       free = free.filter((i) => i !== index);
       continue;
     }
+    held = heldPart(free, valuesAt(free, theta));
+    // The bed's final share: the same limit on its whole σ, the held values' doubt
+    // included (TOTAL_LIMITED). A share the log pins only as well as the held values allow
+    // is not separable from them, and kept: written back, its σ would widen the card's
+    // corners (f·e^(∓2σ)) past the assumed share's, not narrow them.
+    const share = free.findIndex((i) => TOTAL_LIMITED.has(parameters[i]!.kind));
+    if (share >= 0) {
+      const total = Math.sqrt(relativeSigmas[share]! ** 2 + held.heldVariance[share]!);
+      if (total > RELATIVE_SIGMA_LIMIT) {
+        keep(free[share]!, 'too-uncertain', total, held.entangled[share]!, relativeSigmas[share]!);
+        free = free.filter((i) => i !== free[share]);
+        continue;
+      }
+    }
     break;
   }
   if (free.length === 0) theta = [...priorTheta];
 
-  const finalValues = theta.map((value, i) =>
-    free.includes(i) ? Math.exp(value) : parameters[i]!.prior,
-  );
-
-  // The held parameters are uncertain too: their prior σ propagates into the fitted ones
-  // through the sensitivity of the optimum, dθ_f = −(J_fᵀJ_f)⁻¹ J_fᵀ J_h · dθ_h.
-  const heldVariance = free.map(() => 0);
-  const entangled: string[][] = free.map(() => []);
-  const held = all.filter((i) => !free.includes(i));
-  if (free.length > 0) {
-    const thetaAll = finalValues.map(Math.log);
-    const full = modelFor(all, thetaAll);
-    const columns = jacobianColumns(full, thetaAll, full(thetaAll));
-    // The fixed inputs no log fits, held like the rest: the grounds' retention (a column by
-    // a forward difference of ln retention).
-    const centre = full(thetaAll);
-    const step = 0.01;
-    const retained = forwardModel(
-      log,
-      pot,
-      {
-        ...coffee,
-        bed: { ...coffee.bed, retentionKgPerKg: coffee.bed.retentionKgPerKg * Math.exp(step) },
-      },
-      observations,
-    ).scaledPredictions(modelValues(parameters, finalValues));
-    const retentionColumn = Float64Array.from(retained, (v, n) => (v - centre[n]!) / step);
-    const heldColumns = [
-      ...held.map((h) => ({
-        id: parameters[h]!.id,
-        column: columns[h]!,
-        sigmaLn: parameters[h]!.priorSigmaLn,
-      })),
-      { id: 'retention', column: retentionColumn, sigmaLn: RETENTION_SIGMA_LN },
-    ];
-    const inverse = inverseSpd(normalMatrix(free.map((i) => columns[i]!)));
-    if (inverse !== null) {
-      const dot = (a: Float64Array, b: Float64Array) => a.reduce((sum, v, n) => sum + v * b[n]!, 0);
-      free.forEach((_, k) => {
-        const parts = heldColumns.map((h) => {
-          const gain = free.reduce(
-            (sum, fi, m) => sum + inverse[k]![m]! * dot(columns[fi]!, h.column),
-            0,
-          );
-          return (gain * h.sigmaLn) ** 2;
-        });
-        heldVariance[k] = parts.reduce((a, b) => a + b, 0);
-        const total = relativeSigmas[k]! ** 2 + heldVariance[k]!;
-        heldColumns.forEach((h, n) => {
-          if (parts[n]! > ENTANGLED_SHARE * total) entangled[k]!.push(h.id);
-        });
-      });
-    }
-  }
+  const finalValues = valuesAt(free, theta);
+  const { heldVariance, entangled } = held;
   const estimates: Estimate[] = parameters.map((parameter, i) => {
     const k = free.indexOf(i);
     if (k < 0) return kept.get(i)!;

@@ -11,6 +11,7 @@
  * The fit works on their natural logarithms, so they stay positive and a step means the
  * same relative change whatever the unit.
  */
+import { ASSUMED_FINAL_SHARE_SIGMA_LN } from '../brew/bed.ts';
 import coffeeSchema from '../content/schemas/coffee.schema.json' with { type: 'json' };
 import potSchema from '../content/schemas/pot.schema.json' with { type: 'json' };
 import stoveSchema from '../content/schemas/stove.schema.json' with { type: 'json' };
@@ -105,7 +106,7 @@ export function candidateParameters(
             kind: 'tightening' as const,
             prior: coffee.bed.tightening.finalShare,
             ...RANGE.tightening,
-            priorSigmaLn: coffee.tighteningProvenance?.sigmaRel ?? 0.3,
+            priorSigmaLn: coffee.tighteningProvenance?.sigmaRel ?? ASSUMED_FINAL_SHARE_SIGMA_LN,
           },
         ]
       : []),

@@ -7,7 +7,9 @@ import type { Parameter } from './parameters.ts';
  *   no-information        the observations do not depend on it (its column of J is ~0)
  *   too-few-observations  fewer observations than parameters; the ones the data inform
  *                         most were fitted (column-pivoted ranking of J at the prior)
- *   too-uncertain         fitted, its relative 1-σ exceeded the limit (50 %), or its effect
+ *   too-uncertain         fitted, its relative 1-σ exceeded the limit (50 %): from the readings
+ *                         alone, or with the held values' prior doubt propagated (then it
+ *                         is not separable from them: notSeparableFrom); or its effect
  *                         cannot be told apart from the others' (J rank-deficient)
  */
 export type NotIdentifiableReason = 'no-information' | 'too-few-observations' | 'too-uncertain';
@@ -36,8 +38,15 @@ export interface KeptEstimate {
   /** The prior, SI. */
   readonly value: number;
   readonly reason: NotIdentifiableReason;
-  /** For too-uncertain: the relative 1-σ it had when fitted (Infinity: not separable). */
+  /**
+   * For too-uncertain: the relative 1-σ it had when fitted (Infinity: not separable), the
+   * held values' doubt included when that is what passed the limit.
+   */
   readonly relativeSigmaIfFitted?: number;
+  /** The held values whose doubt made up more than a quarter of that σ² (not separable from them). */
+  readonly notSeparableFrom?: readonly string[];
+  /** Then: the readings' part of that σ alone (what more of the same readings would shrink). */
+  readonly readingsRelativeSigma?: number;
 }
 
 export type Estimate = FittedEstimate | KeptEstimate;

@@ -396,6 +396,11 @@ function kept(
                 ? null
                 : percent(estimate.relativeSigmaIfFitted),
             limitPercent: percent(report.relativeSigmaLimit),
+            notSeparableFrom: estimate.notSeparableFrom ?? [],
+            readingsPercent:
+              estimate.readingsRelativeSigma === undefined
+                ? null
+                : percent(estimate.readingsRelativeSigma),
           };
   return {
     ...label(parameter, loaded),
@@ -442,7 +447,18 @@ export function fitText(
     };
   });
   const plain = report.estimates.flatMap((e): string[] => {
-    if (e.status !== 'fitted') return [];
+    if (e.status !== 'fitted') {
+      if (e.parameter.kind !== 'tightening') return [];
+      const ifFitted = e.relativeSigmaIfFitted;
+      return [
+        fitWords.plainTighteningKept(
+          loaded.coffee.name,
+          String(Math.round(e.value * 100)),
+          ifFitted !== undefined && Number.isFinite(ifFitted) ? percent(ifFitted) : null,
+          e.notSeparableFrom ?? [],
+        ),
+      ];
+    }
     const pct = percent(e.relativeSigma);
     switch (e.parameter.kind) {
       case 'heat':
@@ -485,7 +501,7 @@ export function fitText(
   );
   const lines = [
     fitWords.plainHeading,
-    ...(plain.length > 0 ? plain : [fitWords.plainNothing]),
+    ...(report.fittedCount > 0 ? plain : [fitWords.plainNothing, ...plain]),
     ...(report.misfit ? [fitWords.plainMisfit(report.misfit.brews)] : []),
     ...(report.leaveOneOut
       ? [fitWords.plainPrediction(sig(report.leaveOneOut.rmsNormalised, 2))]

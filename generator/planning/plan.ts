@@ -16,7 +16,8 @@
  */
 import { simulateBrew, simulateHeatOn, type HeatOnBrew } from '../brew/simulate.ts';
 import { BrewSetupError } from '../brew/errors.ts';
-import type { BrewResult } from '../brew/types.ts';
+import type { BedModel, BrewResult } from '../brew/types.ts';
+import { ASSUMED_FINAL_SHARE_SIGMA_LN } from '../brew/bed.ts';
 import type { CoffeeEntry, PotEntry, StoveEntry } from '../content/types.ts';
 import { saturationTemperatureK } from '../physics/if97-region4.ts';
 import { CELSIUS_OFFSET_K } from '../physics/constants.ts';
@@ -144,7 +145,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
     { offS, series = false, scale = NOMINAL, search = false }: RunChoice = {},
   ) => {
     const fill = request.fillM3 ?? fillFor(pot, startK, room.ambientPa);
-    const bed = { ...coffee.bed, permeabilityM2: coffee.bed.permeabilityM2 * scale.permeability };
+    const bed = scaledBed(coffee, scale);
     return brewSetup(pot.model, bed, room, {
       fillVolumeM3: fill,
       startK,
@@ -248,7 +249,7 @@ export function planCard(request: PlanRequest, search: PlanSearch = DEFAULT_SEAR
   }
 
   // The highest-pressure corner (tightest bed, most heat) must also keep the limit.
-  const highCorner = { permeability: 1 / spread.permeabilityFactor, heat: 1 + spread.heatShare };
+  const highCorner = cornersOf(spread)[1]!;
   /** The best choice the high corner's pressure turned down (a binding cause). */
   let cornerRejected: { share: number; highPa: number } | null = null;
   const printable = firstPrintable(
@@ -446,6 +447,44 @@ export function inputSpread(coffee: CoffeeEntry, stove: StoveEntry): InputSpread
       : ASSUMED_HEAT_SHARE,
     permeabilityMeasured,
     heatMeasured,
+    ...(coffee.bed.tightening ? { finalShare: finalShareSpread(coffee) } : {}),
+  };
+}
+
+/**
+ * A bed that tightens: its final share's corners, f·e^(∓2σ) in ln f (the fit's own scale),
+ * within the schema's 0.1–1; σ measured (the note `fit --write` left beside final_share)
+ * or assumed (ASSUMED_FINAL_SHARE_SIGMA_LN, the fit's prior too). A measured share with a
+ * σ below the assumed one narrows the corners, and so the card's ranges.
+ */
+export function finalShareSpread(coffee: CoffeeEntry): InputSpread['finalShare'] {
+  const tightening = coffee.bed.tightening;
+  if (!tightening) return undefined;
+  const measuredSigma = coffee.tighteningProvenance?.sigmaRel;
+  const measured =
+    measuredSigma !== undefined && Number.isFinite(measuredSigma) && measuredSigma > 0;
+  const sigmaLn = measured ? measuredSigma : ASSUMED_FINAL_SHARE_SIGMA_LN;
+  const f = tightening.finalShare;
+  return {
+    low: Math.max(FINAL_SHARE_MIN, f * Math.exp(-2 * sigmaLn)),
+    high: Math.min(1, f * Math.exp(2 * sigmaLn)),
+    sigmaLn,
+    measured,
+  };
+}
+
+/** The schema's lowest final share (coffee.schema.json bed.tightening.final_share). */
+const FINAL_SHARE_MIN = 0.1;
+
+/** The coffee's bed with a corner's permeability scale and (tightening on) final share. */
+function scaledBed(coffee: CoffeeEntry, scale: Scale): BedModel {
+  const { tightening } = coffee.bed;
+  return {
+    ...coffee.bed,
+    permeabilityM2: coffee.bed.permeabilityM2 * scale.permeability,
+    ...(tightening && scale.finalShare !== undefined
+      ? { tightening: { ...tightening, finalShare: scale.finalShare } }
+      : {}),
   };
 }
 
@@ -455,14 +494,21 @@ const ASSUMED_HEAT_SHARE = 0.3;
 const MEASURED_PERMEABILITY_REL = 0.15;
 const MEASURED_HEAT_REL = 0.05;
 
-function cornersOf(spread: InputSpread): { permeability: number; heat: number }[] {
+/**
+ * The four corners, the tight ones first: [1] is the highest-pressure corner (tightest
+ * bed, most heat). A tightening bed's lower final share goes with the tighter bed (both
+ * slow the flow and raise the pressure), its higher with the more open one.
+ */
+export function cornersOf(spread: InputSpread): Scale[] {
   const k = spread.permeabilityFactor,
     h = spread.heatShare;
+  const tight = spread.finalShare ? { finalShare: spread.finalShare.low } : {};
+  const open = spread.finalShare ? { finalShare: spread.finalShare.high } : {};
   return [
-    { permeability: 1 / k, heat: 1 - h },
-    { permeability: 1 / k, heat: 1 + h },
-    { permeability: k, heat: 1 - h },
-    { permeability: k, heat: 1 + h },
+    { permeability: 1 / k, heat: 1 - h, ...tight },
+    { permeability: 1 / k, heat: 1 + h, ...tight },
+    { permeability: k, heat: 1 - h, ...open },
+    { permeability: k, heat: 1 + h, ...open },
   ];
 }
 
@@ -535,16 +581,24 @@ function bindingCauseOf(
 /** A what-if that gains this much share names the cause. */
 const CAUSE_GAIN = 0.1;
 
+/** Scales of the coffee's permeability and the level's heat, and a tightening bed's final share (a corner). */
+export interface Scale {
+  readonly permeability: number;
+  readonly heat: number;
+  /** The final share itself (not a scale); absent: the coffee's own. */
+  readonly finalShare?: number;
+}
+
 interface RunChoice {
   readonly offS?: number;
   readonly series?: boolean;
-  /** Scales of the coffee's permeability and the level's heat (the sensitivity corners). */
-  readonly scale?: { readonly permeability: number; readonly heat: number };
+  /** The corner to run at (the sensitivity corners); absent: nominal. */
+  readonly scale?: Scale;
   /** A search run: integrated at SEARCH_RTOL. */
   readonly search?: boolean;
 }
 
-const NOMINAL = { permeability: 1, heat: 1 };
+const NOMINAL: Scale = { permeability: 1, heat: 1 };
 /**
  * Room temperature, the kettle presets, and 5 K steps (a thermometer), up to 90 °C and
  * 2 K below boiling, ascending.

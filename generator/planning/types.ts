@@ -141,7 +141,8 @@ export type CardPlan = AcceptedPlan | RefusedPlan;
 
 /**
  * How far the two inputs that move a card most may be off: the corners of the ranges are
- * permeability ×/÷ permeabilityFactor and heat × (1 ± heatShare).
+ * permeability ×/÷ permeabilityFactor and heat × (1 ± heatShare), and, for a bed that
+ * tightens, its final share between finalShare.low and finalShare.high.
  */
 export interface InputSpread {
   readonly permeabilityFactor: number;
@@ -149,6 +150,18 @@ export interface InputSpread {
   /** From a log fit or a measured entry (else assumed from the grind / a default efficiency). */
   readonly permeabilityMeasured: boolean;
   readonly heatMeasured: boolean;
+  /**
+   * A bed that tightens (the coffee's bed.tightening on; absent otherwise): its final
+   * share's corners, f·e^(∓2σ) within 0.1–1, paired with the permeability's (the lower
+   * share with the tighter bed), σ of ln f measured (the note `fit --write` left) or
+   * assumed (ASSUMED_FINAL_SHARE_SIGMA_LN).
+   */
+  readonly finalShare?: {
+    readonly low: number;
+    readonly high: number;
+    readonly sigmaLn: number;
+    readonly measured: boolean;
+  };
 }
 
 export type BindingCauseCode =

@@ -548,10 +548,16 @@ async function recipe(
     ...(level?.provenance
       ? [{ what: 'heat' as const, ...provenanceText(level.provenance, voice) }]
       : []),
+    ...(plan.spread.finalShare?.measured && e.coffee.tighteningProvenance
+      ? [{ what: 'tightening' as const, ...provenanceText(e.coffee.tighteningProvenance, voice) }]
+      : []),
   ];
+  const shareAssumed = plan.spread.finalShare?.measured === false;
   const notes = [
     ...(plan.bindingCause ? [bindingCauseText(plan, voice)] : []),
-    ...(grindAssumed || stoveAssumed ? [words.expect.assumed(grindAssumed, stoveAssumed)] : []),
+    ...(grindAssumed || stoveAssumed || shareAssumed
+      ? [words.expect.assumed(grindAssumed, stoveAssumed, shareAssumed)]
+      : []),
     ...(measured.length > 0 ? [words.expect.measured(measured)] : []),
   ];
 

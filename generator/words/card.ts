@@ -136,17 +136,18 @@ export const cardWords = {
     boilingValue: (boiling: string, altitude: string): string =>
       `${boiling} (altitude ${altitude})`,
     /** When the coffee's permeability or the stove's efficiency are defaults, not measured. */
-    assumed: (grind: GrindClass | null, stove: boolean): string => {
+    assumed: (grind: GrindClass | null, stove: boolean, tightening = false): string => {
       const parts = [
         ...(grind ? [`a typical ${grindNames[grind]} grind`] : []),
         ...(stove ? ['a typical efficiency for this kind of stove'] : []),
+        ...(tightening ? ['the bed tightening as its entry says (not yet weighed)'] : []),
       ];
       return `Times assume ${parts.join(' and ')}; a timed brew log narrows them.`;
     },
     /** Inputs `stovecard fit` measured: which, from which log, when, how closely. */
     measured: (
       items: readonly {
-        readonly what: 'grind' | 'heat';
+        readonly what: 'grind' | 'heat' | 'tightening';
         readonly percent: string;
         readonly log: string;
         readonly date: string;
@@ -155,7 +156,7 @@ export const cardWords = {
       `Measured from timed brews: ${items
         .map(
           (m) =>
-            `${m.what === 'grind' ? 'how fast this coffee flows' : 'this setting’s heat'} (± ${m.percent} %, ${m.log}, ${m.date})`,
+            `${m.what === 'grind' ? 'how fast this coffee flows' : m.what === 'tightening' ? 'how much the bed tightens as it brews' : 'this setting’s heat'} (± ${m.percent} %, ${m.log}, ${m.date})`,
         )
         .join('; ')}.`,
   },

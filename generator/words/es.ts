@@ -144,16 +144,17 @@ const card: Messages['card'] = {
     },
     boiling: 'Aquí el agua hierve a',
     boilingValue: (boiling: string, altitude: string): string => `${boiling} (altitud ${altitude})`,
-    assumed: (grind: GrindClass | null, stove: boolean): string => {
+    assumed: (grind: GrindClass | null, stove: boolean, tightening = false): string => {
       const parts = [
         ...(grind ? [`una molienda ${grindNames[grind]} típica`] : []),
         ...(stove ? ['un rendimiento típico para este tipo de fuego'] : []),
+        ...(tightening ? ['que la cama se compacta como indica su ficha (aún sin pesar)'] : []),
       ];
       return `Los tiempos suponen ${parts.join(' y ')}; un registro de preparaciones cronometradas los afina.`;
     },
     measured: (
       items: readonly {
-        readonly what: 'grind' | 'heat';
+        readonly what: 'grind' | 'heat' | 'tightening';
         readonly percent: string;
         readonly log: string;
         readonly date: string;
@@ -162,7 +163,7 @@ const card: Messages['card'] = {
       `Medido con preparaciones cronometradas: ${items
         .map(
           (m) =>
-            `${m.what === 'grind' ? 'lo deprisa que pasa este café' : 'el calor de esta posición'} (± ${m.percent} %, ${m.log}, ${m.date})`,
+            `${m.what === 'grind' ? 'lo deprisa que pasa este café' : m.what === 'tightening' ? 'cuánto se compacta la cama durante la preparación' : 'el calor de esta posición'} (± ${m.percent} %, ${m.log}, ${m.date})`,
         )
         .join('; ')}.`,
   },

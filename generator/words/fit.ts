@@ -32,6 +32,10 @@ export type KeptReason =
       readonly kind: 'too-uncertain';
       readonly relativePercent: string | null;
       readonly limitPercent: string;
+      /** Held values (ids) whose own doubt makes up most of that σ: not separable from them. */
+      readonly notSeparableFrom: readonly string[];
+      /** The readings' part of that σ, when the held values' doubt is what passed the limit. */
+      readonly readingsPercent: string | null;
     };
 
 export interface KeptLine extends ParameterLabel {
@@ -88,7 +92,7 @@ const wouldInform: Record<KeptLine['parameterKind'], string> = {
   'heat-loss':
     'probe readings of the water through a long, gentle brew, or many brews at different start temperatures, inform it',
   tightening:
-    'scale readings of the cup (cup_g) through the delivery of a brew or two inform it; first-coffee times hardly depend on it',
+    "scale readings of the cup (cup_g) through the delivery inform it, but only as well as the grounds' water retention is known; first-coffee times hardly depend on it",
 };
 
 function reasonWords(reason: KeptReason): string {
@@ -100,7 +104,7 @@ function reasonWords(reason: KeptReason): string {
     case 'too-uncertain':
       return reason.relativePercent === null
         ? "its effect on the observations cannot be told apart from the other parameters'"
-        : `fitted, its 1-σ came out at ${reason.relativePercent} %, more than the ${reason.limitPercent} % a fit may leave`;
+        : `fitted, its 1-σ came out at ${reason.relativePercent} %, more than the ${reason.limitPercent} % a fit may leave${reason.notSeparableFrom.length ? `, most of it from the doubt of the ${reason.notSeparableFrom.map(plainName).join(' and ')}, which this log cannot separate it from` : ''}${reason.readingsPercent !== null ? ` (± ${reason.readingsPercent} % from the readings alone)` : ''}`;
   }
 }
 
@@ -163,6 +167,14 @@ export const fitWords = {
     entangled: readonly string[],
   ): string =>
     `  ${coffee}'s bed tightens as it brews: once most of the water has passed it lets through about ${sharePercent} % of what it did at first, give or take ${percent} %${entangled.length ? ` (not separable from the ${entangled.map(plainName).join(' and ')})` : ''}.`,
+  /** The share kept at the entry's value: `percent` is the σ a fit would have left (null: no estimate). */
+  plainTighteningKept: (
+    coffee: string,
+    sharePercent: string,
+    percent: string | null,
+    entangled: readonly string[],
+  ): string =>
+    `  This log cannot tell how much ${coffee}'s bed tightens as it brews${percent !== null ? ` (a fit would leave ± ${percent} %${entangled.length ? `, mostly from the doubt of the ${entangled.map(plainName).join(' and ')}` : ''})` : ''}: the entry's ${sharePercent} % is kept, and nothing is written for it.`,
   plainHeatLoss: (pot: string, value: string, percent: string): string =>
     `  The ${pot} loses about ${value} W for each °C above the room, give or take ${percent} %.`,
   plainMisfit: (brews: readonly number[]): string =>

@@ -9,6 +9,7 @@ import { insertCardView, stationCardView } from '../../generator/render/card-vie
 import { crossSection } from '../../generator/render/cross-section.ts';
 import { refusalText } from '../../generator/render/plan-text.ts';
 import { cardWords } from '../../generator/words/card.ts';
+import { expectOneSource } from './one-source.ts';
 import { OPTIONS, demoCatalogue, firstAcceptedPlan, plan, refusedPlan } from './demo.ts';
 
 const NBSP = '\u00a0';
@@ -260,7 +261,9 @@ describe('one number, one source: the one-cup demo cards', () => {
         const p = plan(catalogue, { potId: 'one-cup', coffeeId, stoveId });
         if (p.refused) continue;
         for (const units of ['metric', 'us'] as const) {
-          const r = (await stationCardView(p, catalogue, { ...OPTIONS, units })).recipe!;
+          const view = await stationCardView(p, catalogue, { ...OPTIONS, units });
+          if (units === 'metric') expectOneSource(view, p, `${coffeeId}/${stoveId}`);
+          const r = view.recipe!;
           expect(r.water.fillLineText).toContain(r.water.belowValve.text);
           expect(r.water.crossSectionSvg).toContain(
             cardWords.crossSection.margin(r.water.belowValve.text).replace(/"/g, '&quot;'),
