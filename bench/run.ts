@@ -121,7 +121,8 @@ async function main(): Promise<void> {
     process.stderr.write(
       `stovecard bench: ${size.pots} pots × ${size.coffees} coffees × ${size.stoves} stoves = ` +
         `${stationCount(size)} station cards, ${jobs.inserts.length} inserts, ` +
-        `${jobs.sets.length} sets (${layout}); ${workers} workers; PDF step ${stepName}; ${root}\n`,
+        `${jobs.sets.length} sets (${layout}); ${workers} workers ` +
+        `(${freshCompiledWorker() ? 'from dist/' : 'through tsx: dist/ is stale'}); PDF step ${stepName}; ${root}\n`,
     );
     const run: Run = { root, contentDir, workers, pdfStep };
     const full = await measured('full', run);
