@@ -57,6 +57,12 @@ export function reportError(error: unknown): number {
     );
     return 2;
   }
+  // A card too long for its paper at the 7 pt floor (render/pdf/card.ts PdfLayoutError; it
+  // reaches here by name when a build worker drew the card): the words say what to change.
+  if (error instanceof Error && error.name === 'PdfLayoutError') {
+    process.stderr.write(`stovecard: ${error.message}\n`);
+    return 2;
+  }
   if (error instanceof OutFolderError) {
     process.stderr.write(`stovecard: ${outFolderMessage(error.folder, error)}\n`);
     return 2;

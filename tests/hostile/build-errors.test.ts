@@ -295,6 +295,23 @@ describe('stovecard build on broken content keeps the last good site', () => {
     expect(await leftovers(out)).toEqual([]);
   });
 
+  it('an insert set too long for A6 at the 7 pt floor: the card and the fix named, exit 2', async () => {
+    const { content, out } = await prepare('a6-insert', async (dir) => {
+      const text = await readFile(path.join(dir, 'site.yaml'), 'utf8');
+      await writeFile(
+        path.join(dir, 'site.yaml'),
+        `${text.slice(0, text.indexOf('sets:'))}sets:\n  - id: bags\n    title: Bags\n    layout: insert\n    paper: A6\n    coffees: [house-blend]\n`,
+      );
+    });
+    const before = await treeHash(out);
+    const run = await runMain(['build', '--content', content, '--out', out]);
+    expectCleanFailure(run, 'A6 insert');
+    expect(run.stderr).toContain('"house-blend" does not fit on one A6 page');
+    expect(run.stderr).toContain('fewer pots or stoves');
+    expect(await treeHash(out)).toBe(before);
+    expect(await leftovers(out)).toEqual([]);
+  });
+
   it('into a new --out folder: nothing is created', async () => {
     const { content } = await prepare('fresh', cases[0]!.mutate);
     const out = path.join(root, 'never-built');
