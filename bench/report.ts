@@ -8,6 +8,7 @@ import { resourceUsage } from 'node:process';
 import type { BuildResult } from '../generator/pipeline/build-site.ts';
 import type { BuildStats } from '../generator/pipeline/stats.ts';
 import type { CatalogueSize } from './catalogue.ts';
+import type { SetSize, StrictFloor } from './floors.ts';
 
 export interface Measured {
   readonly name: string;
@@ -44,6 +45,8 @@ export const TARGETS = {
   planMs: 8,
   viewMs: 6,
   cardPdfMs: 20,
+  /** A set's PDF against the same cards drawn afresh into one document, bytes. */
+  setPdfOverFresh: 1.15,
 } as const;
 
 const mb = (bytes: number): string => `${(bytes / 2 ** 20).toFixed(0)} MB`;
@@ -75,6 +78,9 @@ export interface Report {
   readonly noop: Measured;
   /** The last of a --serve session's one-coffee rebuilds (one pool kept across them). */
   readonly session: Measured;
+  /** Bare pages through the same layout and bare PDFs in the same fonts (floors.ts). */
+  readonly strict: StrictFloor;
+  readonly sizes: readonly SetSize[];
 }
 
 export function formatTable(report: Report): string {
@@ -106,6 +112,11 @@ export function formatTable(report: Report): string {
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
   const st = full.result.stats;
   const fullOverFloor = full.wallMs / floor.wallMs;
+  const { strict, sizes } = report;
+  const fullOverStrict = full.wallMs / strict.wallMs;
+  const setRatio = (z: SetSize) => z.assembledBytes / Math.max(1, z.freshBytes);
+  const worstSet = Math.max(...sizes.map(setRatio));
+  const kB = (bytes: number) => `${(bytes / 1024).toFixed(0)} kB`;
   // The cards an edit affects are the ones whose view is made again; all = the full build's.
   const ideal = (m: Measured) =>
     (m.result.stats.views.made / Math.max(1, st.views.made)) * full.wallMs;
@@ -145,6 +156,8 @@ export function formatTable(report: Report): string {
     `session/ideal = ${sessionOverIdeal.toFixed(2)}  (warm workers, as \`stovecard build --serve\`; ideal ${s(ideal(session))})`,
     `session rebuild = ${(session.wallMs / 1000).toFixed(2)} s (target ≤ ${TARGETS.sessionRebuildS} s on 1,000 cards: ${verdict(session.wallMs / 1000, TARGETS.sessionRebuildS)})`,
     `full/floor    = ${fullOverFloor.toFixed(2)}  (target ≤ ${TARGETS.fullOverFloor}: ${verdict(fullOverFloor, TARGETS.fullOverFloor)})`,
+    `full/strict   = ${fullOverStrict.toFixed(2)}  (no target set; strict floor ${s(strict.wallMs)}: ${strict.pages} bare pages through the same layout ${s(strict.pagesMs)}, ${strict.pdfs} bare one-page PDFs in the same fonts ${s(strict.pdfsMs)}; floor/strict ${(floor.wallMs / strict.wallMs).toFixed(2)})`,
+    `set PDF/fresh = ${worstSet.toFixed(2)}  (target ≤ ${TARGETS.setPdfOverFresh}: ${verdict(worstSet, TARGETS.setPdfOverFresh)}; the larger of ${sizes.map((z) => `${z.set} ${z.cards} cards ${kB(z.assembledBytes)} assembled / ${kB(z.freshBytes)} drawn afresh = ${setRatio(z).toFixed(2)}`).join(', ')})`,
     `per card      plan ${planMs.toFixed(1)} ms (≤ ${TARGETS.planMs}: ${verdict(planMs, TARGETS.planMs)}), view ${viewMs.toFixed(1)} ms (≤ ${TARGETS.viewMs}: ${verdict(viewMs, TARGETS.viewMs)}), card PDF ${pdfMs.toFixed(1)} ms (≤ ${TARGETS.cardPdfMs}: ${verdict(pdfMs, TARGETS.cardPdfMs)})`,
     `machine load  ${loadavg()
       .map((l) => l.toFixed(1))

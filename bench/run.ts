@@ -8,6 +8,8 @@
  *   floor     the same site again with every plan and view (chart, cross-section, QR code,
  *             words) from the warm cache, and every HTML page and PDF (cards and sets)
  *             rendered: the pages and PDFs with no simulation and no chart behind them
+ *   strict    bare pages through the same layout and bare one-page PDFs in the same fonts
+ *             (bench/floors.ts), with no card on them
  *   rebuild   one coffee's permeability changed by 10 %, everything else cached, in a new
  *             pool of workers (as `stovecard build` after an edit)
  *   no-op     nothing changed
@@ -17,9 +19,11 @@
  * Each build is buildSite with a PDF step as its extra step, as `stovecard build` runs it:
  * `site` (default), the build's incremental step on the workers (generator/pipeline/pdf-step.ts),
  * or `module`, the PDF module's own step (render/pdf/site-pdfs.ts pdfBuildStep: every PDF,
- * in one thread; its PDFs are not counted in the table). Prints a table and the ratios
- * full/floor (target ≤ 1.5) and rebuild/full (target ≤ 0.05). Timings are only compared
- * within one run (shared machine).
+ * in one thread; its PDFs are not counted in the table). Prints a table and each target
+ * of issue 14 as a ratio beside its target (bench/report.ts), and the size of the first
+ * station set's and the insert set's PDFs against the same cards drawn afresh. Timings are
+ * only compared within one run (shared machine). Workers start from dist/ when it is up to
+ * date (pool.ts), as under `stovecard build`; `npm run bench` compiles it first.
  * For a CPU profile: `node --cpu-prof --cpu-prof-dir=prof --import tsx bench/run.ts
  * --cards 200`, then `npx tsx bench/profile-summary.ts prof/<file>.cpuprofile`.
  */
@@ -33,7 +37,9 @@ import { sitePdfStep } from '../generator/pipeline/pdf-step.ts';
 import { WorkerPool } from '../generator/pipeline/pool.ts';
 import { loadCatalogue } from '../generator/content/index.ts';
 import { pdfBuildStep } from '../generator/render/pdf/site-pdfs.ts';
+import { freshCompiledWorker } from '../generator/pipeline/pool.ts';
 import { DEFAULT_SIZE, sizeForCards, stationCount, writeCatalogue } from './catalogue.ts';
+import { setSizes, strictFloor } from './floors.ts';
 import { formatTable, memorySampler, type Measured } from './report.ts';
 
 const EPOCH = { SOURCE_DATE_EPOCH: '1714521600' };
@@ -115,10 +121,19 @@ async function main(): Promise<void> {
     process.stderr.write(
       `stovecard bench: ${size.pots} pots × ${size.coffees} coffees × ${size.stoves} stoves = ` +
         `${stationCount(size)} station cards, ${jobs.inserts.length} inserts, ` +
-        `${jobs.sets.length} sets (${layout}); ${workers} workers; PDF step ${stepName}; ${root}\n`,
+        `${jobs.sets.length} sets (${layout}); ${workers} workers ` +
+        `(${freshCompiledWorker() ? 'from dist/' : 'through tsx: dist/ is stale'}); PDF step ${stepName}; ${root}\n`,
     );
     const run: Run = { root, contentDir, workers, pdfStep };
     const full = await measured('full', run);
+    const sizes = await setSizes(
+      full.result,
+      path.join(root, 'site'),
+      [jobs.sets.find((set) => set.layout === 'station')?.id ?? '', 'shipping-inserts'],
+      EPOCH,
+    );
+    const strict = await strictFloor(full.result, root, workers, EPOCH);
+    process.stderr.write(`  strict floor: ${(strict.wallMs / 1000).toFixed(1)} s\n`);
     // The floor: plans and views stay cached; pages and PDFs are rendered again.
     await rm(path.join(root, 'cache', 'pdfs'), { recursive: true, force: true });
     await rm(path.join(root, 'cache', 'pages'), { recursive: true, force: true });
@@ -140,7 +155,7 @@ async function main(): Promise<void> {
       await pool.close();
     }
     process.stdout.write(
-      `${formatTable({ size, layout, pdfStep: stepName, inserts: jobs.inserts.length, sets: jobs.sets.length, full, floor, rebuild, noop, session: session! })}\n`,
+      `${formatTable({ size, layout, pdfStep: stepName, inserts: jobs.inserts.length, sets: jobs.sets.length, full, floor, rebuild, noop, session: session!, strict, sizes })}\n`,
     );
   } finally {
     if (values.keep) process.stderr.write(`kept ${root}\n`);

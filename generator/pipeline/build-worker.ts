@@ -8,6 +8,7 @@
  *   station-view  stationCardView(plan, catalogue)   → toTaggedJson text of the view
  *   card-pdf      cardPdf(view)                      → the PDF's bytes
  *   set-pdf       setPdf(input, the card PDF files)  → the PDF's bytes and page count
+ *   bare-pdf      barePdf(input)                     → the bench's stricter floor (bare.ts)
  *
  * The renderers are imported on first use, so a worker that only plans never loads
  * vega or pdfkit.
@@ -17,6 +18,7 @@ import { parentPort, workerData } from 'node:worker_threads';
 import type { Catalogue } from '../content/types.ts';
 import type { PlanRequest } from '../planning/plan.ts';
 import type { CardViewOptions } from '../render/card-view.ts';
+import type { BarePdfInput } from '../render/pdf/bare.ts';
 import type { SetPdfInput } from '../render/pdf/binder.ts';
 import type { CardView, PdfContext } from '../render/pdf/card.ts';
 import { fromTaggedJson, planFromJson, planToJson, toTaggedJson } from './plan-cache.ts';
@@ -36,13 +38,15 @@ export type TaskRequest =
       readonly input: Omit<SetPdfInput, 'cardPdfs'>;
       /** The set's cards' PDF files, in order (read here rather than sent over). */
       readonly cardFiles: readonly string[];
-    };
+    }
+  | { readonly kind: 'bare-pdf'; readonly input: BarePdfInput };
 
 interface Results {
   plan: { readonly json: string; readonly simulations: number };
   'station-view': { readonly json: string };
   'card-pdf': { readonly bytes: Uint8Array; readonly dropped: readonly string[] };
   'set-pdf': { readonly bytes: Uint8Array; readonly pages: number };
+  'bare-pdf': { readonly bytes: Uint8Array };
 }
 
 export type TaskResult<K extends TaskRequest['kind']> = Results[K];
@@ -81,6 +85,10 @@ export async function runTask(task: TaskRequest): Promise<TaskResult<TaskRequest
       const cardPdfs = await Promise.all(task.cardFiles.map((file) => readFile(file)));
       const pdf = await setPdf({ ...task.input, cardPdfs });
       return { bytes: pdf.bytes, pages: pdf.pages };
+    }
+    case 'bare-pdf': {
+      const { barePdf } = await import('../render/pdf/bare.ts');
+      return { bytes: await barePdf(task.input) };
     }
   }
 }

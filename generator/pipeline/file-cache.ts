@@ -16,10 +16,12 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import {
   access,
+  link,
   mkdir,
   readdir,
   readFile,
   rename,
+  rm,
   stat,
   unlink,
   writeFile,
@@ -35,6 +37,20 @@ export const CHECK_EXT = '.sha256';
 
 /** File names read or written since the last sweep, by folder (shared by its caches). */
 const usedNames = new Map<string, Set<string>>();
+
+/**
+ * Cached files this process has read and checked, by what identifies their bytes on disk
+ * (device, inode, size and modification time, of the file and of its check file): a
+ * cache file is only ever replaced by a rename (a new inode), and a write in place (a
+ * person's, through a hard link in a site) changes its modification time. The change
+ * time is left out: making a hard link changes it.
+ */
+const checkedOnDisk = new Set<string>();
+
+function diskIdentity(info: import('node:fs').Stats, check: import('node:fs').Stats): string {
+  const one = (s: import('node:fs').Stats) => `${s.dev}:${s.ino}:${s.size}:${s.mtimeMs}`;
+  return `${one(info)}|${one(check)}`;
+}
 
 /** Files that failed their check since the counts were last taken, by folder. */
 const damaged = new Map<string, number>();
@@ -152,12 +168,40 @@ export class FileCache {
   }
 
   /**
-   * Writes the cached file's bytes to `target` when they pass their check; false when the
-   * key is not cached or its file is damaged. A copy of the bytes checked, so what lands
-   * in the site is what was verified.
+   * Puts the cached file at `target` when its bytes pass their check; false when the key
+   * is not cached or its file is damaged. A hard link where the file system allows (the
+   * cache's files are never written in place, only replaced by a rename, so the site's
+   * file keeps the bytes that were checked), else a copy of the checked bytes. A file this
+   * process already checked and that has not changed on disk since is not read again.
    */
   async copyTo(key: string, target: string): Promise<boolean> {
-    const bytes = await this.getBytes(key);
+    const file = this.file(key);
+    let identity: string;
+    try {
+      const [info, check] = await Promise.all([stat(file), stat(`${file}${CHECK_EXT}`)]);
+      identity = diskIdentity(info, check);
+    } catch {
+      return false;
+    }
+    let bytes: Buffer | null = null;
+    if (!checkedOnDisk.has(identity)) {
+      bytes = await this.getBytes(key);
+      if (bytes === null) return false;
+    }
+    try {
+      await link(file, target);
+      const [info, check] = await Promise.all([stat(target), stat(`${file}${CHECK_EXT}`)]);
+      // Linked to what was checked (not to a file renamed in since): done.
+      if (diskIdentity(info, check) === identity) {
+        checkedOnDisk.add(identity);
+        return true;
+      }
+      await rm(target, { force: true });
+    } catch {
+      // No hard links here (another device, a file system without them): a copy.
+      await rm(target, { force: true });
+    }
+    bytes ??= await this.getBytes(key);
     if (bytes === null) return false;
     await writeFile(target, bytes);
     return true;

@@ -5,18 +5,26 @@
  *
  *   build ─ run(task) ─▶ queue ─▶ idle worker ─ runTask ─▶ { result, ms } ─▶ resolves
  *
- * Workers start from build-worker.mjs, which registers tsx and loads build-worker.ts (Node
- * 20 ignores a loader given as a Worker's `execArgv: ['--import', 'tsx']`, nodejs/node
- * #47747), so this works under the tsx CLI, bin/stovecard.js and vitest alike, from any
- * working folder. Tasks and results are structured-cloned; plans and views
+ * Workers start from compiled JavaScript whenever there is some that is up to date: the
+ * compiled build-worker.js beside this file (dist/), or, when this code runs from the
+ * TypeScript sources (tsx, vitest, the bench), dist/generator/pipeline/build-worker.js
+ * when no source under generator/ is newer than it (the test bin/stovecard.js makes), so
+ * a worker does not pay for tsx (its loader thread, compiling every module) on each
+ * start. Otherwise from build-worker.mjs, which registers tsx and loads build-worker.ts
+ * (Node 20 ignores a loader given as a Worker's `execArgv: ['--import', 'tsx']`,
+ * nodejs/node #47747), so this works under the tsx CLI, bin/stovecard.js and vitest
+ * alike, from any working folder. Tasks and results are structured-cloned; plans and views
  * travel as JSON text (plan-cache.ts), PDFs as bytes. A task that throws in a worker
  * rejects with an Error of the same name and message. A worker that dies fails the task it
  * held and is replaced on the next one; one that dies before finishing any task (it could
  * not start) fails every queued task with its error, and the pool takes no more.
  */
+import { readdirSync, statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
-import { COMPILED } from '../project-root.ts';
+import { COMPILED, PROJECT_ROOT } from '../project-root.ts';
 import {
   WORKER_ROLE,
   type TaskRequest,
@@ -26,8 +34,42 @@ import {
 
 export type { TaskRequest, TaskResult } from './build-worker.ts';
 
-// Compiled (dist/), the worker is plain JavaScript; from the sources it goes through tsx.
-const WORKER_URL = new URL(COMPILED ? './build-worker.js' : './build-worker.mjs', import.meta.url);
+/** Newest modification time of the .ts files under `dir`, ms (0 when there are none). */
+function newestSource(dir: string): number {
+  let newest = 0;
+  for (const entry of readdirSync(dir, { withFileTypes: true })) {
+    const full = path.join(dir, entry.name);
+    if (entry.isDirectory()) newest = Math.max(newest, newestSource(full));
+    else if (entry.name.endsWith('.ts')) newest = Math.max(newest, statSync(full).mtimeMs);
+  }
+  return newest;
+}
+
+/**
+ * The compiled worker of dist/ when it is at least as new as every source under
+ * generator/ (so it is the same code), else null.
+ */
+export function freshCompiledWorker(root: string = PROJECT_ROOT): URL | null {
+  const compiled = path.join(root, 'dist', 'generator', 'pipeline', 'build-worker.js');
+  try {
+    const compiledTime = statSync(compiled).mtimeMs;
+    return newestSource(path.join(root, 'generator')) <= compiledTime
+      ? pathToFileURL(compiled)
+      : null;
+  } catch {
+    return null;
+  }
+}
+
+let workerUrl: URL | null = null;
+
+/** Where the workers start (decided once per process, at the first worker). */
+export function workerEntry(): URL {
+  workerUrl ??= COMPILED
+    ? new URL('./build-worker.js', import.meta.url)
+    : (freshCompiledWorker() ?? new URL('./build-worker.mjs', import.meta.url));
+  return workerUrl;
+}
 
 /** Profiling flags of this process passed on, so `node --cpu-prof` also profiles workers. */
 function inheritedFlags(): string[] {
@@ -115,7 +157,7 @@ export class WorkerPool {
   }
 
   private spawn(): Slot {
-    const worker = new Worker(WORKER_URL, {
+    const worker = new Worker(workerEntry(), {
       execArgv: inheritedFlags(),
       workerData: { role: WORKER_ROLE },
     });

@@ -6,7 +6,8 @@
  * good site as it was.
  */
 import { createHash } from 'node:crypto';
-import { cp, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { cp, mkdtemp, readdir, readFile, rm, stat, writeFile } from 'node:fs/promises';
+import { writeCatalogue } from '../../bench/catalogue.ts';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -177,6 +178,49 @@ describe('a card page', () => {
       expect(await readFile(path.join(b, page), 'utf8'), page).toBe(
         await readFile(path.join(a, page), 'utf8'),
       );
+    }
+  });
+});
+
+describe('a set none of whose cards changed', () => {
+  it('is not re-assembled: linked from the cache, with a clean build’s bytes', async () => {
+    // Own rule of the pipeline (pdf-step.ts). The bench's catalogue, one set per coffee:
+    // 1 pot × 2 coffees × 5 stoves; coffee-01 is edited, binder-coffee-02 holds none of it.
+    const dir = await mkdtemp(path.join(tmpdir(), 'stovecard-kept-set-'));
+    try {
+      const contentDir = path.join(dir, 'content');
+      await writeCatalogue(contentDir, { pots: 1, coffees: 2, stoves: 5 }, 1, 'by-coffee');
+      const run = (out: string, extra: Partial<Parameters<typeof buildSite>[0]> = {}) =>
+        buildSite({
+          contentDir,
+          outDir: path.join(dir, out),
+          cacheDir: path.join(dir, `${out}-cache`),
+          env: EPOCH,
+          extraSteps: [sitePdfStep],
+          ...extra,
+        });
+      await run('site');
+      const file = path.join(contentDir, 'coffees', 'coffee-01.yaml');
+      const yaml = await readFile(file, 'utf8');
+      await writeFile(file, yaml.replace(/^permeability_m2: .*$/m, 'permeability_m2: 1.23e-12'));
+      const again = await run('site');
+      const sets = again.data.sets;
+      const kept = sets.find((set) => set.id === 'binder-coffee-02')!;
+      const edited = sets.find((set) => set.id === 'binder-coffee-01')!;
+      // Made again: coffee-01's five cards, its insert, and the three sets holding them (its
+      // own, the training binder's, the inserts'); binder-coffee-02 is copied.
+      expect(again.stats.pdfs.made).toBe(5 + 1 + 3);
+      const keptFile = path.join(dir, 'site', kept.paths.pdfFile);
+      expect((await stat(keptFile)).nlink).toBeGreaterThanOrEqual(2); // the cache's file
+      expect((await stat(path.join(dir, 'site', edited.paths.pdfFile))).nlink).toBe(1);
+      await run('clean', { workers: 0, extraSteps: [pdfBuildStep] });
+      for (const set of [kept, edited]) {
+        const clean = await readFile(path.join(dir, 'clean', set.paths.pdfFile));
+        const site = await readFile(path.join(dir, 'site', set.paths.pdfFile));
+        expect(site.equals(clean), set.id).toBe(true);
+      }
+    } finally {
+      await rm(dir, { recursive: true, force: true });
     }
   });
 });

@@ -103,8 +103,11 @@ export interface CardPage {
   readonly warnings: readonly string[];
 }
 
-/** Adds a page of the card's size to `open` and draws the card on it, tagged as an article. */
-function addCardPage(open: OpenPdf, view: CardView): CardPage {
+/**
+ * Adds a page of the card's size to `open` and draws the card on it, tagged as an article
+ * (the bench also draws a whole set this way, to compare a set's size with: bench/floors.ts).
+ */
+export function addCardPage(open: OpenPdf, view: CardView): CardPage {
   const page = pageBox(view);
   open.doc.addPage({ size: [page.widthPt, page.heightPt], margin: 0 });
   const fit = layoutCard(open.doc, view);

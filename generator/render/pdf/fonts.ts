@@ -87,6 +87,34 @@ interface EmbeddedFont {
   font: { createSubset(): unknown };
   subset: { glyphs: readonly number[] };
   layoutCache?: Record<string, unknown>;
+  encode(text: string): unknown;
+}
+
+/**
+ * The characters every embedded subset starts with, in this order: printable ASCII,
+ * Latin-1, the punctuation and signs the words print (dashes, quotes, arrows, ≤ ≥ ± ×
+ * σ χ), and DejaVu's f-ligatures (fontkit sets "fi" as one glyph). So two cards whose text
+ * stays within it embed byte-identical subsets of each face, and a set assembled from
+ * their PDFs (merge.ts, which stores identical objects once) holds each face once, as a
+ * set drawn in one document would; a card with a character outside it still gets that
+ * glyph (appended after these), only its subset is its own. A fixed list, never the
+ * site's text: a card's PDF stays a function of its own view.
+ */
+export const SUBSET_BASE: readonly string[] = [
+  ...Array.from({ length: 0x7f - 0x20 }, (_, i) => String.fromCharCode(0x20 + i)),
+  ...Array.from({ length: 0x100 - 0xa0 }, (_, i) => String.fromCharCode(0xa0 + i)),
+  ...'–—‘’‚“”„•…‹›→←−≤≥≈≠±×÷·σχµ‰€™',
+  'fi',
+  'fl',
+  'ff',
+  'ffi',
+  'ffl',
+];
+
+/** Puts SUBSET_BASE's glyphs first in a face's still empty subset (same order each time). */
+function startSubset(embedded: EmbeddedFont): void {
+  if (embedded.subset.glyphs.length > 1) return;
+  for (const text of SUBSET_BASE) embedded.encode(text);
 }
 
 /**
@@ -117,6 +145,7 @@ export function registerPdfFonts(doc: PDFKit.PDFDocument): void {
       embedded.subset = shared.createSubset() as EmbeddedFont['subset'];
     }
     if (embedded.layoutCache) embedded.layoutCache = wordShapesOf(face).layoutCache;
+    startSubset(embedded);
   }
 }
 
