@@ -89,7 +89,8 @@ function inspect(needles: readonly string[]) {
   return {
     missing: needles.filter((needle) => !texts.some((text) => text.includes(needle))),
     scripts: document.querySelectorAll('script').length,
-    images: document.querySelectorAll('img').length,
+    // The roaster's own logo (site.yaml brand:) is the only image a page may carry.
+    images: document.querySelectorAll('img:not(.site-logo):not(.brand-logo)').length,
     handlers,
     links,
   };
