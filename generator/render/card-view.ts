@@ -42,7 +42,7 @@ import {
   type Quantity,
   type TimeRangeText,
 } from './format.ts';
-import { heatFeel, insertSteps, type InsertStep } from './insert-steps.ts';
+import { heatFeel, insertSteps, labelNeedsFeel, type InsertStep } from './insert-steps.ts';
 import {
   insertPaths,
   pathLanguage,
@@ -735,7 +735,9 @@ function insertRow(
     dose: dose(plan.doseKg, voice),
     start: isHeated(plan) ? temperature(plan.startK, voice).text : words.roomTemperature,
     level: plan.levelLabel,
-    setting: words.setting(plan.levelLabel, words.heatFeel[heatFeel(e.stove, plan.levelIndex)]),
+    setting: labelNeedsFeel(plan.levelLabel)
+      ? words.setting(plan.levelLabel, words.heatFeel[heatFeel(e.stove, plan.levelIndex)])
+      : plan.levelLabel,
     firstCoffee: timeRange(plan.firstCoffeeS.lowS, plan.firstCoffeeS.highS),
     offHeat: timeRange(plan.offHeatS.lowS, plan.offHeatS.highS),
   };

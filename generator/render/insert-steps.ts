@@ -57,6 +57,16 @@ export function heatFeel(
   return 'strong';
 }
 
+/**
+ * Whether a knob label needs the heat said in words beside it: a number or code ("2",
+ * "P5") does; a label that is words already ("low", "simmer") does not, and a second word
+ * would contradict it where the maker's "low" is a medium share of a strong burner
+ * ("low · medium heat"). Our own rule.
+ */
+export function labelNeedsFeel(label: string): boolean {
+  return /\d/.test(label);
+}
+
 /** The one text every row prints, or null when they differ (or there are no rows). */
 function common(texts: readonly string[]): string | null {
   return texts.length > 0 && texts.every((t) => t === texts[0]) ? texts[0]! : null;

@@ -4,7 +4,12 @@
  * so of a knob's power is "gentle", the top setting "full".
  */
 import { describe, expect, it } from 'vitest';
-import { heatFeel, insertSteps, type StepRowTexts } from '../../generator/render/insert-steps.ts';
+import {
+  heatFeel,
+  insertSteps,
+  labelNeedsFeel,
+  type StepRowTexts,
+} from '../../generator/render/insert-steps.ts';
 import { INSERT_STEP_ORDER, pictogramSvg } from '../../generator/render/pictograms.ts';
 import { cardWords } from '../../generator/words/card.ts';
 
@@ -40,6 +45,20 @@ describe('heatFeel(stove, level)', () => {
 
   it('calls the only level of a one-setting stove full', () => {
     expect(heatFeel(levels(1200), 0)).toBe('full');
+  });
+});
+
+describe('labelNeedsFeel(label)', () => {
+  it('adds the heat in words to a knob number or code, never to a label that is words', () => {
+    // Own rule: a maker's "low" on a strong burner is a medium share of its top power, and
+    // "low · medium heat" would say two things; "2" or "P5" says nothing to a stranger.
+    expect(['2', 'P5', '6 of 9'].map(labelNeedsFeel)).toEqual([true, true, true]);
+    expect(['low', 'simmer', 'medium-high', 'suave'].map(labelNeedsFeel)).toEqual([
+      false,
+      false,
+      false,
+      false,
+    ]);
   });
 });
 
