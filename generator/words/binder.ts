@@ -243,7 +243,7 @@ export const binderWords = {
       steps: [
         `Cold: fill the base with ${f.fill} ${f.fillMass} of cold tap water, the basket with ${f.dose} of coffee, level and not tamped; seal the pot and put it on setting ${f.level}. Start the stopwatch as it goes on the heat.`,
         'Take it off at the first gurgle, cool the base under the cold tap and pour.',
-        `Hot: rinse the pot and brew again as the card says: water at ${f.temperature}, ${f.fill}, ${f.dose}, setting ${f.level}, off the heat at ${f.offHeat} or at the first gurgle.`,
+        `Hot: once the pot has cooled, rinse it and brew again as the card says: water at ${f.temperature}, ${f.fill}, ${f.dose}, setting ${f.level}, off the heat at ${f.offHeat} or at the first gurgle.`,
       ],
       record: [
         'For each brew: the time of the first coffee, the time of the first gurgle, and the coffee in the cup (a measuring jug, or a scale with the cup tared: a gram is about a millilitre).',

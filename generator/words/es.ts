@@ -835,7 +835,7 @@ const binder: Messages['binder'] = {
       steps: [
         `En frío: llene el depósito con ${f.fill} ${f.fillMass} de agua fría del grifo y el filtro con ${f.dose} de café, enrasado y sin prensar; cierre la cafetera y póngala en la posición ${f.level}. Ponga en marcha el cronómetro al ponerla al fuego.`,
         'Retírela al primer gorgoteo, enfríe el depósito bajo el grifo de agua fría y sirva.',
-        `En caliente: enjuague la cafetera y prepárela de nuevo como dice la ficha: agua a ${f.temperature}, ${f.fill}, ${f.dose}, posición ${f.level}, retirada a ${f.offHeat} o al primer gorgoteo.`,
+        `En caliente: cuando la cafetera se haya enfriado, enjuáguela y prepárela de nuevo como dice la ficha: agua a ${f.temperature}, ${f.fill}, ${f.dose}, posición ${f.level}, retirada a ${f.offHeat} o al primer gorgoteo.`,
       ],
       record: [
         'De cada preparación: el tiempo del primer café, el del primer gorgoteo y el café en la taza (con una jarra medidora, o con una báscula tarando la taza: un gramo es casi un mililitro).',
