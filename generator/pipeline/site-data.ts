@@ -264,7 +264,11 @@ export async function renderSite(
           method: methodView(example, catalogue, voice),
           troubleshooting: troubleshootingView(
             example && moveRows
-              ? movesView(moveRows, exampleNames(example.plan, catalogue), voice)
+              ? movesView(moveRows, exampleNames(example.plan, catalogue), voice, {
+                  potId: example.plan.potId,
+                  coffeeId: example.plan.coffeeId,
+                  stoveId: example.plan.stoveId,
+                })
               : null,
             voice,
           ),
@@ -283,6 +287,7 @@ export async function renderSite(
       inserts,
       catalogue.site.baseUrl,
       pageSetup(catalogue.site.units, catalogue.site.paper),
+      (language) => frontMatter[language]?.troubleshooting.moves ?? null,
     ),
     stationCards: [...stations.values()],
     insertCards: [...inserts.values()],

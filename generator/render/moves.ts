@@ -22,15 +22,19 @@ export function movesView(
   rows: readonly MoveFacts[],
   names: { readonly pot: string; readonly coffee: string; readonly stove: string },
   voice: Voice | UnitSystem,
+  /** The card's entry ids (which of a binder's cards the table is for). */
+  ids: { readonly potId: string; readonly coffeeId: string; readonly stoveId: string },
 ): MovesView {
   const units = asVoice(voice);
   const troubleshootingWords = units.words.troubleshooting;
   const changes = changeWords(troubleshootingWords.moves);
   return {
+    card: { ...ids, ...names },
     heading: troubleshootingWords.movesHeading,
     intro: troubleshootingWords.movesIntro(names.pot, names.coffee, names.stove),
     columns: troubleshootingWords.movesColumns,
     rows: rows.map((row): MoveRow => ({
+      code: row.change,
       change: changes[row.change],
       firstCoffee:
         row.firstCoffeeS === null ? troubleshootingWords.noCoffee : clock(row.firstCoffeeS),

@@ -5,6 +5,7 @@
  */
 import type { Catalogue, PaperSize } from '../content/types.ts';
 import type { AcceptedPlan, RefusalCode } from '../planning/types.ts';
+import type { MoveCode } from '../planning/sensitivity.ts';
 import type { Messages } from '../words/catalogue.ts';
 import type { Cautions, InsertCardView, PageSetup, StationCardView } from './card-view.ts';
 import { cautions as cautionsView, pageNav, pageSetup, type PageNav } from './card-view.ts';
@@ -14,6 +15,7 @@ import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './forma
 import { setPaths, type CardPaths } from './paths.ts';
 import { voiceFor, type Voice } from './voice.ts';
 import { brandView, type BrandView } from './brand.ts';
+import { exercisesView, type ExercisesView } from './exercises.ts';
 
 export type { PageNav } from './card-view.ts';
 
@@ -73,6 +75,11 @@ export interface SetView {
   readonly cards: readonly CardLink[];
   /** How many cards were left out for getting no recipe, and why; null when none. */
   readonly leftOut: string | null;
+  /**
+   * A training binder's exercises on its own cards (render/exercises.ts), on its set page
+   * and in its PDF; null for any other set.
+   */
+  readonly exercises: ExercisesView | null;
 }
 
 export interface IndexView {
@@ -105,6 +112,8 @@ export interface MethodView {
 
 /** One input changed on one card's recipe, and what the model says it does. */
 export interface MoveRow {
+  /** Which input was changed (planning/sensitivity.ts). */
+  readonly code: MoveCode;
   readonly change: string;
   readonly firstCoffee: string;
   readonly meanTemperature: string;
@@ -113,6 +122,15 @@ export interface MoveRow {
 }
 
 export interface MovesView {
+  /** The card the table was computed for: its entries' ids and names. */
+  readonly card: {
+    readonly potId: string;
+    readonly coffeeId: string;
+    readonly stoveId: string;
+    readonly pot: string;
+    readonly coffee: string;
+    readonly stove: string;
+  };
   readonly heading: string;
   readonly intro: string;
   readonly columns: Messages['troubleshooting']['movesColumns'];
@@ -240,10 +258,17 @@ export function setViews(
   baseUrl: string | undefined,
   /** The site's page: its units, and the paper of a set that names none. */
   sitePage: PageSetup,
+  /** The troubleshooting table a binder in this language prints (its exercises quote it). */
+  movesFor: (language: string) => MovesView | null = () => null,
 ): SetView[] {
   return outlines.map((set) => {
     const voice = voiceFor(set.language, sitePage.units);
     const words = voice.words.card.index;
+    const stationCard = (slug: string) => {
+      const card = stations.get(slug);
+      if (!card) throw new Error(`site view: no station card "${slug}"`);
+      return card;
+    };
     return {
       id: set.id,
       title: set.title,
@@ -262,16 +287,15 @@ export function setViews(
           : words.insert,
       paths: setPaths(set.id, baseUrl),
       cards: set.cardSlugs.map((slug) => {
-        if (set.layout === 'station') {
-          const card = stations.get(slug);
-          if (!card) throw new Error(`site view: no station card "${slug}"`);
-          return stationLink(card, voice);
-        }
+        if (set.layout === 'station') return stationLink(stationCard(slug), voice);
         const card = inserts.get(slug);
         if (!card) throw new Error(`site view: no insert card "${slug}"`);
         return insertLink(card);
       }),
       leftOut: voice.words.print.leftOut(set.leftOut ?? []),
+      exercises: set.binder
+        ? exercisesView(set.cardSlugs.map(stationCard), movesFor(set.language), voice)
+        : null,
     };
   });
 }

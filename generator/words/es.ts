@@ -14,6 +14,7 @@ import type { BindingCauseCode, CheckedQuantity, RefusalCode } from '../planning
 import type { Messages } from './catalogue.ts';
 import type { BindingCauseText, HeatFeel } from './card.ts';
 import type { RefusalText } from './plan.ts';
+import type { ExerciseCardFacts, ExerciseMoveFacts, ExerciseText } from './binder.ts';
 
 /** Grind classes as a noun phrase after "molienda" ("molienda media-fina"). */
 const grindNames: Record<GrindClass, string> = {
@@ -638,6 +639,9 @@ const print: Messages['print'] = {
   },
 };
 
+const MAKER_ES =
+  'Siga las instrucciones del fabricante de la cafetera; donde difieran de esta página, mandan ellas.';
+
 const binder: Messages['binder'] = {
   cover: {
     kind: 'Manual de formación',
@@ -808,6 +812,88 @@ const binder: Messages['binder'] = {
     readingUnit: (label: string): string => label.split(', ').pop() ?? label,
     filledBy: 'Cronometrado por',
     date: 'Fecha',
+  },
+  exercises: {
+    title: 'Ejercicios',
+    intro:
+      'Tareas prácticas con las fichas de este manual, una cada vez y con el formador al lado. Cada una dice qué anotar y cómo es un buen resultado; traiga sus notas a la validación.',
+    none: 'Ninguna ficha de este manual tiene receta, así que aún no hay nada que practicar: pida a quien lleva las fichas un manual con una ficha que prepare café.',
+    cardLabel: 'Ficha',
+    goalLabel: 'Objetivo',
+    stepsLabel: 'Pasos',
+    recordLabel: 'Anote',
+    goodLabel: 'Un buen resultado',
+    safetyLabel: 'Seguridad',
+    tableCard: (coffee: string, pot: string, stove: string): string =>
+      `${coffee} en ${pot} sobre ${stove}`,
+    hotCold: (
+      f: ExerciseCardFacts,
+      inBand: { readonly label: string; readonly value: string },
+    ): ExerciseText => ({
+      heading: 'Agua fría frente al agua caliente de la ficha',
+      goal: `Compruebe por qué la ficha empieza con agua a ${f.temperature}: prepare su receta una vez con agua fría del grifo y otra como dice la ficha, y compárelas.`,
+      steps: [
+        `En frío: llene el depósito con ${f.fill} ${f.fillMass} de agua fría del grifo y el filtro con ${f.dose} de café, enrasado y sin prensar; cierre la cafetera y póngala en la posición ${f.level}. Ponga en marcha el cronómetro al ponerla al fuego.`,
+        'Retírela al primer gorgoteo, enfríe el depósito bajo el grifo de agua fría y sirva.',
+        `En caliente: cuando la cafetera se haya enfriado, enjuáguela y prepárela de nuevo como dice la ficha: agua a ${f.temperature}, ${f.fill}, ${f.dose}, posición ${f.level}, retirada a ${f.offHeat} o al primer gorgoteo.`,
+      ],
+      record: [
+        'De cada preparación: el tiempo del primer café, el del primer gorgoteo y el café en la taza (con una jarra medidora, o con una báscula tarando la taza: un gramo es casi un mililitro).',
+        'Cómo sabe cada taza, en pocas palabras.',
+      ],
+      good: `El primer café de la preparación en caliente sale dentro de los ${f.firstCoffee} de la ficha y su taza tiene unos ${f.yield}. El de la preparación en frío sale más tarde y sabe más plano o más áspero; la línea «${inBand.label}» de la ficha dice: ${inBand.value}.`,
+      safety: `El agua, el depósito y el café queman: sujete el depósito con un paño, no abra nunca una cafetera al fuego y mantenga la llama sin sobresalir del depósito. ${MAKER_ES}`,
+    }),
+    finer: (
+      f: ExerciseCardFacts,
+      card: ExerciseMoveFacts,
+      finer: ExerciseMoveFacts,
+      tableCard: string | null,
+    ): ExerciseText => ({
+      heading: 'Un punto más fino',
+      goal: 'Compare la tabla de problemas «Qué dato mueve qué» con una cafetera real: muela un punto más fino y vea si la preparación cambia como dice la tabla.',
+      steps: [
+        `Prepare la ficha como dice (agua a ${f.temperature}, ${f.fill}, ${f.dose}, posición ${f.level}) y cronometre el primer café.`,
+        'Ponga el molino un punto más fino, no cambie nada más y prepárela de nuevo. Llene el filtro enrasado como siempre; no prense.',
+        `Retire cada preparación a ${f.offHeat} o al primer gorgoteo.`,
+      ],
+      record: [
+        'De cada preparación: el tiempo del primer café y del primer gorgoteo, el café en la taza y cómo sabe.',
+        'Lo que predice la tabla junto a lo que ha visto, y si la válvula ha silbado.',
+      ],
+      good: `${tableCard === null ? 'La tabla, calculada para esta ficha' : `La tabla, calculada para ${tableCard} (espere el mismo sentido aquí, no los mismos tiempos)`}, dice: ${card.change}, primer café ${card.firstCoffee}, presión máxima ${card.peak}; ${finer.change}, primer café ${finer.firstCoffee}, presión máxima ${finer.peak}. Su preparación más fina cambia en el mismo sentido, y sabe decir cuánto se apartan sus tiempos de los de la tabla.`,
+      safety: `Una molienda más fina frena el agua y sube la presión en el depósito. Si la válvula suelta vapor o el café deja de salir, retire la cafetera del fuego, enfríe el depósito bajo el grifo de agua fría y no muela más fino. No prense nunca. ${MAKER_ES}`,
+    }),
+    fillLine: (f: ExerciseCardFacts, fillLine: string): ExerciseText => ({
+      heading: 'La marca de llenado y la válvula',
+      goal: `Saber dónde debe quedar el agua en ${f.pot} y dónde está su válvula de seguridad, con una cafetera fría y vacía que nunca se pone al fuego.`,
+      steps: [
+        `Tome ${f.pot}, fría y vacía, lejos del fuego. Desenrósquela y saque el filtro.`,
+        'Busque la válvula de seguridad en el lateral del depósito, por fuera y por dentro. No la desmonte.',
+        `Eche ${f.fill} de agua fría y mida el nivel con una regla. La ficha dice: ${fillLine}`,
+        'Eche más agua, despacio, por encima de la marca hasta que llegue a la parte baja de la válvula, y anote cuánta más ha hecho falta. Después tire toda el agua.',
+      ],
+      record: [
+        'La altura del llenado de la ficha, el agua que ha hecho falta para llegar a la válvula y dónde está la válvula.',
+      ],
+      good: `Los ${f.fill} de la ficha quedan donde dice la ficha, y sabe señalar la marca y la válvula sin la ficha. Con muy poca agua más se llega a la válvula: por eso nunca se pasa la marca.`,
+      safety: `No ponga nunca este depósito al fuego: un depósito llenado por encima de la marca se vacía, no se prepara. El agua por encima de la válvula le impide soltar vapor. ${MAKER_ES}`,
+    }),
+    logThree: (f: ExerciseCardFacts, sheet: string): ExerciseText => ({
+      heading: 'Tres preparaciones en la hoja de registro',
+      goal: 'Cronometrar tres preparaciones de una ficha y anotarlas en la hoja de registro, para que las fichas se ajusten a su propia cafetera, su café y su fuego.',
+      steps: [
+        `Haga una copia de la página en blanco «${sheet}» y escriba arriba la cafetera, el café y el fuego de la ficha.`,
+        `Prepare la ficha tres veces como dice (agua a ${f.temperature}, ${f.fill}, ${f.dose}, posición ${f.level}). Ponga en marcha el cronómetro al poner la cafetera al fuego; una línea por preparación.`,
+        'Entregue la hoja a quien lleva las fichas: la pasa a un registro de preparaciones y vuelve a ajustar las fichas con stovecard fit.',
+      ],
+      record: [
+        'Tres líneas de la hoja: la posición, el agua puesta y su temperatura al cerrar, el ambiente, los tiempos del primer café, del primer gorgoteo y de la retirada, y el café obtenido.',
+        'Su nombre y la fecha arriba de la hoja.',
+      ],
+      good: `Tres líneas con los tiempos en orden (primer café, luego gorgoteo, luego retirada), el primer café dentro de los ${f.firstCoffee} de la ficha y la retirada al primer gorgoteo o dentro de sus ${f.offHeat}; al pasarla, el registro se lee sin errores.`,
+      safety: `Tres preparaciones seguidas: deje enfriar la cafetera, o enfríela bajo el grifo de agua fría, antes de abrirla y volver a llenarla, y revise la junta entre una y otra. ${MAKER_ES}`,
+    }),
   },
   signOff: {
     title: 'Validación de la formación',

@@ -1,7 +1,8 @@
 /**
  * setPdf(set): a set's cards in one PDF, and the training binder (`layout: binder`) with
  * its cover, contents, method, steps and reasons, cleaning, glossary, troubleshooting,
- * brew-log sheet and sign-off pages in front. How its card pages compare with the cards'
+ * exercises, brew-log sheet and sign-off pages in front (the exercises' own checks:
+ * tests/pipeline/exercises.test.ts). How its card pages compare with the cards'
  * own PDFs is set-pages.test.ts.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -85,11 +86,11 @@ describe('setPdf(training set)', () => {
     // Page 2: the contents (page 1 is the cover).
     const roles = structNodes(training().read.structure[1]!).map((n) => n.role);
     expect(roles).toContain('TOC');
-    // One entry per part after the contents (method … sign-off), one per card.
-    expect(roles.filter((r) => r === 'TOCI')).toHaveLength(7 + training().set.cards.length);
+    // One entry per part after the contents (method … exercises … sign-off), one per card.
+    expect(roles.filter((r) => r === 'TOCI')).toHaveLength(8 + training().set.cards.length);
   });
 
-  it('has every part of a binder, in order: cover, contents, method, steps and why, cleaning, glossary, troubleshooting, log sheet, sign-off, cards', () => {
+  it('has every part of a binder, in order: cover, contents, method, steps and why, cleaning, glossary, troubleshooting, exercises, log sheet, sign-off, cards', () => {
     const { pdf, read } = training();
     const front = read.text.slice(0, pdf.frontMatterPages).map(squash);
     const firstPageOf = (text: string) => front.findIndex((page) => page.includes(squash(text)));
@@ -101,6 +102,7 @@ describe('setPdf(training set)', () => {
       binderWords.cleaning.items.find((i) => i.part === 'Gasket')!.care,
       binderWords.glossary.items[0]!.meaning,
       demo.data.troubleshooting.rows[0]!.cause,
+      binderWords.exercises.intro,
       binderWords.logSheet.intro,
       binderWords.signOff.checks[0]!,
     ].map(firstPageOf);

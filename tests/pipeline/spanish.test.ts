@@ -15,7 +15,7 @@ import { existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildSite } from '../../generator/pipeline/build-site.ts';
+import { buildSite, type BuildResult } from '../../generator/pipeline/build-site.ts';
 import { sitePdfStep } from '../../generator/pipeline/pdf-step.ts';
 import { wordsFor } from '../../generator/words/catalogue.ts';
 import { describeWithTools, runTool } from '../pdf/poppler.ts';
@@ -79,6 +79,8 @@ async function filesUnder(dir: string, ext: string): Promise<string[]> {
 
 let root: string;
 let outDir: string;
+let built: BuildResult;
+const setData = (id: string) => built.data.sets.find((s) => s.id === id)!;
 
 beforeAll(async () => {
   root = await mkdtemp(path.join(tmpdir(), 'stovecard-es-'));
@@ -151,7 +153,7 @@ sets:
 `,
   );
   outDir = path.join(root, 'site');
-  await buildSite({
+  built = await buildSite({
     contentDir: content,
     outDir,
     cacheDir: path.join(root, 'cache'),
@@ -289,11 +291,17 @@ describeWithTools(['pdftotext'], 'the Spanish PDFs, as pdftotext reads them', ()
       es.binder.steps.title,
       es.binder.cleaning.title,
       es.binder.glossary.title,
+      es.binder.exercises.title,
       es.binder.logSheet.title,
       es.binder.signOff.title,
     ])
       expect(t).toContain(heading);
     expect(t).not.toContain(en.binder.steps.title);
+    // The exercises, on the binder's own card: Spanish headings and labels.
+    for (const ex of setData('barista-training').exercises!.exercises)
+      expect(t).toContain(ex.heading);
+    expect(t).toContain(es.binder.exercises.safetyLabel);
+    expect(t).not.toContain(en.binder.exercises.goodLabel);
     expect(englishHits(t)).toEqual([]);
   });
 

@@ -51,6 +51,20 @@ const example = {
   band: '90–96 °C',
 };
 
+const exerciseCard = {
+  card: 'Coffee C, in Pot A · on Stove B',
+  pot: 'Pot A',
+  temperature: '85 °C',
+  fill: '155 mL',
+  fillMass: '(150 g on a scale)',
+  dose: '14.0 g',
+  level: '2',
+  firstCoffee: '0:15–0:30',
+  offHeat: '0:25–0:55',
+  yield: '109 mL',
+};
+const exerciseMove = { change: 'The card', firstCoffee: '0:20', peak: '0.12 bar' };
+
 /** Sample facts per function path: each entry is one call's arguments. */
 const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'format.date': [['2026-12-03']],
@@ -148,6 +162,16 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'binder.cover.built': [['03/12/2026']],
   'binder.logSheet.readingsIntro': [['Cup, g']],
   'binder.logSheet.readingUnit': [['Cup, g']],
+  'binder.exercises.tableCard': [['Coffee C', 'Pot A', 'Stove B']],
+  'binder.exercises.hotCold': [[exerciseCard, { label: 'Brewed at 90–96 °C', value: '70 %' }]],
+  'binder.exercises.finer': [
+    [exerciseCard, exerciseMove, { ...exerciseMove, change: 'Finer' }, null],
+    [exerciseCard, exerciseMove, { ...exerciseMove, change: 'Finer' }, 'Coffee C in Pot A'],
+  ],
+  'binder.exercises.fillLine': [
+    [exerciseCard, 'Up to 27 mm above the floor: 4 mm below the valve.'],
+  ],
+  'binder.exercises.logThree': [[exerciseCard, 'Brew log sheet']],
   'pdf.stationTitle': [['Coffee C', 'in Pot A']],
   'pdf.insertTitle': [['Coffee C']],
   'pdf.setTitle': [['Bar']],

@@ -14,11 +14,12 @@
 import { LOGO_MAX_HEIGHT_MM, logoBox, type LogoView } from '../brand.ts';
 import logSchema from '../../content/schemas/log.schema.json' with { type: 'json' };
 import type { UnitSystem } from '../../content/types.ts';
+import type { ExercisesView } from '../exercises.ts';
 import type { Messages } from '../../words/catalogue.ts';
 import type { Block } from './layout.ts';
 import type { FlowItem } from './pages.ts';
 import type { Pen } from './pen.ts';
-import { INK, RULE_SOFT, type TextPageStyle } from './style.ts';
+import { INK, RULE_SOFT, VALVE, type TextPageStyle } from './style.ts';
 
 type BinderWords = Messages['binder'];
 
@@ -297,4 +298,62 @@ export function signOffItems(st: TextPageStyle, binder: BinderWords): FlowItem[]
       ),
     },
   ];
+}
+
+/** A bold label over a list (numbered or bulleted): L › LI › Lbl + LBody, kept whole. */
+function labelledList(
+  label: string,
+  items: readonly string[],
+  marks: (i: number) => string,
+  st: TextPageStyle,
+): Block {
+  return (pen, x, y, w) => {
+    let h = pen.para('P', label, x, y, w, st.bodyStrong);
+    const indent = Math.max(...items.map((_, i) => pen.width(marks(i), st.body))) + st.gap * 0.6;
+    const itemGap = st.body.size * 0.25;
+    pen.group('L', () =>
+      items.forEach((item, i) => {
+        if (i > 0) h += itemGap;
+        pen.group('LI', () => {
+          pen.para('Lbl', marks(i), x, y + h, indent, st.body, { noWrap: true });
+          h += pen.para('LBody', item, x + indent, y + h, w - indent, st.body);
+        });
+      }),
+    );
+    return h;
+  };
+}
+
+/**
+ * The exercises: each with its heading, the card it uses, its goal, steps, what to write
+ * down, what a good result looks like and its safety line (label in the cautions' red).
+ * `listNumber` and `bullet` are the language's list marks (words/pdf.ts).
+ */
+export function exercisesItems(
+  view: ExercisesView,
+  st: TextPageStyle,
+  marks: { readonly listNumber: (n: number) => string; readonly bullet: string },
+): FlowItem[] {
+  const l = view.labels;
+  const labelled =
+    (label: string, text: string, font = st.bodyStrong): Block =>
+    (pen, x, y, w) => {
+      const h = pen.para('P', label, x, y, w, font);
+      return h + pen.para('P', text, x, y + h, w, st.body);
+    };
+  const items: FlowItem[] = [title(view.title, st), { block: para('P', view.intro, st.lead) }];
+  view.exercises.forEach((ex, i) => {
+    // An exercise is kept on one page where it fits one (flowPages caps the keep at a page).
+    const blocks: Block[] = [
+      para('H2', `${marks.listNumber(i + 1)} ${ex.heading}`, st.h2),
+      labelled(l.card, ex.card),
+      labelled(l.goal, ex.goal),
+      labelledList(l.steps, ex.steps, (n) => marks.listNumber(n + 1), st),
+      labelledList(l.record, ex.record, () => marks.bullet, st),
+      labelled(l.good, ex.good),
+      labelled(l.safety, ex.safety, { ...st.bodyStrong, color: VALVE }),
+    ];
+    blocks.forEach((block, b) => items.push({ block, keepWithNext: b < blocks.length - 1 }));
+  });
+  return items;
 }

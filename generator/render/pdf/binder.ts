@@ -5,7 +5,8 @@
  * (MethodView, TroubleshootingView in ../site-view.ts, the same data the HTML pages show).
  *
  *   front matter (measured, so the contents can print page numbers) ─▶ contents pages
- *     ─▶ method pages ─▶ troubleshooting pages ─▶ one placeholder page per card ─▶ shell
+ *     ─▶ method pages ─▶ troubleshooting pages ─▶ exercises (the set view's, on its own
+ *     cards) ─▶ log sheet, sign-off ─▶ one placeholder page per card ─▶ shell
  *   shell + each card's own PDF (card.ts cardPdf) ─ merge.ts ─▶ the set's PDF
  *
  * The cards are not drawn again: the build has made their one-page PDFs already, and a
@@ -25,6 +26,7 @@ import { voiceFor } from '../voice.ts';
 import {
   cleaningItems,
   coverItems,
+  exercisesItems,
   glossaryItems,
   logSheetItems,
   signOffItems,
@@ -362,6 +364,15 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
       { title: words.cleaning.title, items: cleaningItems(st, words), pages: 0 },
       { title: words.glossary.title, items: glossaryItems(st, words), pages: 0 },
       { title: troubleshooting.title, items: troubleshootingItems(troubleshooting, st), pages: 0 },
+      ...(input.set.exercises
+        ? [
+            {
+              title: input.set.exercises.title,
+              items: exercisesItems(input.set.exercises, st, pdfWords),
+              pages: 0,
+            },
+          ]
+        : []),
       {
         title: words.logSheet.title,
         items: logSheetItems(st, input.page.units, words),
