@@ -146,10 +146,15 @@ export function cardMarginPt(paper: PaperSize): number {
   return PAPER_STYLE[paper].marginMm * MM;
 }
 
+/**
+ * The sizes of one font step on `paper`; `marginMm` replaces the paper's margin (a card in
+ * a sheet's cell, render/sheet.ts, keeps its text that far inside the cut line).
+ */
 export function cardStyle(
   paper: PaperSize,
   step: number,
   arrangement: Arrangement = ARRANGEMENTS[0]!,
+  marginMm?: number,
 ): CardStyle {
   const { k } = PAPER_STYLE[paper];
   const s = k * step;
@@ -164,7 +169,7 @@ export function cardStyle(
     bodyColumns: arrangement.bodyColumns,
     listColumns: arrangement.listColumns,
     compact: paper === 'A6' || paper === '4x6in',
-    marginPt: cardMarginPt(paper),
+    marginPt: marginMm === undefined ? cardMarginPt(paper) : marginMm * MM,
     gap: 1.6 * MM * s,
     gutter: 3 * MM * s,
     h1: f(16, true),
