@@ -9,14 +9,7 @@ import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { unknownIdIssues, type KnownIds, type ReferencedKind } from './references.ts';
-import type {
-  CardRequest,
-  CardSet,
-  PaperSize,
-  SheetUp,
-  SiteEntry,
-  UnitSystem,
-} from './types.ts';
+import type { CardRequest, CardSet, PaperSize, SheetUp, SiteEntry, UnitSystem } from './types.ts';
 import { celsiusToK, fahrenheitToK } from './units.ts';
 import {
   fieldName,

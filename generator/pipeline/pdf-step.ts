@@ -136,7 +136,8 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       label: set.paths.pdfFile,
       notes: null,
       key: setPdfKey({
-        set,
+        // The set's sheet is a PDF of its own (below): a new `sheet:` keeps the set's PDF.
+        set: { ...set, sheet: null },
         cardHashes: members.map(hashOf),
         frontMatter: input.frontMatter,
         page: input.page,

@@ -52,11 +52,12 @@ export const printWords = {
     readonly cellHeightMm: number;
     readonly floorPt: number;
   }): string => {
+    const fewer = f.up === 8 ? '`up: 4` or `up: 2`' : '`up: 2`';
     const fix =
       f.up > 2
-        ? `write \`up: ${f.up / 2}\` or \`up: 2\`, or a larger \`paper:\` for the sheet`
+        ? `write ${fewer}, or a larger \`paper:\` for the sheet`
         : 'write a larger `paper:` for the sheet, or leave `sheet:` out of the set';
-    return `${f.at} ${f.field} — the card "${f.card}" does not fit a cell of a ${f.up}-up ${f.paper} sheet (${mm(f.cellWidthMm)} × ${mm(f.cellHeightMm)} mm) with every text at ${f.floorPt} pt or more, even without its optional blocks. ${fix[0]!.toUpperCase()}${fix.slice(1)}.`;
+    return `${f.at} ${f.field} — the card "${f.card}" does not fit its cell on the ${f.paper} sheet at ${f.up} up (${mm(f.cellWidthMm)} × ${mm(f.cellHeightMm)} mm) with every text at ${f.floorPt} pt or more, even without its optional blocks. ${fix[0]!.toUpperCase()}${fix.slice(1)}.`;
   },
 } as const;
 

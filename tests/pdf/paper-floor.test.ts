@@ -22,7 +22,7 @@ import { droppedLines } from '../../generator/cli/build.ts';
 import { BUILD_ENV } from '../browser/demo-builds.ts';
 import { DEMO_CONTENT } from '../hostile/cli-run.ts';
 import { describeWithTools, pdfinfoSizes } from './poppler.ts';
-import { openPdf, squash } from './read-pdf.ts';
+import { openPdf, smallestText, squash } from './read-pdf.ts';
 
 const MM = 72 / 25.4;
 const A5: [number, number] = [148 * MM, 210 * MM];
@@ -30,30 +30,6 @@ const A6: [number, number] = [105 * MM, 148 * MM];
 const CARD_4X6: [number, number] = [4 * 72, 6 * 72];
 const LETTER: [number, number] = [8.5 * 72, 11 * 72];
 const FLOOR_PT = 7;
-
-/** Smallest size of any non-blank text item on each page, pt. */
-async function smallestText(bytes: Uint8Array): Promise<{ sizes: number[]; pages: number[][] }> {
-  const doc = await openPdf(bytes);
-  try {
-    const sizes: number[] = [];
-    const pages: number[][] = [];
-    for (let i = 1; i <= doc.numPages; i++) {
-      const page = await doc.getPage(i);
-      const [x0, y0, x1, y1] = page.view as [number, number, number, number];
-      pages.push([x1 - x0, y1 - y0]);
-      let min = Number.POSITIVE_INFINITY;
-      for (const item of (await page.getTextContent()).items) {
-        if (!('str' in item) || item.str.trim() === '') continue;
-        const [, , c, d] = item.transform as number[];
-        min = Math.min(min, Math.hypot(c!, d!));
-      }
-      sizes.push(min);
-    }
-    return { sizes, pages };
-  } finally {
-    await doc.destroy();
-  }
-}
 
 async function pdfsUnder(dir: string): Promise<string[]> {
   const out: string[] = [];

@@ -108,3 +108,31 @@ export function structNodes(node: StructNode | null): StructNode[] {
     if ('role' in child || 'children' in child) out.push(...structNodes(child as StructNode));
   return out;
 }
+
+/**
+ * Smallest size of any non-blank text item on each page, pt (the vertical scale of its text
+ * matrix, pdfjs: the scaling of drawings, the chart and a sheet's cells included), and each
+ * page's size.
+ */
+export async function smallestText(bytes: Uint8Array): Promise<{ sizes: number[]; pages: number[][] }> {
+  const doc = await openPdf(bytes);
+  try {
+    const sizes: number[] = [];
+    const pages: number[][] = [];
+    for (let i = 1; i <= doc.numPages; i++) {
+      const page = await doc.getPage(i);
+      const [x0, y0, x1, y1] = page.view as [number, number, number, number];
+      pages.push([x1 - x0, y1 - y0]);
+      let min = Number.POSITIVE_INFINITY;
+      for (const item of (await page.getTextContent()).items) {
+        if (!('str' in item) || item.str.trim() === '') continue;
+        const [, , c, d] = item.transform as number[];
+        min = Math.min(min, Math.hypot(c!, d!));
+      }
+      sizes.push(min);
+    }
+    return { sizes, pages };
+  } finally {
+    await doc.destroy();
+  }
+}
