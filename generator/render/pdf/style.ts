@@ -5,6 +5,7 @@
  * tries the next font step (every size × `step`), so a card is never clipped.
  */
 import type { PaperSize } from '../../content/types.ts';
+import { QR_PRINTED_MM } from '../qr-density.ts';
 
 export const INK = '#000000';
 export const SOFT = '#555555';
@@ -203,7 +204,9 @@ export function cardStyle(
     drawingScale: 0.75 * s,
     ruleHeavy: 0.8 * MM * s,
     ruleLight: 0.75,
-    qrSize: 15 * MM * s,
+    // Never smaller than the width the address's density is checked at (qr-density.ts), so
+    // a code that passed the check is printed at a size a phone reads.
+    qrSize: Math.max(15 * MM * s, QR_PRINTED_MM * MM),
     padding: 1 * MM * s,
   };
 }
