@@ -114,7 +114,9 @@ export function structNodes(node: StructNode | null): StructNode[] {
  * matrix, pdfjs: the scaling of drawings, the chart and a sheet's cells included), and each
  * page's size.
  */
-export async function smallestText(bytes: Uint8Array): Promise<{ sizes: number[]; pages: number[][] }> {
+export async function smallestText(
+  bytes: Uint8Array,
+): Promise<{ sizes: number[]; pages: number[][] }> {
   const doc = await openPdf(bytes);
   try {
     const sizes: number[] = [];
