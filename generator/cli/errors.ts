@@ -59,7 +59,12 @@ export function reportError(error: unknown): number {
   }
   // A card too long for its paper at the 7 pt floor (render/pdf/card.ts PdfLayoutError; it
   // reaches here by name when a build worker drew the card): the words say what to change.
-  if (error instanceof Error && error.name === 'PdfLayoutError') {
+  // Also a card too big for its set's sheet cell (render/pdf/sheet.ts SheetLayoutError):
+  // its message names site.yaml:line, the set's `sheet` field, the cell and the fix.
+  if (
+    error instanceof Error &&
+    (error.name === 'PdfLayoutError' || error.name === 'SheetLayoutError')
+  ) {
     process.stderr.write(`stovecard: ${error.message}\n`);
     return 2;
   }

@@ -9,9 +9,16 @@ import { message } from './messages.ts';
 import type { Checked, ValidFile } from './entry-file.ts';
 import type { ContentIssue } from './issues.ts';
 import { unknownIdIssues, type KnownIds, type ReferencedKind } from './references.ts';
-import type { CardRequest, CardSet, PaperSize, SiteEntry, UnitSystem } from './types.ts';
+import type { CardRequest, CardSet, PaperSize, SheetUp, SiteEntry, UnitSystem } from './types.ts';
 import { celsiusToK, fahrenheitToK } from './units.ts';
-import { issueAt, positionAt, refAt, type YamlPath, type YamlSource } from './yaml-source.ts';
+import {
+  fieldName,
+  issueAt,
+  positionAt,
+  refAt,
+  type YamlPath,
+  type YamlSource,
+} from './yaml-source.ts';
 
 interface CardYaml {
   readonly pot?: string;
@@ -27,6 +34,7 @@ interface SetYaml {
   readonly language?: string;
   readonly include_refused?: boolean;
   readonly paper?: PaperSize;
+  readonly sheet?: { readonly paper: PaperSize; readonly up: SheetUp };
   readonly cards?: readonly CardYaml[];
   readonly coffees?: readonly string[];
   readonly pots?: readonly string[];
@@ -216,6 +224,15 @@ export function buildSite(file: ValidFile<SiteYaml>, known: KnownIds): Checked<S
       layout: set.layout === 'insert' ? 'insert' : 'station',
       binder: set.layout === 'binder',
       paper: set.paper ?? data.paper,
+      sheet:
+        set.sheet === undefined
+          ? null
+          : {
+              paper: set.sheet.paper,
+              up: set.sheet.up,
+              source: refAt(source, [...path, 'sheet']),
+              field: fieldName([...path, 'sheet']),
+            },
       language: set.language ?? data.language ?? DEFAULT_LANGUAGE,
       cards: expanded.cards,
       leaveOutIfRefused: set.include_refused === true ? [] : expanded.expanded,

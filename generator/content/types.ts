@@ -114,6 +114,19 @@ export interface LogEntry extends EntryBase {
 export type UnitSystem = 'metric' | 'us';
 export type PaperSize = 'A4' | 'A5' | 'A6' | 'letter' | 'half-letter' | '4x6in';
 
+/** Cards to a sheet (a set's `sheet: { up: … }`): 2, 4 or 8. */
+export type SheetUp = 2 | 4 | 8;
+
+/** A set's `sheet:`: its cards imposed several to a sheet for a desktop printer. */
+export interface SheetSpec {
+  readonly paper: PaperSize;
+  readonly up: SheetUp;
+  /** Where `sheet:` is written (site.yaml), for the build's message when a card does not fit its cell. */
+  readonly source: SourceRef;
+  /** The key as the content errors name it: `sets[2].sheet`. */
+  readonly field: string;
+}
+
 export interface CardRequest {
   readonly potId: string;
   readonly coffeeId: string;
@@ -128,6 +141,8 @@ export interface CardSet {
   readonly binder: boolean;
   /** Paper of the set's PDF: the set's `paper:`, else the site's. */
   readonly paper: PaperSize;
+  /** The set's `sheet:` (its cards several to a sheet, `sets/<id>-sheet.pdf`), null without one. */
+  readonly sheet: SheetSpec | null;
   /**
    * Language code of the set's cards, pages and PDFs (`language:` of the set, else of the
    * site, else en); one of the schema's enum, which matches generator/words/ catalogues.

@@ -8,6 +8,7 @@
  *   station-view  stationCardView(plan, catalogue)   → toTaggedJson text of the view
  *   card-pdf      cardPdf(view)                      → the PDF's bytes
  *   set-pdf       setPdf(input, the card PDF files)  → the PDF's bytes and page count
+ *   sheet-pdf     sheetPdf(input, the cell views)    → the PDF's bytes, pages, blocks left out
  *   bare-pdf      barePdf(input)                     → the bench's stricter floor (bare.ts)
  *
  * The renderers are imported on first use, so a worker that only plans never loads
@@ -20,6 +21,7 @@ import type { PlanRequest } from '../planning/plan.ts';
 import type { CardViewOptions } from '../render/card-view.ts';
 import type { BarePdfInput } from '../render/pdf/bare.ts';
 import type { SetPdfInput } from '../render/pdf/binder.ts';
+import type { SheetPdfInput } from '../render/pdf/sheet.ts';
 import type { CardView, PdfContext } from '../render/pdf/card.ts';
 import { fromTaggedJson, planFromJson, planToJson, toTaggedJson } from './plan-cache.ts';
 
@@ -39,6 +41,12 @@ export type TaskRequest =
       /** The set's cards' PDF files, in order (read here rather than sent over). */
       readonly cardFiles: readonly string[];
     }
+  | {
+      readonly kind: 'sheet-pdf';
+      readonly input: Omit<SheetPdfInput, 'cards'>;
+      /** The set's cards laid out for the cell (render/sheet.ts onCell), as toTaggedJson text. */
+      readonly viewsJson: readonly string[];
+    }
   | { readonly kind: 'bare-pdf'; readonly input: BarePdfInput };
 
 interface Results {
@@ -46,6 +54,11 @@ interface Results {
   'station-view': { readonly json: string };
   'card-pdf': { readonly bytes: Uint8Array; readonly dropped: readonly string[] };
   'set-pdf': { readonly bytes: Uint8Array; readonly pages: number };
+  'sheet-pdf': {
+    readonly bytes: Uint8Array;
+    readonly pages: number;
+    readonly dropped: readonly { readonly card: string; readonly blocks: readonly string[] }[];
+  };
   'bare-pdf': { readonly bytes: Uint8Array };
 }
 
@@ -85,6 +98,12 @@ export async function runTask(task: TaskRequest): Promise<TaskResult<TaskRequest
       const cardPdfs = await Promise.all(task.cardFiles.map((file) => readFile(file)));
       const pdf = await setPdf({ ...task.input, cardPdfs });
       return { bytes: pdf.bytes, pages: pdf.pages };
+    }
+    case 'sheet-pdf': {
+      const { sheetPdf } = await import('../render/pdf/sheet.ts');
+      const cards = task.viewsJson.map((json) => fromTaggedJson<CardView>(json));
+      const pdf = await sheetPdf({ ...task.input, cards });
+      return { bytes: pdf.bytes, pages: pdf.pages, dropped: pdf.dropped };
     }
     case 'bare-pdf': {
       const { barePdf } = await import('../render/pdf/bare.ts');

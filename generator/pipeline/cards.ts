@@ -8,7 +8,7 @@
  * page, so an insert's rows can point to their full cards. Each distinct request is
  * planned once.
  */
-import type { CardRequest, Catalogue, PaperSize } from '../content/types.ts';
+import type { CardRequest, Catalogue, PaperSize, SheetSpec } from '../content/types.ts';
 import { heatKindOf, type HeatKind } from '../content/heat-kind.ts';
 import type { RefusalCode } from '../planning/types.ts';
 import {
@@ -16,6 +16,7 @@ import {
   insertSlug,
   pathLanguage,
   setPaths,
+  sheetPdfFile,
   stationKey,
   stationPaths,
   stationSlug,
@@ -54,6 +55,8 @@ export interface SetJob {
   readonly binder?: boolean;
   /** Paper of the set's PDF (CardSet.paper); default the site's. */
   readonly paper?: PaperSize;
+  /** The set's cards several to a sheet (CardSet.sheet); absent or null without. */
+  readonly sheet?: SheetSpec | null;
   /** Language code of the set's page and PDF (CardSet.language). */
   readonly language: string;
   /** Station sets: keys of their station cards (StationCardJob.key); insert sets: slugs of their inserts. */
@@ -107,6 +110,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
         layout: 'station',
         binder: set.binder,
         paper: set.paper,
+        sheet: set.sheet,
         language: set.language,
         cardSlugs: [...new Set(slugs)],
         optionalSlugs: set.leaveOutIfRefused.map((request) =>
@@ -132,6 +136,7 @@ export function expandCards(catalogue: Catalogue): CardJobs {
       title: set.title,
       layout: 'insert',
       paper: set.paper,
+      sheet: set.sheet,
       language: set.language,
       cardSlugs: slugs,
     });
@@ -182,6 +187,7 @@ export function checkPageNames(jobs: CardJobs): void {
     const paths = setPaths(set.id);
     claim(paths.pageFile, `set ${set.id}`);
     claim(paths.pdfFile, `set ${set.id}`);
+    if (set.sheet) claim(sheetPdfFile(set.id), `the sheets of set ${set.id}`);
   }
 }
 

@@ -20,11 +20,12 @@ import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cardPdf, type CardView } from '../render/pdf/card.ts';
 import { setCard, setPdf, type SetPdfInput } from '../render/pdf/binder.ts';
-import { frontMatterOf, isBinderSet, setCards } from '../render/pdf/site-pdfs.ts';
+import { sheetPdf, type SheetPdfInput } from '../render/pdf/sheet.ts';
+import { frontMatterOf, isBinderSet, setCards, sheetCards } from '../render/pdf/site-pdfs.ts';
 import type { BuildContext, ViewText } from './build-site.ts';
 import { renderCodeVersion } from './code-version.ts';
 import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
-import { cardPdfKey, RenderCache, setPdfKey, sha256 } from './render-cache.ts';
+import { cardPdfKey, RenderCache, setPdfKey, sha256, sheetPdfKey } from './render-cache.ts';
 import { toTaggedJson } from './plan-cache.ts';
 
 /** Scratch folder of the site for the cards of sets on their own paper (removed after). */
@@ -35,14 +36,34 @@ interface PdfJob {
   /** How the build log names it (the file, or the set and card of a set-paper card). */
   readonly label: string;
   readonly key: string;
-  /** Card PDFs: the optional blocks left out are noted (stats.dropped). */
-  readonly card: boolean;
+  /**
+   * Card PDFs: the optional blocks left out are noted (stats.dropped), as a list of blocks;
+   * sheet PDFs: the same for each of their cards, as a list of { card, blocks }.
+   */
+  readonly notes: 'card' | 'sheet' | null;
   render(): Promise<{
     bytes: Uint8Array;
     pages: number;
     ms: number;
-    dropped?: readonly string[];
+    /** The cache note's text (notes: the JSON the cache keeps beside the PDF). */
+    note?: string;
   }>;
+}
+
+type SheetNote = readonly { readonly card: string; readonly blocks: readonly string[] }[];
+
+/** The build log's entries of a card's or a sheet's note (stats.dropped). */
+function droppedOf(job: PdfJob, note: string): { pdf: string; blocks: readonly string[] }[] {
+  if (job.notes === 'card') {
+    const blocks = JSON.parse(note) as string[];
+    return blocks.length > 0 ? [{ pdf: job.label, blocks }] : [];
+  }
+  if (job.notes === 'sheet')
+    return (JSON.parse(note) as SheetNote).map(({ card, blocks }) => ({
+      pdf: `${job.label} (${card} in its cell)`,
+      blocks,
+    }));
+  return [];
 }
 
 export async function sitePdfStep(context: BuildContext): Promise<void> {
@@ -68,7 +89,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const cardJob = (view: CardView, file: string, label = file): PdfJob => ({
     file,
     label,
-    card: true,
+    notes: 'card',
     key: cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion }),
     async render() {
       if (pool) {
@@ -77,12 +98,12 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
           viewJson: textOf(view).text,
           context: { author, env },
         });
-        return { bytes: result.bytes, pages: 1, ms, dropped: result.dropped };
+        return { bytes: result.bytes, pages: 1, ms, note: JSON.stringify(result.dropped) };
       }
       const started = performance.now();
       const pdf = await cardPdf(view, { author, env });
-      const dropped = pdf.fit.dropped ?? [];
-      return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started, dropped };
+      const note = JSON.stringify(pdf.fit.dropped ?? []);
+      return { bytes: pdf.bytes, pages: 1, ms: performance.now() - started, note };
     },
   });
   const cardJobs: PdfJob[] = cards.map((view) => cardJob(view, view.paths.pdfFile));
@@ -113,9 +134,10 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     return {
       file: set.paths.pdfFile,
       label: set.paths.pdfFile,
-      card: false,
+      notes: null,
       key: setPdfKey({
-        set,
+        // The set's sheet is a PDF of its own (below): a new `sheet:` keeps the set's PDF.
+        set: { ...set, sheet: null },
         cardHashes: members.map(hashOf),
         frontMatter: input.frontMatter,
         page: input.page,
@@ -138,11 +160,58 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     };
   });
 
-  const total = cardJobs.length + setPaperJobs.size + setJobs.length;
+  // Sets with `sheet:`: their cards laid out again for the sheet's cell and drawn several to
+  // a page (render/pdf/sheet.ts), keyed like the set's PDF by its cards' views.
+  const sheetJobs: PdfJob[] = data.sets.flatMap((set) => {
+    const sheet = set.sheet;
+    if (!sheet) return [];
+    const members = setCards(set, data);
+    const input: Omit<SheetPdfInput, 'cards'> = {
+      set: { id: set.id, lang: set.lang },
+      sheet,
+      author,
+      builtOn: data.site.builtOn,
+      env,
+    };
+    const job: PdfJob = {
+      file: sheet.pdfFile,
+      label: sheet.pdfFile,
+      notes: 'sheet',
+      key: sheetPdfKey({
+        set: input.set,
+        sheet,
+        cardHashes: members.map(hashOf),
+        author,
+        builtOn: input.builtOn,
+        sourceDateEpoch: epoch,
+        renderVersion,
+      }),
+      async render() {
+        const cells = sheetCards(set, data);
+        if (pool) {
+          const viewsJson = cells.map((view) => toTaggedJson(view));
+          const { result, ms } = await pool.run({ kind: 'sheet-pdf', input, viewsJson });
+          return {
+            bytes: result.bytes,
+            pages: result.pages,
+            ms,
+            note: JSON.stringify(result.dropped),
+          };
+        }
+        const started = performance.now();
+        const pdf = await sheetPdf({ ...input, cards: cells });
+        const note = JSON.stringify(pdf.dropped);
+        return { bytes: pdf.bytes, pages: pdf.pages, ms: performance.now() - started, note };
+      },
+    };
+    return [job];
+  });
+
+  const total = cardJobs.length + setPaperJobs.size + setJobs.length + sheetJobs.length;
   let done = 0;
   context.onProgress({ phase: 'steps', done, total });
   const folders = new Set(
-    [...cardJobs, ...setPaperJobs.values(), ...setJobs].map((job) =>
+    [...cardJobs, ...setPaperJobs.values(), ...setJobs, ...sheetJobs].map((job) =>
       path.dirname(path.join(siteDir, job.file)),
     ),
   );
@@ -154,10 +223,9 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     const copied = await mapConcurrent(jobs, IO_LIMIT, async (job) => {
       const hit = await cache.pdfs.copyTo(job.key, path.join(siteDir, job.file));
       if (hit) {
-        if (job.card) {
+        if (job.notes) {
           const note = await cache.pdfNotes.getText(job.key);
-          const blocks = note === null ? [] : (JSON.parse(note) as string[]);
-          if (blocks.length > 0) stats.dropped.push({ pdf: job.label, blocks });
+          if (note !== null) stats.dropped.push(...droppedOf(job, note));
         }
         stats.pdfs.reused += 1;
         context.onProgress({ phase: 'steps', done: ++done, total });
@@ -176,10 +244,9 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       const { bytes, pages, ms } = made;
       await writeFile(path.join(siteDir, job.file), bytes);
       await cache.pdfs.put(job.key, bytes);
-      if (job.card) {
-        const blocks = made.dropped ?? [];
-        await cache.pdfNotes.put(job.key, JSON.stringify(blocks));
-        if (blocks.length > 0) stats.dropped.push({ pdf: job.label, blocks });
+      if (job.notes && made.note !== undefined) {
+        await cache.pdfNotes.put(job.key, made.note);
+        stats.dropped.push(...droppedOf(job, made.note));
       }
       stats.pdfs.made += 1;
       stats.pdfs.pdfPages += pages;
@@ -193,5 +260,6 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   await run(cardJobs);
   await run([...setPaperJobs.values()]);
   await run(setJobs);
+  await run(sheetJobs);
   await rm(path.join(siteDir, SET_CARDS_DIR), { recursive: true, force: true });
 }

@@ -105,6 +105,35 @@ export class RenderCache {
   }
 }
 
+/**
+ * Key of a set's sheet PDF (render/pdf/sheet.ts): the sheet (paper, up, its cells, title,
+ * where `sheet:` is written), the views of its cards (each laid out again for the cell from
+ * its view), who prints them, the date and the code.
+ */
+export function sheetPdfKey(input: {
+  readonly set: unknown;
+  readonly sheet: unknown;
+  readonly cardHashes: readonly string[];
+  readonly author: string;
+  readonly builtOn: string;
+  readonly sourceDateEpoch: string | undefined;
+  readonly renderVersion: string;
+}): string {
+  return sha256(
+    stableJson({
+      format: RENDER_CACHE_FORMAT,
+      kind: 'sheet-pdf',
+      set: input.set,
+      sheet: input.sheet,
+      cards: input.cardHashes,
+      author: input.author,
+      builtOn: input.builtOn,
+      epoch: input.sourceDateEpoch ?? null,
+      code: input.renderVersion,
+    }),
+  );
+}
+
 /** Key of a card's PDF: the view's hash, who prints it, the PDF date setting, the code. */
 export function cardPdfKey(input: {
   readonly viewHash: string;

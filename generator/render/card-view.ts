@@ -96,6 +96,11 @@ export interface PageSetup {
   readonly heightMm: number;
   /** True on small paper (A6): smaller type and drawings. */
   readonly compact: boolean;
+  /**
+   * The card's margin, mm, when not its paper's own (style.ts PAPER_STYLE): a card in a
+   * sheet's cell (render/sheet.ts), whose `paper` is then only the class of its type sizes.
+   */
+  readonly marginMm?: number;
 }
 
 /** The usual cautions (full, or compact where space is short) and the deferral to the maker. */
@@ -368,6 +373,12 @@ const PAPER: Record<PaperSize, { css: string; widthMm: number; heightMm: number 
   'half-letter': { css: '5.5in 8.5in', widthMm: 139.7, heightMm: 215.9 },
   '4x6in': { css: '4in 6in', widthMm: 101.6, heightMm: 152.4 },
 };
+
+/** A paper's width and height, mm, portrait. */
+export function paperMm(paper: PaperSize): { readonly widthMm: number; readonly heightMm: number } {
+  const { widthMm, heightMm } = PAPER[paper];
+  return { widthMm, heightMm };
+}
 
 /** Papers small enough for the compact cautions and drawings (A6 and 4 × 6 in cards). */
 export const COMPACT_PAPERS: ReadonlySet<PaperSize> = new Set<PaperSize>(['A6', '4x6in']);

@@ -104,6 +104,11 @@ export function setPaths(setId: string, baseUrl?: string): CardPaths {
   return paths(`sets/${pageName(setId)}`, baseUrl);
 }
 
+/** A set's sheet PDF (several cards to a sheet, `sheet:`), beside the set's own PDF. */
+export function sheetPdfFile(setId: string): string {
+  return `sets/${pageName(setId)}-sheet.pdf`;
+}
+
 /** Joins the site's base address and a site-relative path with exactly one slash. */
 export function webUrl(baseUrl: string, sitePath: string): string {
   return `${baseUrl.replace(/\/+$/, '')}/${sitePath.replace(/^\/+/, '')}`;

@@ -3,7 +3,7 @@
  * one global object the templates read (`stovecard`), built from the card views. Like
  * card-view.ts, every string is final: templates only place them.
  */
-import type { Catalogue, PaperSize } from '../content/types.ts';
+import type { Catalogue, PaperSize, SheetSpec, SourceRef } from '../content/types.ts';
 import type { AcceptedPlan, RefusalCode } from '../planning/types.ts';
 import type { MoveCode } from '../planning/sensitivity.ts';
 import type { Messages } from '../words/catalogue.ts';
@@ -12,7 +12,8 @@ import { cautions as cautionsView, pageNav, pageSetup, type PageNav } from './ca
 import type { PlannerPageView } from './planner-view.ts';
 import { FONT_FACES, FONT_FAMILY, fontFileName, type FontFace } from './fonts.ts';
 import { clock, share, temperature, temperatureBand, TIME_STEP_S } from './format.ts';
-import { setPaths, type CardPaths } from './paths.ts';
+import { setPaths, sheetPdfFile, type CardPaths } from './paths.ts';
+import { sheetGeometry, type SheetGeometry } from './sheet.ts';
 import { voiceFor, type Voice } from './voice.ts';
 import { brandView, type BrandView } from './brand.ts';
 import { exercisesView, type ExercisesView } from './exercises.ts';
@@ -80,6 +81,39 @@ export interface SetView {
    * and in its PDF; null for any other set.
    */
   readonly exercises: ExercisesView | null;
+  /** The set's cards several to a sheet (`sheet:`), null without. */
+  readonly sheet: SheetView | null;
+}
+
+/** A set's sheets: where the cells are, the PDF's name and title, the set page's line. */
+export interface SheetView {
+  readonly geometry: SheetGeometry;
+  /** `sets/<id>-sheet.pdf` (paths.ts sheetPdfFile). */
+  readonly pdfFile: string;
+  /** The sheet PDF's document title. */
+  readonly title: string;
+  /** The set page's line before the link ("For a desktop printer: 4 cards to each A4 sheet…"). */
+  readonly label: string;
+  /** The link's text. */
+  readonly linkText: string;
+  /** Where `sheet:` is written, for the build's message when a card does not fit its cell. */
+  readonly source: SourceRef;
+  readonly field: string;
+}
+
+function sheetView(set: SetOutline, voice: Voice): SheetView | null {
+  if (!set.sheet) return null;
+  const { paper, up } = set.sheet;
+  const paperName = voice.words.print.paperNames[paper];
+  return {
+    geometry: sheetGeometry(paper, up),
+    pdfFile: sheetPdfFile(set.id),
+    title: voice.words.pdf.sheetTitle(set.title, up, paperName),
+    label: voice.words.print.sheetLink(up, paperName),
+    linkText: voice.words.print.sheetPdf,
+    source: set.sheet.source,
+    field: set.sheet.field,
+  };
 }
 
 export interface IndexView {
@@ -176,6 +210,8 @@ export interface SetOutline {
   readonly binder?: boolean;
   /** Paper of the set's PDF; default the site's. */
   readonly paper?: PaperSize;
+  /** The set's `sheet:` (content CardSet.sheet); absent or null without. */
+  readonly sheet?: SheetSpec | null;
   /** Language code of the set (content CardSet.language). */
   readonly language: string;
   readonly cardSlugs: readonly string[];
@@ -296,6 +332,7 @@ export function setViews(
       exercises: set.binder
         ? exercisesView(set.cardSlugs.map(stationCard), movesFor(set.language), voice)
         : null,
+      sheet: sheetView(set, voice),
     };
   });
 }

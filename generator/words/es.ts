@@ -603,6 +603,8 @@ const pdf: Messages['pdf'] = {
   stationTitle: (coffee: string, subtitle: string): string => `${coffee} — ${subtitle}`,
   insertTitle: (coffee: string): string => `${coffee} — ficha para la bolsa`,
   setTitle: (set: string): string => set,
+  sheetTitle: (set: string, up: number, paper: string): string =>
+    `${set} — ${up} por hoja ${paper}`,
   crossSectionAlt: (title: string, fillLine: string): string => `${title}. ${fillLine}`,
   qrAlt: (url: string): string => `Código QR de ${url}`,
   stepNumber: (n: number): string => `${n}`,
@@ -626,6 +628,17 @@ const pdf: Messages['pdf'] = {
 
 const print: Messages['print'] = {
   binderLabel: 'Manual de formación',
+  paperNames: {
+    A4: 'A4',
+    A5: 'A5',
+    A6: 'A6',
+    letter: 'carta',
+    'half-letter': 'media carta',
+    '4x6in': '4 × 6 in',
+  },
+  sheetPdf: 'Hojas (PDF)',
+  sheetLink: (up: number, paper: string): string =>
+    `Para una impresora de escritorio: ${up} fichas en cada hoja ${paper}, con marcas de corte.`,
   leftOut: (codes: readonly RefusalCode[]): string | null => {
     if (codes.length === 0) return null;
     const counts = new Map<RefusalCode, number>();

@@ -43,6 +43,7 @@ sets:
     cards:
       - { pot: three-cup, coffee: first-roast, stove: kitchen-gas } # ids = file names without .yaml
       # - { stove: kitchen-gas, every_coffee_with_every_pot: true } # every coffee with every pot
+    # sheet: { paper: A4, up: 2 } # also the cards 2 (4, 8) to a sheet for a desktop printer, with crop marks
 
   - id: bags
     title: Bag inserts

@@ -13,6 +13,9 @@ export const pdfWords = {
   insertTitle: (coffee: string): string => `${coffee} — bag insert`,
   /** Document title of a set of cards, or of a training binder. */
   setTitle: (set: string): string => set,
+  /** Document title of a set's sheets (several cards to a sheet). */
+  sheetTitle: (set: string, up: number, paper: string): string =>
+    `${set} — ${up} per ${paper} sheet`,
   /** Text alternative of the cross-section: the drawing's own title and the fill-line sentence. */
   crossSectionAlt: (title: string, fillLine: string): string => `${title}. ${fillLine}`,
   qrAlt: (url: string): string => `QR code of ${url}`,

@@ -6,6 +6,7 @@
  * (counts and codes); the short reasons are the ones the insert rows use
  * (cardWords.refusal.short), so one refusal reads the same everywhere.
  */
+import type { PaperSize } from '../content/types.ts';
 import type { RefusalCode } from '../planning/types.ts';
 import { cardWords } from './card.ts';
 
@@ -37,12 +38,49 @@ export const printWords = {
     const count = pdfs.length === 1 ? 'one card PDF leaves' : `${pdfs.length} card PDFs leave`;
     return `warning: ${count} out ${what} to keep every text at ${floorPt} pt or more on its paper: ${shownPdfs}${rest}`;
   },
+  /**
+   * A card too big for a sheet's cell at the floor, even without its optional blocks: where
+   * `sheet:` is written, the cell's size and what to change. Stops the build (exit 2).
+   */
+  sheetDoesNotFit: (f: {
+    readonly at: string;
+    readonly field: string;
+    readonly card: string;
+    readonly up: number;
+    readonly paper: string;
+    readonly cellWidthMm: number;
+    readonly cellHeightMm: number;
+    readonly floorPt: number;
+  }): string => {
+    const fewer = f.up === 8 ? '`up: 4` or `up: 2`' : '`up: 2`';
+    const fix =
+      f.up > 2
+        ? `write ${fewer}, or a larger \`paper:\` for the sheet`
+        : 'write a larger `paper:` for the sheet, or leave `sheet:` out of the set';
+    return `${f.at} ${f.field} — the card "${f.card}" does not fit its cell on the ${f.paper} sheet at ${f.up} up (${mm(f.cellWidthMm)} × ${mm(f.cellHeightMm)} mm) with every text at ${f.floorPt} pt or more, even without its optional blocks. ${fix[0]!.toUpperCase()}${fix.slice(1)}.`;
+  },
 } as const;
+
+const mm = (value: number): string => `${Math.round(value * 10) / 10}`;
 
 /** What a set page and the index print about a set (the catalogue's `print`). */
 export const setPrintWords = {
   /** A binder set's kind, on the index and its page (beside "Station cards", "Bag inserts"). */
   binderLabel: 'Training binder',
+  /** How a sheet's paper is named on a set page. */
+  paperNames: {
+    A4: 'A4',
+    A5: 'A5',
+    A6: 'A6',
+    letter: 'US letter',
+    'half-letter': 'half-letter',
+    '4x6in': '4 × 6 in',
+  } satisfies Record<PaperSize, string>,
+  /** A set page's line before the link to its sheet PDF (a set with `sheet:`). */
+  /** The link's own text (the set's PDF link beside it says "PDF"). */
+  sheetPdf: 'Sheets (PDF)',
+  sheetLink: (up: number, paper: string): string =>
+    `For a desktop printer: ${up} cards to each ${paper} sheet, with crop marks to cut along.`,
   /**
    * A set page's note on the pot × coffee combinations it left out because none of them
    * gets a recipe, with how many of each reason ("2 × base does not work on induction").

@@ -41,6 +41,7 @@ describe('loadCatalogue(content/), the demo', () => {
       ['quorvel-bar', 'station'],
       ['barista-training', 'station'],
       ['shipping-inserts', 'insert'],
+      ['counter-inserts', 'insert'],
       ['quorvel-barra', 'station'],
       ['fichas-bolsa', 'insert'],
     ]);
@@ -52,9 +53,31 @@ describe('loadCatalogue(content/), the demo', () => {
       ['quorvel-bar', false],
       ['barista-training', true],
       ['shipping-inserts', false],
+      ['counter-inserts', false],
       ['quorvel-barra', false],
       ['fichas-bolsa', false],
     ]);
+  });
+
+  // own rule: a set's `sheet: { paper, up }` is read as written, with where it is written
+  it('reads the demo’s sheets: paper, up and the line of each `sheet:`', () => {
+    const sheets = catalogue.site.sets.map((set) => [
+      set.id,
+      set.sheet && { paper: set.sheet.paper, up: set.sheet.up, field: set.sheet.field },
+    ]);
+    expect(sheets).toEqual([
+      ['quorvel-bar', null],
+      ['barista-training', null],
+      ['shipping-inserts', { paper: 'letter', up: 2, field: 'sets[2].sheet' }],
+      ['counter-inserts', { paper: 'A4', up: 4, field: 'sets[3].sheet' }],
+      ['quorvel-barra', { paper: 'A4', up: 2, field: 'sets[4].sheet' }],
+      ['fichas-bolsa', null],
+    ]);
+    for (const set of catalogue.site.sets) {
+      if (!set.sheet) continue;
+      expect(set.sheet.source.file).toBe('site.yaml');
+      expect(set.sheet.source.line, set.id).toBeGreaterThan(set.source.line);
+    }
   });
 
   // own rule: stovecard's handling of its own YAML input, not an outside value

@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { loadCatalogue } from '../../generator/content/index.ts';
-import { contentWords, wording } from '../../generator/words/content.ts';
+import { contentWords, issueLine, wording } from '../../generator/words/content.ts';
 import {
   catalogueIssues,
   contentCopy,
@@ -238,5 +238,47 @@ describe('site.yaml', () => {
       code: 'unknown-id',
     });
     expect(wording(stove.message).fix).toBe('Did you mean `bar-gas`?');
+  });
+
+  // own rule: `sheet: { paper, up }` on a set; up is 2, 4 or 8 (content/README.md)
+  it('reads a set’s sheet with where it is written, and refuses an up of 3 naming the values', async () => {
+    await put(dir, 'site.yaml', `${SITE}\n    sheet: { paper: A4, up: 4 }`);
+    const { site } = await loadCatalogue(dir);
+    expect(site.sets[0]!.sheet).toBeNull();
+    expect(site.sets[1]!.sheet).toEqual({
+      paper: 'A4',
+      up: 4,
+      source: { file: 'site.yaml', line: 16, column: 12 },
+      field: 'sets[1].sheet',
+    });
+
+    await put(dir, 'site.yaml', `${SITE}\n    sheet: { paper: A4, up: 3 }`);
+    const issue = expectIssue(await catalogueIssues(dir), {
+      file: 'site.yaml',
+      line: 16,
+      field: 'sets[1].sheet.up',
+    });
+    const text = issueLine(issue);
+    for (const value of ['sets[1].sheet.up', '`2`', '`4`', '`8`', 'got 3'])
+      expect(text, text).toContain(value);
+  });
+
+  // own rule: a sheet needs both its paper and its up
+  it('refuses a sheet without paper, and a sheet paper that is not one of the papers', async () => {
+    await put(dir, 'site.yaml', `${SITE}\n    sheet: { up: 2 }`);
+    const missing = expectIssue(await catalogueIssues(dir), {
+      file: 'site.yaml',
+      line: 16,
+      field: 'sets[1].sheet.paper',
+      code: 'missing-key',
+    });
+    expect(issueLine(missing)).toContain('sets[1].sheet.paper');
+    await put(dir, 'site.yaml', `${SITE}\n    sheet: { paper: B5, up: 2 }`);
+    const paper = expectIssue(await catalogueIssues(dir), {
+      file: 'site.yaml',
+      line: 16,
+      field: 'sets[1].sheet.paper',
+    });
+    expect(issueLine(paper)).toContain('`A4`');
   });
 });

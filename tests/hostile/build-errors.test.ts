@@ -312,6 +312,29 @@ describe('stovecard build on broken content keeps the last good site', () => {
     expect(await leftovers(out)).toEqual([]);
   });
 
+  it('a station card too big for an 8-up A4 sheet’s cell: site.yaml:line, the sheet field, the cell in mm and the fix, exit 2', async () => {
+    const { content, out } = await prepare('sheet-8-up', async (dir) => {
+      const text = await readFile(path.join(dir, 'site.yaml'), 'utf8');
+      await writeFile(
+        path.join(dir, 'site.yaml'),
+        `${text.slice(0, text.indexOf('sets:'))}sets:\n  - id: bar\n    title: Bar\n    layout: station\n    cards:\n      - { pot: three-cup, coffee: house-blend, stove: bar-gas }\n    sheet: { paper: A4, up: 8 }\n`,
+      );
+    });
+    const before = await treeHash(out);
+    const run = await runMain(['build', '--content', content, '--out', out]);
+    expectCleanFailure(run, 'sheet 8 up');
+    const lineOf = (await readFile(path.join(content, 'site.yaml'), 'utf8'))
+      .split('\n')
+      .findIndex((line) => line.includes('sheet:'));
+    // own rule: the cell of 8 up on A4 is (297 − 12) / 4 − 8 = 63.25 mm × (210 − 12) / 2 − 8 = 91 mm
+    expect(run.stderr).toContain(`site.yaml:${lineOf + 1}:12 sets[0].sheet — `);
+    expect(run.stderr).toContain('"three-cup--house-blend--bar-gas" does not fit its cell');
+    expect(run.stderr).toContain('A4 sheet at 8 up (63.3 × 91 mm)');
+    expect(run.stderr).toContain('Write `up: 4` or `up: 2`, or a larger `paper:` for the sheet.');
+    expect(await treeHash(out)).toBe(before);
+    expect(await leftovers(out)).toEqual([]);
+  });
+
   it('into a new --out folder: nothing is created', async () => {
     const { content } = await prepare('fresh', cases[0]!.mutate);
     const out = path.join(root, 'never-built');

@@ -62,18 +62,24 @@ describe('buildSite({ extraSteps: [pdfBuildStep] })', () => {
       }
     }
     expect(links).toBeGreaterThan(0);
-    // The set PDFs are where the set pages would link them.
+    // The set PDFs and their sheets are where the set pages would link them.
     for (const set of result.data.sets) {
       await expect(
         stat(path.join(site, relativeHref('', set.paths.pdfFile))),
       ).resolves.toBeTruthy();
+      if (set.sheet)
+        await expect(
+          stat(path.join(site, relativeHref('', set.sheet.pdfFile))),
+        ).resolves.toBeTruthy();
     }
   });
 
   it('reports the PDFs as the build’s extra-step progress, up to all of them', () => {
     const steps = events.filter((e) => e.phase === 'steps' && e.total > 0);
-    const total =
-      result.data.stationCards.length + result.data.insertCards.length + result.data.sets.length;
+    const { stationCards, insertCards, sets } = result.data;
+    // Cards, sets and the sets' sheets (`sheet:`).
+    const sheets = sets.filter((set) => set.sheet !== null).length;
+    const total = stationCards.length + insertCards.length + sets.length + sheets;
     expect(steps.at(-1)).toEqual({ phase: 'steps', done: total, total });
   });
 });

@@ -110,9 +110,9 @@ export function structNodes(node: StructNode | null): StructNode[] {
 }
 
 /**
- * Smallest size of any non-blank text item on each page, pt (the size pdfjs reports: its
- * text matrix's vertical scale, which includes the scaling of drawings and charts), and
- * each page's [width, height].
+ * Smallest size of any non-blank text item on each page, pt (the vertical scale of its text
+ * matrix, pdfjs: the scaling of drawings, the chart and a sheet's cells included), and each
+ * page's size.
  */
 export async function smallestText(
   bytes: Uint8Array,

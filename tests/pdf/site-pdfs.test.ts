@@ -44,14 +44,17 @@ describe('writeSitePdfs(siteDir, data)', () => {
     }
   });
 
-  it('writes each set’s PDF at the set’s paths.pdfFile, and every PDF the set pages link', async () => {
+  it('writes each set’s PDF at the set’s paths.pdfFile, its sheet’s, and every PDF the set pages link', async () => {
     const written = await files(path.join(root, 'one'));
     for (const set of demo.data.sets) {
       expect(written).toContain(set.paths.pdfFile);
+      if (set.sheet) expect(written).toContain(set.sheet.pdfFile);
       for (const link of set.cards) expect(written).toContain(link.pdfFile);
     }
+    const sheets = demo.data.sets.filter((set) => set.sheet !== null).length;
+    expect(sheets).toBeGreaterThan(0);
     expect(written).toHaveLength(
-      demo.data.stationCards.length + demo.data.insertCards.length + demo.data.sets.length,
+      demo.data.stationCards.length + demo.data.insertCards.length + demo.data.sets.length + sheets,
     );
   });
 

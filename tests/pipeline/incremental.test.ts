@@ -95,11 +95,13 @@ describe('a rebuild after editing one coffee', () => {
     const touched = new Set(cards.map((c) => c.paths.pdfFile));
     // A set is one PDF: it is drawn again when it holds one of the cards.
     const sets = data.sets.filter((set) => set.cards.some((link) => touched.has(link.pdfFile)));
-    const pdfs = data.stationCards.length + data.insertCards.length + data.sets.length;
-    expect(rebuilt.stats.pdfs).toMatchObject({
-      made: cards.length + sets.length,
-      reused: pdfs - cards.length - sets.length,
-    });
+    // So is a set's sheet PDF (`sheet:`), keyed by the same cards.
+    const sheets = sets.filter((set) => set.sheet !== null);
+    const allSheets = data.sets.filter((set) => set.sheet !== null);
+    const pdfs =
+      data.stationCards.length + data.insertCards.length + data.sets.length + allSheets.length;
+    const made = cards.length + sets.length + sheets.length;
+    expect(rebuilt.stats.pdfs).toMatchObject({ made, reused: pdfs - made });
     const otherPages = 3 + data.sets.length + data.plannerPages.length; // index, method, troubleshooting and the sets
     expect(rebuilt.stats.pages).toMatchObject({
       made: cards.length + otherPages,

@@ -158,6 +158,10 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'plan.coolCup': [['12 %']],
   'plan.smallFill': [[]],
   'print.leftOut': [[['fill-above-valve']], [['no-delivery', 'no-delivery', 'no-plan-fits']]],
+  'print.sheetLink': [
+    [2, 'A4'],
+    [8, 'US letter'],
+  ],
   'binder.cover.from': [['Roaster R']],
   'binder.cover.built': [['03/12/2026']],
   'binder.logSheet.readingsIntro': [['Cup, g']],
@@ -175,6 +179,7 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'pdf.stationTitle': [['Coffee C', 'in Pot A']],
   'pdf.insertTitle': [['Coffee C']],
   'pdf.setTitle': [['Bar']],
+  'pdf.sheetTitle': [['Bar', 4, 'A4']],
   'pdf.crossSectionAlt': [['Cross-section', 'Fill line']],
   'pdf.qrAlt': [['https://cards.example/']],
   'pdf.stepNumber': [[3]],

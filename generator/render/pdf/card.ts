@@ -89,8 +89,12 @@ export function layoutCard(doc: PDFKit.PDFDocument, view: CardView): CardFit {
   let fit: CardFit | null = null;
   for (let n = 0; n <= order.length; n++) {
     const dropped = order.slice(0, n);
-    fit = fitCard(new Pen(doc, false), pageBox(view), view.page.paper, (style) =>
-      cardFrame(view, style, dropped),
+    fit = fitCard(
+      new Pen(doc, false),
+      pageBox(view),
+      view.page.paper,
+      (style) => cardFrame(view, style, dropped),
+      view.page.marginMm,
     );
     if (fit.fits) return n === 0 ? fit : { ...fit, dropped };
   }

@@ -178,12 +178,14 @@ export function fitCard(
   page: PageBox,
   paper: PaperSize,
   frameFor: (style: CardStyle) => CardFrame,
+  /** The card's margin when not its paper's (a sheet's cell), mm. */
+  marginMm?: number,
 ): CardFit {
   const measure = pen.measuring();
   let last: CardFit | null = null;
   for (const step of FONT_STEPS) {
     for (const arrangement of ARRANGEMENTS) {
-      const style = cardStyle(paper, step, arrangement);
+      const style = cardStyle(paper, step, arrangement, marginMm);
       last = placeCard(measure, page, style, frameFor(style));
       if (last.fits) return last;
     }

@@ -7,6 +7,8 @@
  *   sets/<set>.pdf                       each set's cards in order; a set with
  *                                        `layout: binder` opens with the binder's front
  *                                        matter (binder.ts)
+ *   sets/<set>-sheet.pdf                 a set with `sheet:`: its cards several to a
+ *                                        sheet, with crop marks (sheet.ts)
  *
  * The cards first: a set is assembled from its cards' PDFs (binder.ts), not drawn again.
  *
@@ -15,9 +17,11 @@
 import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { onPaper } from '../card-view.ts';
+import { onCell } from '../sheet.ts';
 import type { SetView, SiteData } from '../site-view.ts';
 import { cardPdf, type CardView } from './card.ts';
 import { setPdf, type FrontMatter } from './binder.ts';
+import { sheetPdf } from './sheet.ts';
 
 /** What the step reports, in the build's terms (phase 'steps', PDFs written of all). */
 export type PdfProgress = (event: {
@@ -67,6 +71,13 @@ export function setCards(set: SetView, data: SiteData): CardView[] {
   });
 }
 
+/** A set's cards laid out for its sheet's cell (the set has `sheet:`), in the set's order. */
+export function sheetCards(set: SetView, data: SiteData): CardView[] {
+  const sheet = set.sheet;
+  if (!sheet) throw new Error(`PDF: set "${set.id}" has no sheet`);
+  return setCards(set, data).map((card) => onCell(card, sheet.geometry));
+}
+
 async function write(siteDir: string, file: string, bytes: Buffer): Promise<void> {
   const target = path.join(siteDir, file);
   await mkdir(path.dirname(target), { recursive: true });
@@ -83,7 +94,7 @@ export async function writeSitePdfs(
   const started = performance.now();
   const author = data.site.businessName;
   const cards: CardView[] = [...data.stationCards, ...data.insertCards];
-  const total = cards.length + data.sets.length;
+  const total = cards.length + data.sets.length + data.sets.filter((set) => set.sheet).length;
   const files: PdfFile[] = [];
   const cardPdfs = new Map<string, Uint8Array>();
   onProgress({ phase: 'steps', done: 0, total });
@@ -124,6 +135,26 @@ export async function writeSitePdfs(
     await write(siteDir, set.paths.pdfFile, pdf.bytes);
     files.push({
       file: set.paths.pdfFile,
+      pages: pdf.pages,
+      bytes: pdf.bytes.length,
+      ms: performance.now() - t,
+    });
+    onProgress({ phase: 'steps', done: files.length, total });
+  }
+  for (const set of data.sets) {
+    if (!set.sheet) continue;
+    const t = performance.now();
+    const pdf = await sheetPdf({
+      set: { id: set.id, lang: set.lang },
+      sheet: set.sheet,
+      cards: sheetCards(set, data),
+      author,
+      builtOn: data.site.builtOn,
+      env,
+    });
+    await write(siteDir, set.sheet.pdfFile, pdf.bytes);
+    files.push({
+      file: set.sheet.pdfFile,
       pages: pdf.pages,
       bytes: pdf.bytes.length,
       ms: performance.now() - t,

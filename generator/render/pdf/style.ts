@@ -5,6 +5,7 @@
  * tries the next font step (every size × `step`), so a card is never clipped.
  */
 import type { PaperSize } from '../../content/types.ts';
+import { QR_PRINTED_MM } from '../qr-density.ts';
 
 export const INK = '#000000';
 export const SOFT = '#555555';
@@ -146,10 +147,15 @@ export function cardMarginPt(paper: PaperSize): number {
   return PAPER_STYLE[paper].marginMm * MM;
 }
 
+/**
+ * The sizes of one font step on `paper`; `marginMm` replaces the paper's margin (a card in
+ * a sheet's cell, render/sheet.ts, keeps its text that far inside the cut line).
+ */
 export function cardStyle(
   paper: PaperSize,
   step: number,
   arrangement: Arrangement = ARRANGEMENTS[0]!,
+  marginMm?: number,
 ): CardStyle {
   const { k } = PAPER_STYLE[paper];
   const s = k * step;
@@ -164,7 +170,7 @@ export function cardStyle(
     bodyColumns: arrangement.bodyColumns,
     listColumns: arrangement.listColumns,
     compact: paper === 'A6' || paper === '4x6in',
-    marginPt: cardMarginPt(paper),
+    marginPt: marginMm === undefined ? cardMarginPt(paper) : marginMm * MM,
     gap: 1.6 * MM * s,
     gutter: 3 * MM * s,
     h1: f(16, true),
@@ -198,7 +204,9 @@ export function cardStyle(
     drawingScale: 0.75 * s,
     ruleHeavy: 0.8 * MM * s,
     ruleLight: 0.75,
-    qrSize: 15 * MM * s,
+    // Never smaller than the width the address's density is checked at (qr-density.ts), so
+    // a code that passed the check is printed at a size a phone reads.
+    qrSize: Math.max(15 * MM * s, QR_PRINTED_MM * MM),
     padding: 1 * MM * s,
   };
 }
