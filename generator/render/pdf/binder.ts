@@ -33,7 +33,7 @@ import {
 import { cardTitle, pageBox, type CardView } from './card.ts';
 import { openPdf, pageSizePt, pdfDate } from './document.ts';
 import type { Block, PageBox } from './layout.ts';
-import { mergeCardPages } from './merge.ts';
+import { mergeCardPages, type PageSegment } from './merge.ts';
 import { drawPageNumber, flowPages, type FlowFrame, type FlowItem } from './pages.ts';
 import { Pen } from './pen.ts';
 import { cardMarginPt, INK, RULE_SOFT, textPageStyle, type TextPageStyle } from './style.ts';
@@ -63,6 +63,12 @@ export interface SetPdfInput {
   readonly cards: readonly SetCard[];
   /** The cards' own PDFs (card.ts cardPdf's bytes), in the same order. */
   readonly cardPdfs: readonly Uint8Array[];
+  /**
+   * The cards' pages already in the set's object form (merge.ts pageSegment, as cached
+   * beside their PDFs), in the same order; a missing one is made from its PDF. The bytes
+   * are the same either way.
+   */
+  readonly cardSegments?: readonly (PageSegment | null)[];
   /** Present for a training binder. */
   readonly frontMatter: FrontMatter | null;
   /** Paper of the text pages (the site's). */
@@ -434,6 +440,13 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
   const { cardPdfs } = input;
   if (cardPdfs.length !== input.cards.length)
     throw new Error(`PDF: ${input.cards.length} cards in the set and ${cardPdfs.length} card PDFs`);
-  const grafts = cardPdfs.map((pdf, i) => ({ page: frontMatterPages + i, pdf }));
+  const segments = input.cardSegments;
+  if (segments && segments.length !== cardPdfs.length)
+    throw new Error(`PDF: ${cardPdfs.length} card PDFs and ${segments.length} card segments`);
+  const grafts = cardPdfs.map((pdf, i) => ({
+    page: frontMatterPages + i,
+    pdf,
+    segment: segments?.[i] ?? null,
+  }));
   return { bytes: mergeCardPages(shell, grafts), pages: pageNo, frontMatterPages };
 }

@@ -1,0 +1,65 @@
+/**
+ * A set's PDF from its cards' PDF files, with each card's page taken in the set's object
+ * form (render/pdf/merge.ts PageSegment) from the cache where it is there:
+ *
+ *   <cacheDir>/pdfs/<card PDF key>.page.json   a card page's segment (merge.ts
+ *                                              encodeSegment), beside the card's PDF
+ *
+ * A card whose segment is missing, damaged or not for its PDF (decodeSegment: another
+ * format, or streams not where it says) has it made from its PDF, and the new segments
+ * are handed back for the build's thread to cache (a worker only reads the cache). The
+ * set's bytes are the same with or without them; with them an edit to one coffee costs
+ * each of its sets only the new cards' conversion and a concatenation.
+ */
+import { readFile } from 'node:fs/promises';
+import { setPdf, type SetPdfInput } from '../render/pdf/binder.ts';
+import { decodeSegment, encodeSegment, pageSegment } from '../render/pdf/merge.ts';
+import { FileCache } from './file-cache.ts';
+
+/** The segments' file ending in the PDF cache folder. */
+export const PAGE_SEGMENT_EXT = '.page.json';
+
+/** Where a set's cards' segments are cached: the folder and each card's PDF key, in order. */
+export interface SegmentSource {
+  readonly dir: string;
+  readonly keys: readonly string[];
+}
+
+export interface AssembledSet {
+  readonly bytes: Uint8Array;
+  readonly pages: number;
+  /** Segments made here (not in the cache), to be cached under their card PDF's key. */
+  readonly madeSegments: readonly { readonly key: string; readonly text: string }[];
+}
+
+export async function assembleSet(
+  input: Omit<SetPdfInput, 'cardPdfs' | 'cardSegments'>,
+  cardFiles: readonly string[],
+  segments: SegmentSource | null,
+): Promise<AssembledSet> {
+  if (segments && segments.keys.length !== cardFiles.length)
+    throw new Error(`PDF: ${cardFiles.length} card files and ${segments.keys.length} segment keys`);
+  const cache = segments ? new FileCache(segments.dir, PAGE_SEGMENT_EXT) : null;
+  const made: { key: string; text: string }[] = [];
+  const read = await Promise.all(
+    cardFiles.map(async (file, i) => {
+      const key = segments?.keys[i];
+      const [pdf, text] = await Promise.all([
+        readFile(file),
+        cache && key ? cache.getText(key) : Promise.resolve(null),
+      ]);
+      let segment = text === null ? null : decodeSegment(text, pdf);
+      if (!segment) {
+        segment = pageSegment(pdf);
+        if (key) made.push({ key, text: encodeSegment(segment, pdf) });
+      }
+      return { pdf, segment };
+    }),
+  );
+  const pdf = await setPdf({
+    ...input,
+    cardPdfs: read.map((r) => r.pdf),
+    cardSegments: read.map((r) => r.segment),
+  });
+  return { bytes: pdf.bytes, pages: pdf.pages, madeSegments: made };
+}
