@@ -29,9 +29,9 @@ import { frontMatterOf, isBinderSet, setCards } from '../render/pdf/site-pdfs.ts
 import type { BuildContext, ViewText } from './build-site.ts';
 import { renderCodeVersion } from './code-version.ts';
 import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
-import { cardPdfKey, RenderCache, setPdfKey, sha256 } from './render-cache.ts';
+import { cardPdfKey, RenderCache, setPdfKey, setShellKey, sha256 } from './render-cache.ts';
 import { toTaggedJson } from './plan-cache.ts';
-import { assembleSet, PAGE_SEGMENT_EXT, type AssembledSet } from './set-assembly.ts';
+import { assembleSet, PAGE_SEGMENT_EXT, SET_SHELL_EXT, type AssembledSet } from './set-assembly.ts';
 import { FileCache } from './file-cache.ts';
 
 /** Scratch folder of the site for the cards of sets on their own paper (removed after). */
@@ -76,13 +76,15 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion });
   // Card pages in the set's object form, beside their PDFs (set-assembly.ts).
   const segments = new FileCache(cache.pdfs.dir, PAGE_SEGMENT_EXT);
+  const shells = new FileCache(cache.pdfs.dir, SET_SHELL_EXT);
   const segmentsPut = new Set<string>();
-  const cacheSegments = async (made: AssembledSet['madeSegments']) => {
-    for (const { key, text } of made) {
+  const cacheParts = async (made: AssembledSet) => {
+    for (const { key, text } of made.madeSegments) {
       if (segmentsPut.has(key)) continue;
       segmentsPut.add(key);
       await segments.put(key, text);
     }
+    if (made.madeShell) await shells.put(made.madeShell.key, made.madeShell.bytes);
   };
   const cardJob = (view: CardView, file: string, label = file): PdfJob => ({
     file,
@@ -126,6 +128,18 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     // a week on still finds the set's other pages converted.
     const segmentKeys = members.map(keyOf);
     for (const key of segmentKeys) segments.file(key);
+    const shellKey = setShellKey({
+      set,
+      cards: input.cards,
+      frontMatter: input.frontMatter,
+      page: input.page,
+      author,
+      builtOn: input.builtOn,
+      sourceDateEpoch: epoch,
+      renderVersion,
+      brand: input.brand ?? null,
+    });
+    shells.file(shellKey);
     const cardFiles = members.map((card) => {
       if (card.page.paper === sitePaper) return path.join(siteDir, card.paths.pdfFile);
       const file = setPaperFile(card);
@@ -149,7 +163,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
         brand: input.brand ?? null,
       }),
       async render() {
-        const source = { dir: segments.dir, keys: segmentKeys };
+        const source = { dir: segments.dir, keys: segmentKeys, shellKey };
         let made: AssembledSet;
         let ms: number;
         if (pool) {
@@ -161,7 +175,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
           made = await assembleSet(input, cardFiles, source);
           ms = performance.now() - started;
         }
-        await cacheSegments(made.madeSegments);
+        await cacheParts(made);
         return { bytes: made.bytes, pages: made.pages, ms };
       },
     };

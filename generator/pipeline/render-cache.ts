@@ -157,3 +157,36 @@ export function setPdfKey(input: {
     }),
   );
 }
+
+/**
+ * Key of a set's shell (binder.ts setShell: its own pages and a placeholder per card):
+ * everything setPdf reads but the card PDFs, so an edit that leaves the cards' titles,
+ * refusals and paper as they were keeps the shell.
+ */
+export function setShellKey(input: {
+  readonly set: unknown;
+  readonly cards: unknown;
+  readonly frontMatter: unknown;
+  readonly page: unknown;
+  readonly author: string;
+  readonly builtOn: string;
+  readonly sourceDateEpoch: string | undefined;
+  readonly renderVersion: string;
+  readonly brand?: unknown;
+}): string {
+  return sha256(
+    stableJson({
+      format: RENDER_CACHE_FORMAT,
+      kind: 'set-shell',
+      brand: input.brand ?? null,
+      set: input.set,
+      cards: input.cards,
+      front: input.frontMatter,
+      page: input.page,
+      author: input.author,
+      builtOn: input.builtOn,
+      epoch: input.sourceDateEpoch ?? null,
+      code: input.renderVersion,
+    }),
+  );
+}

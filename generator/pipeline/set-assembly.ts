@@ -8,6 +8,9 @@
  * A card whose segment is missing, damaged or not for its PDF (decodeSegment: another
  * format, or streams not where it says) has it made from its PDF, and the new segments
  * are handed back for the build's thread to cache (a worker only reads the cache). The
+ * set's shell (binder.ts setShell: its own pages, a placeholder per card) is cached the
+ * same way, as `<shell key>.shell.pdf`: an edit that leaves the cards' titles as they
+ * were draws no set page again. The
  * set's bytes are the same with or without them; with them an edit to one coffee costs
  * each of its sets only the new cards' conversion and a concatenation.
  */
@@ -19,10 +22,17 @@ import { FileCache } from './file-cache.ts';
 /** The segments' file ending in the PDF cache folder. */
 export const PAGE_SEGMENT_EXT = '.page.json';
 
-/** Where a set's cards' segments are cached: the folder and each card's PDF key, in order. */
+/** The set shells' file ending in the PDF cache folder (render-cache.ts setShellKey). */
+export const SET_SHELL_EXT = '.shell.pdf';
+
+/**
+ * Where a set's parts are cached: the folder, each card's PDF key in order (its
+ * segment's key), and the key of the set's shell.
+ */
 export interface SegmentSource {
   readonly dir: string;
   readonly keys: readonly string[];
+  readonly shellKey: string;
 }
 
 export interface AssembledSet {
@@ -30,6 +40,8 @@ export interface AssembledSet {
   readonly pages: number;
   /** Segments made here (not in the cache), to be cached under their card PDF's key. */
   readonly madeSegments: readonly { readonly key: string; readonly text: string }[];
+  /** The shell, when it was drawn here, to be cached under its key. */
+  readonly madeShell: { readonly key: string; readonly bytes: Uint8Array } | null;
 }
 
 export async function assembleSet(
@@ -40,7 +52,9 @@ export async function assembleSet(
   if (segments && segments.keys.length !== cardFiles.length)
     throw new Error(`PDF: ${cardFiles.length} card files and ${segments.keys.length} segment keys`);
   const cache = segments ? new FileCache(segments.dir, PAGE_SEGMENT_EXT) : null;
+  const shells = segments ? new FileCache(segments.dir, SET_SHELL_EXT) : null;
   const made: { key: string; text: string }[] = [];
+  const cachedShell = shells && segments ? shells.getBytes(segments.shellKey) : null;
   const read = await Promise.all(
     cardFiles.map(async (file, i) => {
       const key = segments?.keys[i];
@@ -56,10 +70,22 @@ export async function assembleSet(
       return { pdf, segment };
     }),
   );
-  const pdf = await setPdf({
+  const shell = await cachedShell;
+  const inputs = {
     ...input,
     cardPdfs: read.map((r) => r.pdf),
     cardSegments: read.map((r) => r.segment),
-  });
-  return { bytes: pdf.bytes, pages: pdf.pages, madeSegments: made };
+  };
+  let pdf;
+  let drewShell = shell === null;
+  try {
+    pdf = await setPdf(inputs, shell);
+  } catch (error) {
+    // A cached shell that is not one (it passed its check, but does not read): drawn again.
+    if (shell === null) throw error;
+    pdf = await setPdf(inputs, null);
+    drewShell = true;
+  }
+  const drawn = segments && drewShell ? { key: segments.shellKey, bytes: pdf.shell } : null;
+  return { bytes: pdf.bytes, pages: pdf.pages, madeSegments: made, madeShell: drawn };
 }

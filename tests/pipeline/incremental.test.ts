@@ -227,8 +227,9 @@ describe('a set none of whose cards changed', () => {
 
 describe('a set re-assembled from its cards’ cached pages (set-assembly.ts)', () => {
   // Own rule of the pipeline: each card page's segment is cached beside its PDF
-  // (<key>.page.json); a set re-assembled from them has a clean build's bytes, and a
-  // damaged cache (set or segment) costs a full assembly, never a wrong set.
+  // (<key>.page.json), each set's shell as <key>.shell.pdf; a set re-assembled from them
+  // has a clean build's bytes, and a damaged cache (set, segment or shell) costs a full
+  // assembly, never a wrong set.
   it('converts only the new cards’ pages, and a damaged set or segment is made again', async () => {
     const dir = await mkdtemp(path.join(tmpdir(), 'stovecard-segments-'));
     try {
@@ -252,8 +253,12 @@ describe('a set re-assembled from its cards’ cached pages (set-assembly.ts)', 
       const cardsInSets = new Set(
         firstRun.data.sets.flatMap((set) => set.cards.map((c) => c.pdfFile)),
       );
-      // One segment per card that a set holds (the inserts' set, the binder's too).
+      // One segment per card that a set holds (the inserts' set, the binder's too), and a
+      // shell per set.
       expect((await segmentFiles()).length).toBe(cardsInSets.size);
+      const shellFiles = async () =>
+        (await readdir(pdfCache)).filter((name) => name.endsWith('.shell.pdf')).sort();
+      expect(await shellFiles()).toHaveLength(firstRun.data.sets.length);
 
       const file = path.join(contentDir, 'coffees', 'coffee-02.yaml');
       const yaml = await readFile(file, 'utf8');
@@ -302,6 +307,10 @@ describe('a set re-assembled from its cards’ cached pages (set-assembly.ts)', 
         await writeFile(target, text);
         await writeFile(`${target}.sha256`, checkText(Buffer.from(text)));
       }
+      // A shell that passes its check but is no PDF.
+      const shell = path.join(pdfCache, (await shellFiles())[0]!);
+      await writeFile(shell, 'not a PDF');
+      await writeFile(`${shell}.sha256`, checkText(Buffer.from('not a PDF')));
       const cut = path.join(pdfCache, segments[0]!);
       await writeFile(cut, (await readFile(cut)).subarray(0, 100));
       let cutSets = 0;
