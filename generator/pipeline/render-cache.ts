@@ -10,7 +10,7 @@
  *                                 views it is drawn from and the render code version
  *   <cacheDir>/pdfs/<key>.page.json  a card page in a set's object form, under its card
  *                                 PDF's key (set-assembly.ts, render/pdf/merge.ts)
- *   <cacheDir>/pdfs/<key>.shell.pdf  a set's own pages and placeholders (setShellKey)
+ *   <cacheDir>/pdfs/<key>.shell  a set's own pages and placeholders (setShellKey)
  *
  * A view's hash is sha256 over its cache text, so equal views give equal page and PDF
  * keys whatever made them. What a build did not use is swept after a week (file-cache.ts);

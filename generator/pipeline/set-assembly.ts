@@ -9,7 +9,7 @@
  * format, or streams not where it says) has it made from its PDF, and the new segments
  * are handed back for the build's thread to cache (a worker only reads the cache). The
  * set's shell (binder.ts setShell: its own pages, a placeholder per card) is cached the
- * same way, as `<shell key>.shell.pdf`: an edit that leaves the cards' titles as they
+ * same way, as `<shell key>.shell`: an edit that leaves the cards' titles as they
  * were draws no set page again. The
  * set's bytes are the same with or without them; with them an edit to one coffee costs
  * each of its sets only the new cards' conversion and a concatenation.
@@ -22,8 +22,11 @@ import { FileCache } from './file-cache.ts';
 /** The segments' file ending in the PDF cache folder. */
 export const PAGE_SEGMENT_EXT = '.page.json';
 
-/** The set shells' file ending in the PDF cache folder (render-cache.ts setShellKey). */
-export const SET_SHELL_EXT = '.shell.pdf';
+/**
+ * The set shells' file ending in the PDF cache folder (render-cache.ts setShellKey): a PDF,
+ * but not named `.pdf`, so nothing takes it for one of the site's PDFs in the cache.
+ */
+export const SET_SHELL_EXT = '.shell';
 
 /**
  * Where a set's parts are cached: the folder, each card's PDF key in order (its

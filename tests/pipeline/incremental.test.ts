@@ -227,7 +227,7 @@ describe('a set none of whose cards changed', () => {
 
 describe('a set re-assembled from its cards’ cached pages (set-assembly.ts)', () => {
   // Own rule of the pipeline: each card page's segment is cached beside its PDF
-  // (<key>.page.json), each set's shell as <key>.shell.pdf; a set re-assembled from them
+  // (<key>.page.json), each set's shell as <key>.shell; a set re-assembled from them
   // has a clean build's bytes, and a damaged cache (set, segment or shell) costs a full
   // assembly, never a wrong set.
   it('converts only the new cards’ pages, and a damaged set or segment is made again', async () => {
@@ -257,7 +257,7 @@ describe('a set re-assembled from its cards’ cached pages (set-assembly.ts)', 
       // shell per set.
       expect((await segmentFiles()).length).toBe(cardsInSets.size);
       const shellFiles = async () =>
-        (await readdir(pdfCache)).filter((name) => name.endsWith('.shell.pdf')).sort();
+        (await readdir(pdfCache)).filter((name) => name.endsWith('.shell')).sort();
       expect(await shellFiles()).toHaveLength(firstRun.data.sets.length);
 
       const file = path.join(contentDir, 'coffees', 'coffee-02.yaml');
