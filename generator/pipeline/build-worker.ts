@@ -7,14 +7,14 @@
  *   plan          planCard(request)                  → planToJson text, simulations run
  *   station-view  stationCardView(plan, catalogue)   → toTaggedJson text of the view
  *   card-pdf      cardPdf(view)                      → the PDF's bytes
- *   set-pdf       setPdf(input, the card PDF files)  → the PDF's bytes and page count
+ *   set-pdf       assembleSet(input, the card PDF files, their cached segments)
+ *                                                    → the PDF's bytes, page count, new segments
  *   sheet-pdf     sheetPdf(input, the cell views)    → the PDF's bytes, pages, blocks left out
  *   bare-pdf      barePdf(input)                     → the bench's stricter floor (bare.ts)
  *
  * The renderers are imported on first use, so a worker that only plans never loads
  * vega or pdfkit.
  */
-import { readFile } from 'node:fs/promises';
 import { parentPort, workerData } from 'node:worker_threads';
 import type { Catalogue } from '../content/types.ts';
 import type { PlanRequest } from '../planning/plan.ts';
@@ -22,6 +22,7 @@ import type { CardViewOptions } from '../render/card-view.ts';
 import type { BarePdfInput } from '../render/pdf/bare.ts';
 import type { SetPdfInput } from '../render/pdf/binder.ts';
 import type { SheetPdfInput } from '../render/pdf/sheet.ts';
+import type { AssembledSet, SegmentSource } from './set-assembly.ts';
 import type { CardView, PdfContext } from '../render/pdf/card.ts';
 import { fromTaggedJson, planFromJson, planToJson, toTaggedJson } from './plan-cache.ts';
 
@@ -37,9 +38,11 @@ export type TaskRequest =
   | { readonly kind: 'card-pdf'; readonly viewJson: string; readonly context: PdfContext }
   | {
       readonly kind: 'set-pdf';
-      readonly input: Omit<SetPdfInput, 'cardPdfs'>;
+      readonly input: Omit<SetPdfInput, 'cardPdfs' | 'cardSegments'>;
       /** The set's cards' PDF files, in order (read here rather than sent over). */
       readonly cardFiles: readonly string[];
+      /** Where their pages' segments are cached (set-assembly.ts); null: made here. */
+      readonly segments: SegmentSource | null;
     }
   | {
       readonly kind: 'sheet-pdf';
@@ -53,7 +56,7 @@ interface Results {
   plan: { readonly json: string; readonly simulations: number };
   'station-view': { readonly json: string };
   'card-pdf': { readonly bytes: Uint8Array; readonly dropped: readonly string[] };
-  'set-pdf': { readonly bytes: Uint8Array; readonly pages: number };
+  'set-pdf': AssembledSet;
   'sheet-pdf': {
     readonly bytes: Uint8Array;
     readonly pages: number;
@@ -94,10 +97,8 @@ export async function runTask(task: TaskRequest): Promise<TaskResult<TaskRequest
       return { bytes: pdf.bytes, dropped: pdf.fit.dropped ?? [] };
     }
     case 'set-pdf': {
-      const { setPdf } = await import('../render/pdf/binder.ts');
-      const cardPdfs = await Promise.all(task.cardFiles.map((file) => readFile(file)));
-      const pdf = await setPdf({ ...task.input, cardPdfs });
-      return { bytes: pdf.bytes, pages: pdf.pages };
+      const { assembleSet } = await import('./set-assembly.ts');
+      return assembleSet(task.input, task.cardFiles, task.segments);
     }
     case 'sheet-pdf': {
       const { sheetPdf } = await import('../render/pdf/sheet.ts');

@@ -14,19 +14,35 @@
  *   card views ─ key ─▶ cached? ── yes ─▶ copy <cacheDir>/pdfs/<key>.pdf into the site
  *                                └─ no ──▶ cardPdf (pool) ─▶ the site and the cache
  *   then sets  ─ key ─▶ cached? ── yes ─▶ copy
- *                                └─ no ──▶ setPdf of the site's card PDFs (pool) ─▶ site, cache
+ *                                └─ no ──▶ assembleSet of the site's card PDFs (pool) ─▶ site, cache
+ *   then sheets ─ key ─▶ cached? ── yes ─▶ copy
+ *                                └─ no ──▶ sheetPdf of the cards laid out for a cell (pool)
+ *
+ * A set is assembled from its cards' pages in the set's object form, cached beside each
+ * card PDF (set-assembly.ts, `<key>.page.json`): after an edit only the new cards' pages
+ * are converted, the rest is a concatenation. The new segments the workers made are
+ * cached here.
  */
-import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cardPdf, type CardView } from '../render/pdf/card.ts';
-import { setCard, setPdf, type SetPdfInput } from '../render/pdf/binder.ts';
+import { setCard, type SetPdfInput } from '../render/pdf/binder.ts';
 import { sheetPdf, type SheetPdfInput } from '../render/pdf/sheet.ts';
 import { frontMatterOf, isBinderSet, setCards, sheetCards } from '../render/pdf/site-pdfs.ts';
 import type { BuildContext, ViewText } from './build-site.ts';
 import { renderCodeVersion } from './code-version.ts';
 import { allSettledOrThrow, IO_LIMIT, mapConcurrent } from './concurrent.ts';
-import { cardPdfKey, RenderCache, setPdfKey, sha256, sheetPdfKey } from './render-cache.ts';
+import {
+  cardPdfKey,
+  RenderCache,
+  setPdfKey,
+  setShellKey,
+  sha256,
+  sheetPdfKey,
+} from './render-cache.ts';
 import { toTaggedJson } from './plan-cache.ts';
+import { assembleSet, PAGE_SEGMENT_EXT, SET_SHELL_EXT, type AssembledSet } from './set-assembly.ts';
+import { FileCache } from './file-cache.ts';
 
 /** Scratch folder of the site for the cards of sets on their own paper (removed after). */
 const SET_CARDS_DIR = '.set-paper-cards';
@@ -86,11 +102,25 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
   const hashOf = (card: CardView) => textOf(card).hash;
 
   const cards: CardView[] = [...data.stationCards, ...data.insertCards];
+  const keyOf = (view: CardView) =>
+    cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion });
+  // Card pages in the set's object form, beside their PDFs (set-assembly.ts).
+  const segments = new FileCache(cache.pdfs.dir, PAGE_SEGMENT_EXT);
+  const shells = new FileCache(cache.pdfs.dir, SET_SHELL_EXT);
+  const segmentsPut = new Set<string>();
+  const cacheParts = async (made: AssembledSet) => {
+    for (const { key, text } of made.madeSegments) {
+      if (segmentsPut.has(key)) continue;
+      segmentsPut.add(key);
+      await segments.put(key, text);
+    }
+    if (made.madeShell) await shells.put(made.madeShell.key, made.madeShell.bytes);
+  };
   const cardJob = (view: CardView, file: string, label = file): PdfJob => ({
     file,
     label,
     notes: 'card',
-    key: cardPdfKey({ viewHash: hashOf(view), author, sourceDateEpoch: epoch, renderVersion }),
+    key: keyOf(view),
     async render() {
       if (pool) {
         const { result, ms } = await pool.run({
@@ -114,7 +144,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     path.join(SET_CARDS_DIR, card.page.paper, card.paths.pdfFile);
   const setJobs: PdfJob[] = data.sets.map((set) => {
     const members = setCards(set, data);
-    const input: Omit<SetPdfInput, 'cardPdfs'> = {
+    const input: Omit<SetPdfInput, 'cardPdfs' | 'cardSegments'> = {
       set,
       cards: members.map(setCard),
       frontMatter: isBinderSet(set) ? frontMatterOf(set, data) : null,
@@ -124,6 +154,24 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       env,
       brand: data.site.brand,
     };
+    // The set's sheet is a PDF of its own (below): a new `sheet:` keeps the set's PDF.
+    const setOwn = { ...set, sheet: null };
+    // Counted as used (the sweep keeps them) in this thread, whoever reads them, so an edit
+    // a week on still finds the set's other pages converted.
+    const segmentKeys = members.map(keyOf);
+    for (const key of segmentKeys) segments.file(key);
+    const shellKey = setShellKey({
+      set: setOwn,
+      cards: input.cards,
+      frontMatter: input.frontMatter,
+      page: input.page,
+      author,
+      builtOn: input.builtOn,
+      sourceDateEpoch: epoch,
+      renderVersion,
+      brand: input.brand ?? null,
+    });
+    shells.file(shellKey);
     const cardFiles = members.map((card) => {
       if (card.page.paper === sitePaper) return path.join(siteDir, card.paths.pdfFile);
       const file = setPaperFile(card);
@@ -136,8 +184,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       label: set.paths.pdfFile,
       notes: null,
       key: setPdfKey({
-        // The set's sheet is a PDF of its own (below): a new `sheet:` keeps the set's PDF.
-        set: { ...set, sheet: null },
+        set: setOwn,
         cardHashes: members.map(hashOf),
         frontMatter: input.frontMatter,
         page: input.page,
@@ -148,14 +195,20 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
         brand: input.brand ?? null,
       }),
       async render() {
+        const source = { dir: segments.dir, keys: segmentKeys, shellKey };
+        let made: AssembledSet;
+        let ms: number;
         if (pool) {
-          const { result, ms } = await pool.run({ kind: 'set-pdf', input, cardFiles });
-          return { ...result, ms };
+          const timed = await pool.run({ kind: 'set-pdf', input, cardFiles, segments: source });
+          made = timed.result;
+          ms = timed.ms;
+        } else {
+          const started = performance.now();
+          made = await assembleSet(input, cardFiles, source);
+          ms = performance.now() - started;
         }
-        const started = performance.now();
-        const cardPdfs = await Promise.all(cardFiles.map((file) => readFile(file)));
-        const pdf = await setPdf({ ...input, cardPdfs });
-        return { bytes: pdf.bytes, pages: pdf.pages, ms: performance.now() - started };
+        await cacheParts(made);
+        return { bytes: made.bytes, pages: made.pages, ms };
       },
     };
   });

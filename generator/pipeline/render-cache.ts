@@ -8,6 +8,9 @@
  *                                 code version and the site data every page shows
  *   <cacheDir>/pdfs/<key>.pdf     a card's or a set's PDF, keyed by the hashes of the
  *                                 views it is drawn from and the render code version
+ *   <cacheDir>/pdfs/<key>.page.json  a card page in a set's object form, under its card
+ *                                 PDF's key (set-assembly.ts, render/pdf/merge.ts)
+ *   <cacheDir>/pdfs/<key>.shell  a set's own pages and placeholders (setShellKey)
  *
  * A view's hash is sha256 over its cache text, so equal views give equal page and PDF
  * keys whatever made them. What a build did not use is swept after a week (file-cache.ts);
@@ -177,6 +180,39 @@ export function setPdfKey(input: {
       brand: input.brand ?? null,
       set: input.set,
       cards: input.cardHashes,
+      front: input.frontMatter,
+      page: input.page,
+      author: input.author,
+      builtOn: input.builtOn,
+      epoch: input.sourceDateEpoch ?? null,
+      code: input.renderVersion,
+    }),
+  );
+}
+
+/**
+ * Key of a set's shell (binder.ts setShell: its own pages and a placeholder per card):
+ * everything setPdf reads but the card PDFs, so an edit that leaves the cards' titles,
+ * refusals and paper as they were keeps the shell.
+ */
+export function setShellKey(input: {
+  readonly set: unknown;
+  readonly cards: unknown;
+  readonly frontMatter: unknown;
+  readonly page: unknown;
+  readonly author: string;
+  readonly builtOn: string;
+  readonly sourceDateEpoch: string | undefined;
+  readonly renderVersion: string;
+  readonly brand?: unknown;
+}): string {
+  return sha256(
+    stableJson({
+      format: RENDER_CACHE_FORMAT,
+      kind: 'set-shell',
+      brand: input.brand ?? null,
+      set: input.set,
+      cards: input.cards,
       front: input.frontMatter,
       page: input.page,
       author: input.author,

@@ -8,7 +8,13 @@
  */
 import { describe, expect, it } from 'vitest';
 import { openPdf } from '../../generator/render/pdf/document.ts';
-import { mergeCardPages } from '../../generator/render/pdf/merge.ts';
+import {
+  decodeSegment,
+  encodeSegment,
+  mergeCardPages,
+  pageSegment,
+  type CardGraft,
+} from '../../generator/render/pdf/merge.ts';
 import { PdfFile } from '../../generator/render/pdf/pdf-file.ts';
 import {
   intOf,
@@ -18,7 +24,11 @@ import {
   type PdfDict,
   type PdfValue,
 } from '../../generator/render/pdf/pdf-syntax.ts';
+import { describeWithTools, runTool } from './poppler.ts';
 import { readPdf, squash, structNodes } from './read-pdf.ts';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 
 const DATE = new Date(Date.UTC(2024, 4, 1));
 const A6: [number, number] = [297.64, 419.53];
@@ -254,5 +264,116 @@ describe('mergeCardPages(shell, grafts)', () => {
     await expect(async () =>
       mergeCardPages(await shell(1), [{ page: 1, pdf: two }]),
     ).rejects.toThrow(/2 pages, not one/);
+  });
+});
+
+/** A card page's segment as the cache holds it: encoded, then read back for its PDF. */
+const cached = (pdf: Uint8Array) => decodeSegment(encodeSegment(pageSegment(pdf), pdf), pdf);
+
+/** The set of `pdfs` in placeholder pages 1…n, from their PDFs alone or with segments. */
+async function setOf(pdfs: readonly Uint8Array[], segments?: readonly unknown[]) {
+  const grafts: CardGraft[] = pdfs.map((pdf, i) => ({
+    page: i + 1,
+    pdf,
+    ...(segments ? { segment: segments[i] as CardGraft['segment'] } : {}),
+  }));
+  return mergeCardPages(await shell(pdfs.length), grafts);
+}
+
+describe('a set from its cards’ cached segments (pageSegment, encodeSegment, decodeSegment)', () => {
+  // Own rule (merge.ts): a segment depends on its card PDF alone, so a set filled in from
+  // cached segments is, byte for byte, the set merged from the card PDFs.
+  let a: Buffer, b: Buffer, c: Buffer;
+  const text = async (bytes: Uint8Array) => (await readPdf(bytes)).text.map(squash);
+
+  it('reads back what it wrote, and gives the bytes of the set merged from the PDFs', async () => {
+    a = await card(TRICKY, 'https://example.com/a');
+    b = await card('Card B', 'https://example.com/b');
+    c = await card('Łódź C', 'https://example.com/c');
+    const fresh = await setOf([a, b, c]);
+    const segments = [a, b, c].map(cached);
+    expect(segments.every((s) => s !== null)).toBe(true);
+    expect((await setOf([a, b, c], segments)).equals(fresh)).toBe(true);
+  });
+
+  it('puts a changed card’s new page in its place, the others from the cache', async () => {
+    const b2 = await card('Card B, edited', 'https://example.com/b2');
+    const cache = new Map([a, b, c].map((pdf) => [pdf, cached(pdf)]));
+    const incremental = await setOf([a, b2, c], [cache.get(a), null, cache.get(c)]);
+    expect(incremental.equals(await setOf([a, b2, c]))).toBe(true);
+    const pages = await text(incremental);
+    expect(pages[2]).toBe(squash('Card B, edited https://example.com/b2 3 / 4'));
+    expect(pages.join(' ')).not.toContain(squash('Card B https://example.com/b '));
+  });
+
+  it('leaves a removed card out and follows a new order', async () => {
+    const [sa, sb, sc] = [a, b, c].map(cached);
+    const removed = await setOf([a, c], [sa, sc]);
+    expect(removed.equals(await setOf([a, c]))).toBe(true);
+    expect(await text(removed)).toEqual([
+      'Frontpage',
+      squash(`${TRICKY} https://example.com/a 2 / 3`),
+      squash('Łódź C https://example.com/c 3 / 3'),
+    ]);
+    const reordered = await setOf([c, b, a], [sc, sb, sa]);
+    expect(reordered.equals(await setOf([c, b, a]))).toBe(true);
+    expect((await text(reordered)).slice(1)).toEqual([
+      squash('Łódź C https://example.com/c 2 / 4'),
+      squash('Card B https://example.com/b 3 / 4'),
+      squash(`${TRICKY} https://example.com/a 4 / 4`),
+    ]);
+    const read = await readPdf(reordered);
+    expect(read.outline.map((o) => o.page)).toEqual([0, 1, 2, 3]);
+    expect(read.links).toEqual([
+      [],
+      ['https://example.com/c'],
+      ['https://example.com/b'],
+      ['https://example.com/a'],
+    ]);
+  });
+
+  it('refuses a segment that is not its PDF’s: another card’s, another format, cut short', async () => {
+    const text = encodeSegment(pageSegment(a), a);
+    expect(decodeSegment(text, a)).not.toBeNull();
+    // b's bytes have another length and trailer (its /ID): the segment is not b's.
+    expect(decodeSegment(text, b)).toBeNull();
+    const otherId = Buffer.from(
+      a.toString('latin1').replace(/\/ID \[<[0-9a-f]/, '/ID [<x'),
+      'latin1',
+    );
+    expect(otherId.length).toBe(a.length);
+    expect(decodeSegment(text, otherId)).toBeNull();
+    expect(decodeSegment(text.replace('"format":1', '"format":0'), a)).toBeNull();
+    expect(decodeSegment(text.slice(0, text.length - 10), a)).toBeNull();
+    // Streams moved: the same length and trailer, but the offsets no longer fall on a stream.
+    const at = a.indexOf('stream\n') + 7;
+    const shifted = Buffer.concat([
+      a.subarray(0, at - 7),
+      Buffer.from(' '),
+      a.subarray(at - 7, at + 100),
+      a.subarray(at + 101),
+    ]);
+    expect(shifted.length).toBe(a.length);
+    expect(decodeSegment(text, shifted)).toBeNull();
+  });
+});
+
+describeWithTools(['qpdf'], 'a set from cached segments, read by qpdf', () => {
+  it('passes qpdf --check', async () => {
+    const pdfs = [
+      await card(TRICKY, 'https://example.com/a'),
+      await card('Card B', 'https://example.com/b'),
+    ];
+    const bytes = await setOf(pdfs, pdfs.map(cached));
+    const dir = await mkdtemp(path.join(tmpdir(), 'stovecard-segments-'));
+    try {
+      const file = path.join(dir, 'set.pdf');
+      await writeFile(file, bytes);
+      const run = runTool('qpdf', ['--check', file]);
+      expect(run.status, run.stdout + run.stderr).toBe(0);
+      expect(run.stdout).toContain('No syntax or stream encoding errors');
+    } finally {
+      await rm(dir, { recursive: true, force: true });
+    }
   });
 });

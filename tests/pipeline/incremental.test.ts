@@ -226,3 +226,118 @@ describe('a set none of whose cards changed', () => {
     }
   });
 });
+
+describe('a set re-assembled from its cards’ cached pages (set-assembly.ts)', () => {
+  // Own rule of the pipeline: each card page's segment is cached beside its PDF
+  // (<key>.page.json), each set's shell as <key>.shell; a set re-assembled from them
+  // has a clean build's bytes, and a damaged cache (set, segment or shell) costs a full
+  // assembly, never a wrong set.
+  it('converts only the new cards’ pages, and a damaged set or segment is made again', async () => {
+    const dir = await mkdtemp(path.join(tmpdir(), 'stovecard-segments-'));
+    try {
+      const contentDir = path.join(dir, 'content');
+      await writeCatalogue(contentDir, { pots: 1, coffees: 3, stoves: 2 }, 1, 'by-stove');
+      const cache = path.join(dir, 'cache');
+      const pdfCache = path.join(cache, 'pdfs');
+      const run = (out: string, extra: Partial<Parameters<typeof buildSite>[0]> = {}) =>
+        buildSite({
+          contentDir,
+          outDir: path.join(dir, out),
+          cacheDir: cache,
+          env: EPOCH,
+          workers: 0,
+          extraSteps: [sitePdfStep],
+          ...extra,
+        });
+      const segmentFiles = async () =>
+        (await readdir(pdfCache)).filter((name) => name.endsWith('.page.json')).sort();
+      const firstRun = await run('site');
+      const cardsInSets = new Set(
+        firstRun.data.sets.flatMap((set) => set.cards.map((c) => c.pdfFile)),
+      );
+      // One segment per card that a set holds (the inserts' set, the binder's too), and a
+      // shell per set.
+      expect((await segmentFiles()).length).toBe(cardsInSets.size);
+      const shellFiles = async () =>
+        (await readdir(pdfCache)).filter((name) => name.endsWith('.shell')).sort();
+      expect(await shellFiles()).toHaveLength(firstRun.data.sets.length);
+
+      const file = path.join(contentDir, 'coffees', 'coffee-02.yaml');
+      const yaml = await readFile(file, 'utf8');
+      await writeFile(file, yaml.replace(/^permeability_m2: .*$/m, 'permeability_m2: 1.37e-12'));
+      const before = new Set(await segmentFiles());
+      const mtimes = async (names: Iterable<string>) =>
+        Promise.all([...names].map(async (n) => (await stat(path.join(pdfCache, n))).mtimeMs));
+      const beforeTimes = await mtimes(before);
+      const again = await run('site');
+      const edited = [...again.data.stationCards, ...again.data.insertCards].filter(
+        (c) => c.coffeeId === 'coffee-02' && cardsInSets.has(c.paths.pdfFile),
+      );
+      expect(edited.length).toBeGreaterThan(0);
+      const added = (await segmentFiles()).filter((name) => !before.has(name));
+      expect(added).toHaveLength(edited.length);
+      // The others were read, not made again (nor written).
+      expect(await mtimes(before)).toEqual(beforeTimes);
+
+      const clean = path.join(dir, 'clean');
+      await buildSite({
+        contentDir,
+        outDir: clean,
+        cacheDir: path.join(dir, 'clean-cache'),
+        env: EPOCH,
+        workers: 0,
+        extraSteps: [pdfBuildStep],
+      });
+      const setFiles = again.data.sets.map((set) => set.paths.pdfFile);
+      const same = async () => {
+        for (const set of setFiles) {
+          const built = await readFile(path.join(dir, 'site', set));
+          expect(built.equals(await readFile(path.join(clean, set))), set).toBe(true);
+        }
+      };
+      await same();
+
+      // Damage: every segment's text rewritten as another format, its check file to match
+      // (it passes the check but is not a segment); one more cut short (fails the check);
+      // and every set's cached PDF (the files of more than one page) cut short, so each set
+      // is assembled again.
+      const { checkText } = await import('../../generator/pipeline/file-cache.ts');
+      const segments = await segmentFiles();
+      for (const name of segments.slice(1)) {
+        const target = path.join(pdfCache, name);
+        const text = (await readFile(target, 'utf8')).replace('"format":1', '"format":99');
+        await writeFile(target, text);
+        await writeFile(`${target}.sha256`, checkText(Buffer.from(text)));
+      }
+      // A shell that passes its check but is no PDF.
+      const shell = path.join(pdfCache, (await shellFiles())[0]!);
+      await writeFile(shell, 'not a PDF');
+      await writeFile(`${shell}.sha256`, checkText(Buffer.from('not a PDF')));
+      const cut = path.join(pdfCache, segments[0]!);
+      await writeFile(cut, (await readFile(cut)).subarray(0, 100));
+      let cutSets = 0;
+      for (const name of await readdir(pdfCache)) {
+        if (!name.endsWith('.pdf')) continue;
+        const bytes = await readFile(path.join(pdfCache, name));
+        const pages = Number(/\/Count (\d+)/.exec(bytes.toString('latin1'))?.[1] ?? 0);
+        if (pages < 2) continue;
+        await writeFile(path.join(pdfCache, name), bytes.subarray(0, bytes.length - 50));
+        cutSets += 1;
+      }
+      expect(cutSets).toBeGreaterThanOrEqual(setFiles.length);
+      const repaired = await run('site');
+      expect(repaired.stats.pdfs.made).toBe(setFiles.length);
+      expect(repaired.damagedCache.pdfs).toBeGreaterThanOrEqual(setFiles.length);
+      await same();
+      // The damaged segments of the sets' cards were made again and cached in their place
+      // (the edited cards' old segments, which no set uses now, stay damaged until swept).
+      const texts = await Promise.all(
+        (await segmentFiles()).map((name) => readFile(path.join(pdfCache, name), 'utf8')),
+      );
+      expect(texts).toHaveLength(cardsInSets.size + edited.length);
+      expect(texts.filter((text) => text.includes('"format":1,'))).toHaveLength(cardsInSets.size);
+    } finally {
+      await rm(dir, { recursive: true, force: true });
+    }
+  });
+});

@@ -35,7 +35,8 @@ import {
 import { cardTitle, pageBox, type CardView } from './card.ts';
 import { openPdf, pageSizePt, pdfDate } from './document.ts';
 import type { Block, PageBox } from './layout.ts';
-import { mergeCardPages } from './merge.ts';
+import { mergeCardPages, type PageSegment } from './merge.ts';
+import { PdfFile } from './pdf-file.ts';
 import { drawPageNumber, flowPages, type FlowFrame, type FlowItem } from './pages.ts';
 import { Pen } from './pen.ts';
 import { cardMarginPt, INK, RULE_SOFT, textPageStyle, type TextPageStyle } from './style.ts';
@@ -65,6 +66,12 @@ export interface SetPdfInput {
   readonly cards: readonly SetCard[];
   /** The cards' own PDFs (card.ts cardPdf's bytes), in the same order. */
   readonly cardPdfs: readonly Uint8Array[];
+  /**
+   * The cards' pages already in the set's object form (merge.ts pageSegment, as cached
+   * beside their PDFs), in the same order; a missing one is made from its PDF. The bytes
+   * are the same either way.
+   */
+  readonly cardSegments?: readonly (PageSegment | null)[];
   /** Present for a training binder. */
   readonly frontMatter: FrontMatter | null;
   /** Paper of the text pages (the site's). */
@@ -80,6 +87,15 @@ export interface SetPdf {
   readonly bytes: Buffer;
   readonly pages: number;
   /** Cover, contents and the binder's text pages (0 without front matter). */
+  readonly frontMatterPages: number;
+  /** The shell the cards went into (setShell), for a cache keyed by all but the cards' PDFs. */
+  readonly shell: Buffer;
+}
+
+/** A set's shell: its own pages, and a placeholder page per card (to merge the cards into). */
+export interface SetShell {
+  readonly bytes: Buffer;
+  readonly pages: number;
   readonly frontMatterPages: number;
 }
 
@@ -314,8 +330,42 @@ function contentsText(card: SetCard, language: string): string {
   return card.refusal ? words.refused(line, voice.words.card.index.refused) : line;
 }
 
-/** A set's cards in one PDF; with front matter, the training binder. */
-export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
+/**
+ * A set's cards in one PDF; with front matter, the training binder. `shell`: the bytes
+ * setShell drew before for the same input but the card PDFs (a cached one), else drawn.
+ */
+export async function setPdf(input: SetPdfInput, shell: Uint8Array | null = null): Promise<SetPdf> {
+  const drawn: SetShell = shell ? shellOf(shell, input.cards.length) : await setShell(input);
+  const { cardPdfs } = input;
+  if (cardPdfs.length !== input.cards.length)
+    throw new Error(`PDF: ${input.cards.length} cards in the set and ${cardPdfs.length} card PDFs`);
+  const segments = input.cardSegments;
+  if (segments && segments.length !== cardPdfs.length)
+    throw new Error(`PDF: ${cardPdfs.length} card PDFs and ${segments.length} card segments`);
+  const grafts = cardPdfs.map((pdf, i) => ({
+    page: drawn.frontMatterPages + i,
+    pdf,
+    segment: segments?.[i] ?? null,
+  }));
+  return {
+    bytes: mergeCardPages(drawn.bytes, grafts),
+    pages: drawn.pages,
+    frontMatterPages: drawn.frontMatterPages,
+    shell: drawn.bytes,
+  };
+}
+
+/** A shell drawn before, with its page counts (the cards' placeholders are the last pages). */
+function shellOf(bytes: Uint8Array, cards: number): SetShell {
+  const pages = new PdfFile(bytes).pages().length;
+  if (pages < cards) throw new Error(`PDF: a set shell of ${pages} pages for ${cards} cards`);
+  return { bytes: Buffer.from(bytes), pages, frontMatterPages: pages - cards };
+}
+
+/** The set's own pages drawn by pdfkit, and a placeholder page per card. */
+export async function setShell(
+  input: Omit<SetPdfInput, 'cardPdfs' | 'cardSegments'>,
+): Promise<SetShell> {
   const [widthPt, heightPt] = pageSizePt(input.page.widthMm, input.page.heightMm);
   const textPage: PageBox = { widthPt, heightPt };
   const st = textPageStyle(input.page.paper);
@@ -441,10 +491,5 @@ export async function setPdf(input: SetPdfInput): Promise<SetPdf> {
     drawPageNumber(pen, page, cardMarginPt(card.page.paper), number, st.pageNumber);
     doc.outline.addItem(cardTitle(card));
   }
-  const shell = await open.finish();
-  const { cardPdfs } = input;
-  if (cardPdfs.length !== input.cards.length)
-    throw new Error(`PDF: ${input.cards.length} cards in the set and ${cardPdfs.length} card PDFs`);
-  const grafts = cardPdfs.map((pdf, i) => ({ page: frontMatterPages + i, pdf }));
-  return { bytes: mergeCardPages(shell, grafts), pages: pageNo, frontMatterPages };
+  return { bytes: await open.finish(), pages: pageNo, frontMatterPages };
 }

@@ -14,16 +14,20 @@ import { createHash } from 'node:crypto';
 import { fileId } from './document.ts';
 import {
   atom,
+  fillTemplate,
   intOf,
   isDict,
   isRef,
   nameOf,
   PdfLexer,
   ref,
-  renumberedText,
+  refText,
+  renumberedTemplate,
+  writeTemplate,
   writeValue,
   type PdfDict,
   type PdfRef,
+  type PdfTemplate,
   type PdfValue,
 } from './pdf-syntax.ts';
 
@@ -92,19 +96,25 @@ export class PdfFile {
   }
 
   /**
-   * Object `num` as text with its references renumbered (pdf-syntax.ts renumberedText),
-   * when it is not a stream and holds none of the names in `stop`; null otherwise.
+   * Object `num` as a template of its text with its references renumbered (pdf-syntax.ts
+   * renumberedTemplate), when it is not a stream and holds none of the names in `stop`;
+   * null otherwise.
    */
-  renumberedText(
+  renumberedTemplate(
     num: number,
     renumber: (num: number) => number,
     stop: ReadonlySet<string>,
-  ): string | null {
+  ): PdfTemplate | null {
     const lexer = this.body(num);
-    const copied = renumberedText(this.text, lexer.pos, renumber, stop);
+    const copied = renumberedTemplate(this.text, lexer.pos, renumber, stop);
     if (!copied) return null;
     lexer.pos = copied.end;
-    return lexer.keyword('endobj') ? copied.text : null;
+    return lexer.keyword('endobj') ? copied.template : null;
+  }
+
+  /** Where `stream` (an object's stream, as `object` gives it) starts in the file's bytes. */
+  offsetOf(stream: Uint8Array): number | null {
+    return stream.buffer === this.bytes.buffer ? stream.byteOffset - this.bytes.byteOffset : null;
   }
 
   /** Object `num`; an error when the file has none. */
@@ -173,8 +183,48 @@ interface Written {
   readonly digest: string | null;
 }
 
+/**
+ * The content hash of a shareable object: its text with each reference replaced by the
+ * hash of the object it points to, and its stream's bytes; null when it refers to anything
+ * not shareable (that object's identity matters, so this one's does too) or to a key. The
+ * same object has the same hash whatever its references' numbers, in whichever file it
+ * was numbered (a set, or a card page's segment in merge.ts): shared objects dedupe
+ * across both.
+ */
+export function contentDigest(
+  template: PdfTemplate,
+  stream: Uint8Array | null,
+  digestOf: (slot: number) => string | null,
+): string | null {
+  const hash = createHash('sha256');
+  const { pieces, slots } = template;
+  hash.update(pieces[0]!, 'latin1');
+  for (let i = 0; i < slots.length; i++) {
+    const child = slots[i]! < 1 ? null : digestOf(slots[i]!);
+    if (child === null) return null;
+    hash.update(`{${child}}`, 'latin1').update(pieces[i + 1]!, 'latin1');
+  }
+  if (stream) hash.update(stream);
+  return hash.digest('hex');
+}
+
+/** Where an object's copy goes: a file (PdfWriter) or a card page's segment (merge.ts). */
+export interface ObjectSink {
+  /** A number for an object added later with `add(…, num)`. */
+  reserve(): number;
+  add(
+    value: PdfValue,
+    stream: Uint8Array | null,
+    options?: { num?: number; share?: boolean },
+  ): number;
+  /** Adds an object whose text is a template already (never shared). */
+  addTemplate(template: PdfTemplate, num?: number): number;
+  /** The content hash of shared object `num`. */
+  digest(num: number): string;
+}
+
 /** A new PDF file, object by object; `finish` writes the cross-reference table and trailer. */
-export class PdfWriter {
+export class PdfWriter implements ObjectSink {
   private readonly objects: (Written | null)[] = [];
   private readonly shared = new Map<string, number>();
 
@@ -197,29 +247,44 @@ export class PdfWriter {
       if (!isDict(value)) throw new Error('PDF: a stream needs a dictionary');
       value.set('Length', atom(String(stream.length)));
     }
-    const head = writeValue(value);
+    const template = writeTemplate(value);
     const share = options.share === true && options.num === undefined;
-    let digest: string | null = null;
-    if (share) {
-      const hash = createHash('sha256').update(head, 'latin1');
-      if (stream) hash.update(stream);
-      digest = hash.digest('hex');
+    const digest = share
+      ? contentDigest(template, stream, (n) => this.objects[n - 1]?.digest ?? null)
+      : null;
+    if (digest !== null) {
       const known = this.shared.get(digest);
       if (known !== undefined) return known;
     }
     const num = options.num ?? this.reserve();
-    if (this.objects[num - 1] !== null) throw new Error(`PDF: object ${num} written twice`);
-    this.objects[num - 1] = { head, stream, digest };
-    if (digest) this.shared.set(digest, num);
+    this.put(num, fillTemplate(template, refText), stream, digest);
     return num;
   }
 
   /** Adds an object written as text already (never shared), at `num` or a new number. */
   addText(head: string, num?: number): number {
     const target = num ?? this.reserve();
-    if (this.objects[target - 1] !== null) throw new Error(`PDF: object ${target} written twice`);
-    this.objects[target - 1] = { head, stream: null, digest: null };
+    this.put(target, head, null, null);
     return target;
+  }
+
+  addTemplate(template: PdfTemplate, num?: number): number {
+    return this.addText(fillTemplate(template, refText), num);
+  }
+
+  /** The number of the shared object of this content hash, if one was added. */
+  sharedNumber(digest: string): number | undefined {
+    return this.shared.get(digest);
+  }
+
+  /**
+   * Writes object `num` (reserved) as it is: its text, stream (its /Length in the text
+   * already) and content hash when it may be shared (merge.ts, filling a segment in).
+   */
+  put(num: number, head: string, stream: Uint8Array | null, digest: string | null): void {
+    if (this.objects[num - 1] !== null) throw new Error(`PDF: object ${num} written twice`);
+    this.objects[num - 1] = { head, stream, digest };
+    if (digest !== null && !this.shared.has(digest)) this.shared.set(digest, num);
   }
 
   /** The content hash of shared object `num` (its text and stream bytes). */

@@ -17,12 +17,22 @@ export interface PdfRef {
   readonly gen: number;
 }
 
+/**
+ * A parent-tree key not numbered yet (merge.ts, a card page's segment): the `index`-th
+ * key of its card, written as an integer once the set gives the card its first key.
+ */
+export interface PdfKey {
+  readonly kind: 'key';
+  readonly index: number;
+}
+
 export type PdfDict = Map<string, PdfValue>;
 
-export type PdfValue = PdfAtom | PdfRef | PdfValue[] | PdfDict;
+export type PdfValue = PdfAtom | PdfRef | PdfKey | PdfValue[] | PdfDict;
 
 export const atom = (text: string): PdfAtom => ({ kind: 'atom', text });
 export const ref = (num: number, gen = 0): PdfRef => ({ kind: 'ref', num, gen });
+export const key = (index: number): PdfKey => ({ kind: 'key', index });
 
 export function isDict(value: PdfValue | undefined): value is PdfDict {
   return value instanceof Map;
@@ -211,6 +221,31 @@ function literalEnd(text: string, start: number): number {
 }
 
 /**
+ * Object text with holes: `pieces[0] slot[0] pieces[1] … pieces[n]`. A slot ≥ 1 is a
+ * reference (`N 0 R`, N the slot), a slot < 0 the parent-tree key of index −1 − slot
+ * (written as an integer). merge.ts keeps a card page's objects in this form (its
+ * segment), so a set fills in the numbers without reading the card again.
+ */
+export interface PdfTemplate {
+  readonly pieces: readonly string[];
+  readonly slots: readonly number[];
+}
+
+/** The template's text with each slot as `fill` writes it. */
+export function fillTemplate(template: PdfTemplate, fill: (slot: number) => string): string {
+  const { pieces, slots } = template;
+  let out = pieces[0]!;
+  for (let i = 0; i < slots.length; i++) out += fill(slots[i]!) + pieces[i + 1]!;
+  return out;
+}
+
+/** A reference slot as `N 0 R`; a key slot is an error (only segments hold keys). */
+export const refText = (slot: number): string => {
+  if (slot < 1) throw new Error(`PDF: a parent-tree key (slot ${slot}) where a number belongs`);
+  return `${slot} 0 R`;
+};
+
+/**
  * The value at `pos` copied as text, each reference `N G R` in it replaced by
  * `renumber(N)` (generation 0), all else (strings, names, numbers, spacing) byte for
  * byte; null, with nothing more renumbered, as soon as a name in `stop` appears (the
@@ -224,10 +259,22 @@ export function renumberedText(
   renumber: (num: number) => number,
   stop: ReadonlySet<string>,
 ): { text: string; end: number } | null {
+  const copied = renumberedTemplate(text, pos, renumber, stop);
+  return copied && { text: fillTemplate(copied.template, refText), end: copied.end };
+}
+
+/** renumberedText as a template: the renumbered references are its slots. */
+export function renumberedTemplate(
+  text: string,
+  pos: number,
+  renumber: (num: number) => number,
+  stop: ReadonlySet<string>,
+): { template: PdfTemplate; end: number } | null {
   const lexer = new PdfLexer(text, pos);
   lexer.skipSpace();
   const start = lexer.pos;
-  let out = '';
+  const pieces: string[] = [];
+  const slots: number[] = [];
   let copied = start;
   let depth = 0;
   do {
@@ -265,14 +312,16 @@ export function renumberedText(
         const after = lexer.pos;
         lexer.skipSpace();
         if (isInteger(lexer.regular()) && lexer.keyword('R')) {
-          out += `${text.slice(copied, i)}${renumber(Number(word))} 0 R`;
+          pieces.push(text.slice(copied, i));
+          slots.push(renumber(Number(word)));
           copied = lexer.pos;
         } else lexer.pos = after;
       }
     }
   } while (depth > 0);
   if (depth < 0) return null;
-  return { text: out + text.slice(copied, lexer.pos), end: lexer.pos };
+  pieces.push(text.slice(copied, lexer.pos));
+  return { template: { pieces, slots }, end: lexer.pos };
 }
 
 /** The value as PDF text (latin1). */
@@ -283,5 +332,44 @@ export function writeValue(value: PdfValue): string {
     for (const [key, item] of value) out += `/${key} ${writeValue(item)}\n`;
     return `${out}>>`;
   }
+  if (value.kind === 'key') throw new Error('PDF: a parent-tree key not numbered yet');
   return value.kind === 'ref' ? `${value.num} ${value.gen} R` : value.text;
+}
+
+/**
+ * The value as a template (the same text as writeValue once filled): each reference is a
+ * slot (its number; generation 0, as merge.ts writes every object), each PdfKey a key slot.
+ */
+export function writeTemplate(value: PdfValue): PdfTemplate {
+  const pieces: string[] = [];
+  const slots: number[] = [];
+  let text = '';
+  const walk = (v: PdfValue): void => {
+    if (Array.isArray(v)) {
+      text += '[';
+      v.forEach((item, i) => {
+        if (i > 0) text += ' ';
+        walk(item);
+      });
+      text += ']';
+    } else if (isDict(v)) {
+      text += '<<';
+      for (const [name, item] of v) {
+        text += `/${name} `;
+        walk(item);
+        text += '\n';
+      }
+      text += '>>';
+    } else if (v.kind === 'atom') text += v.text;
+    else {
+      if (v.kind === 'ref' && v.gen !== 0)
+        throw new Error(`PDF: reference ${v.num} ${v.gen} R is not of generation 0`);
+      pieces.push(text);
+      slots.push(v.kind === 'ref' ? v.num : -1 - v.index);
+      text = '';
+    }
+  };
+  walk(value);
+  pieces.push(text);
+  return { pieces, slots };
 }
