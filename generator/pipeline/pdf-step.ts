@@ -160,9 +160,9 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
     // a week on still finds the set's other pages converted.
     const segmentKeys = members.map(keyOf);
     for (const key of segmentKeys) segments.file(key);
-    const shellKey = setShellKey({
+    // What the set's PDF and its shell are both keyed by: all the set reads but its cards.
+    const keyed = {
       set: setOwn,
-      cards: input.cards,
       frontMatter: input.frontMatter,
       page: input.page,
       author,
@@ -170,7 +170,8 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       sourceDateEpoch: epoch,
       renderVersion,
       brand: input.brand ?? null,
-    });
+    };
+    const shellKey = setShellKey({ ...keyed, cards: input.cards });
     shells.file(shellKey);
     const cardFiles = members.map((card) => {
       if (card.page.paper === sitePaper) return path.join(siteDir, card.paths.pdfFile);
@@ -183,17 +184,7 @@ export async function sitePdfStep(context: BuildContext): Promise<void> {
       file: set.paths.pdfFile,
       label: set.paths.pdfFile,
       notes: null,
-      key: setPdfKey({
-        set: setOwn,
-        cardHashes: members.map(hashOf),
-        frontMatter: input.frontMatter,
-        page: input.page,
-        author,
-        builtOn: input.builtOn,
-        sourceDateEpoch: epoch,
-        renderVersion,
-        brand: input.brand ?? null,
-      }),
+      key: setPdfKey({ ...keyed, cardHashes: members.map(hashOf) }),
       async render() {
         const source = { dir: segments.dir, keys: segmentKeys, shellKey };
         let made: AssembledSet;
