@@ -76,6 +76,8 @@ export interface SetView {
   readonly cards: readonly CardLink[];
   /** How many cards were left out for getting no recipe, and why; null when none. */
   readonly leftOut: string | null;
+  /** The set page's line before the link to the set's PDF. */
+  readonly pdfLine: string;
   /**
    * A training binder's exercises on its own cards (render/exercises.ts), on its set page
    * and in its PDF; null for any other set.
@@ -329,6 +331,7 @@ export function setViews(
         return insertLink(card);
       }),
       leftOut: voice.words.print.leftOut(set.leftOut ?? []),
+      pdfLine: voice.words.print.setPdf(set.binder === true),
       exercises: set.binder
         ? exercisesView(set.cardSlugs.map(stationCard), movesFor(set.language), voice)
         : null,

@@ -636,6 +636,10 @@ const print: Messages['print'] = {
     'half-letter': 'media carta',
     '4x6in': '4 × 6 in',
   },
+  setPdf: (binder: boolean): string =>
+    binder
+      ? 'Todo el manual en un PDF: sus páginas de formación y luego las fichas.'
+      : 'Todas las fichas de este juego en un PDF, una por página.',
   sheetPdf: 'Hojas (PDF)',
   sheetLink: (up: number, paper: string): string =>
     `Para una impresora de escritorio: ${up} fichas en cada hoja ${paper}, con marcas de corte.`,

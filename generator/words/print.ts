@@ -76,9 +76,14 @@ export const setPrintWords = {
     'half-letter': 'half-letter',
     '4x6in': '4 × 6 in',
   } satisfies Record<PaperSize, string>,
-  /** A set page's line before the link to its sheet PDF (a set with `sheet:`). */
+  /** A set page's line before the link to the set's PDF (the link itself says "PDF"). */
+  setPdf: (binder: boolean): string =>
+    binder
+      ? 'The whole binder in one PDF: its training pages, then the cards.'
+      : 'Every card of this set in one PDF, one card to a page.',
   /** The link's own text (the set's PDF link beside it says "PDF"). */
   sheetPdf: 'Sheets (PDF)',
+  /** A set page's line before the link to its sheet PDF (a set with `sheet:`). */
   sheetLink: (up: number, paper: string): string =>
     `For a desktop printer: ${up} cards to each ${paper} sheet, with crop marks to cut along.`,
   /**

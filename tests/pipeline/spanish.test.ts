@@ -200,6 +200,19 @@ describe('a Spanish build', () => {
     expect(englishHits(englishCard).length).toBeGreaterThan(ENGLISH_HEADINGS.length / 2);
   });
 
+  it('a set page says its PDF holds the set’s cards (not “this card”), in the set’s language', async () => {
+    const barra = pageText(await readFile(path.join(outDir, 'sets/barra/index.html'), 'utf8'));
+    const english = pageText(
+      await readFile(path.join(outDir, 'sets/english-bar/index.html'), 'utf8'),
+    );
+    expect(barra).toContain(es.print.setPdf(false));
+    expect(english).toContain(en.print.setPdf(false));
+    for (const page of [barra, english]) {
+      expect(page).not.toContain(es.card.nav.print);
+      expect(page).not.toContain(en.card.nav.print);
+    }
+  });
+
   it('a station card has the Spanish headings, cautions and a decimal comma, and no English heading', async () => {
     const text = pageText(await readFile(path.join(outDir, SPANISH_CARD, 'index.html'), 'utf8'));
     for (const heading of [

@@ -158,6 +158,7 @@ const SAMPLES: Record<string, readonly (readonly unknown[])[]> = {
   'plan.coolCup': [['12 %']],
   'plan.smallFill': [[]],
   'print.leftOut': [[['fill-above-valve']], [['no-delivery', 'no-delivery', 'no-plan-fits']]],
+  'print.setPdf': [[true], [false]],
   'print.sheetLink': [
     [2, 'A4'],
     [8, 'US letter'],
