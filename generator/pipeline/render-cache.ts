@@ -156,14 +156,9 @@ export function cardPdfKey(input: {
   );
 }
 
-/**
- * Key of a set's PDF: everything setPdf reads, its cards by their views' hashes (which,
- * with the author, the date setting and the code, are the keys of the card PDFs it is
- * assembled from).
- */
-export function setPdfKey(input: {
+/** What a set's PDF and its shell are both keyed by: all the set reads but its cards. */
+export interface SetKeyed {
   readonly set: unknown;
-  readonly cardHashes: readonly string[];
   readonly frontMatter: unknown;
   readonly page: unknown;
   readonly author: string;
@@ -172,14 +167,16 @@ export function setPdfKey(input: {
   readonly renderVersion: string;
   /** The brand the binder's cover shows. */
   readonly brand?: unknown;
-}): string {
+}
+
+function setKey(kind: 'set-pdf' | 'set-shell', input: SetKeyed, cards: unknown): string {
   return sha256(
     stableJson({
       format: RENDER_CACHE_FORMAT,
-      kind: 'set-pdf',
+      kind,
       brand: input.brand ?? null,
       set: input.set,
-      cards: input.cardHashes,
+      cards,
       front: input.frontMatter,
       page: input.page,
       author: input.author,
@@ -191,34 +188,19 @@ export function setPdfKey(input: {
 }
 
 /**
+ * Key of a set's PDF: everything setPdf reads, its cards by their views' hashes (which,
+ * with the author, the date setting and the code, are the keys of the card PDFs it is
+ * assembled from).
+ */
+export function setPdfKey(input: SetKeyed & { readonly cardHashes: readonly string[] }): string {
+  return setKey('set-pdf', input, input.cardHashes);
+}
+
+/**
  * Key of a set's shell (binder.ts setShell: its own pages and a placeholder per card):
  * everything setPdf reads but the card PDFs, so an edit that leaves the cards' titles,
  * refusals and paper as they were keeps the shell.
  */
-export function setShellKey(input: {
-  readonly set: unknown;
-  readonly cards: unknown;
-  readonly frontMatter: unknown;
-  readonly page: unknown;
-  readonly author: string;
-  readonly builtOn: string;
-  readonly sourceDateEpoch: string | undefined;
-  readonly renderVersion: string;
-  readonly brand?: unknown;
-}): string {
-  return sha256(
-    stableJson({
-      format: RENDER_CACHE_FORMAT,
-      kind: 'set-shell',
-      brand: input.brand ?? null,
-      set: input.set,
-      cards: input.cards,
-      front: input.frontMatter,
-      page: input.page,
-      author: input.author,
-      builtOn: input.builtOn,
-      epoch: input.sourceDateEpoch ?? null,
-      code: input.renderVersion,
-    }),
-  );
+export function setShellKey(input: SetKeyed & { readonly cards: unknown }): string {
+  return setKey('set-shell', input, input.cards);
 }
