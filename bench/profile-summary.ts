@@ -90,7 +90,7 @@ async function profileFiles(target: string): Promise<string[]> {
 async function main(argv: readonly string[]): Promise<void> {
   const topAt = argv.indexOf('--top');
   const top = topAt >= 0 ? Number(argv[topAt + 1]) : 25;
-  const targets = argv.filter((a, i) => !a.startsWith('--') && i !== topAt + 1);
+  const targets = argv.filter((a, i) => !a.startsWith('--') && (topAt < 0 || i !== topAt + 1));
   if (targets.length === 0) {
     throw new Error('usage: profile-summary <file.cpuprofile | folder>... [--top N]');
   }
